@@ -1,0 +1,258 @@
+//! Command-line interface: clap definitions and the headless commands.
+
+use std::io::{self, Write};
+use std::path::PathBuf;
+
+use clap::{Parser, Subcommand};
+use serde::Serialize;
+
+use plankwise::catalog::{Catalog, DEMO_US, Problems, Severity, SectionSummary};
+use plankwise::material::{Aggregate, Mix, Modulus};
+use plankwise::report;
+use plankwise::section::Composite;
+use plankwise::units::{Length, Stress, UnitWeight};
+
+/// Preliminary selection of precast prestressed floor and roof members.
+#[derive(Debug, Parser)]
+#[command(name = "plankwise", version, about, long_about = None)]
+struct Args {
+    #[command(subcommand)]
+    command: Option<Command>,
+}
+
+#[derive(Debug, Subcommand)]
+enum Command {
+    /// Check a catalog file: print a short summary, or every problem (exit 2).
+    Validate {
+        /// Catalog file (TOML).
+        file: PathBuf,
+    },
+    /// Print the exact section properties of every section in a catalog.
+    Sections {
+        /// Catalog file (TOML); the built-in demo catalog when omitted.
+        file: Option<PathBuf>,
+        /// Print JSON instead of a table (keys carry their units).
+        #[arg(long)]
+        json: bool,
+        /// Add a composite topping of this thickness, e.g. "2 in" or "50 mm".
+        #[arg(long, value_name = "THICKNESS")]
+        topping: Option<String>,
+        /// Mix id of the topping concrete (default: 4000 psi normalweight, 150 pcf).
+        #[arg(long, value_name = "MIX", requires = "topping")]
+        topping_mix: Option<String>,
+    },
+}
+
+/// Exit codes.
+const OK: i32 = 0;
+const BAD_INPUT: i32 = 2;
+
+/// Run the program; returns the exit code.
+pub fn run() -> i32 {
+    let args = match Args::try_parse() {
+        Ok(a) => a,
+        Err(e) => {
+            let code = if e.use_stderr() { BAD_INPUT } else { OK };
+            let _ = e.print();
+            return code;
+        }
+    };
+    let result = match args.command {
+        None => demo(),
+        Some(Command::Validate { file }) => validate(&file),
+        Some(Command::Sections {
+            file,
+            json,
+            topping,
+            topping_mix,
+        }) => sections(file, json, topping.as_deref(), topping_mix.as_deref()),
+    };
+    match result {
+        Ok(code) => code,
+        Err(Failure::Io(e)) if e.kind() == io::ErrorKind::BrokenPipe => OK,
+        Err(Failure::Io(e)) => {
+            eprintln!("plankwise: cannot write the output: {e}");
+            BAD_INPUT
+        }
+        Err(Failure::Input(p)) => {
+            eprintln!("{p}");
+            let n = p.error_count();
+            eprintln!("plankwise: {n} problem{} found; nothing was written", if n == 1 { "" } else { "s" });
+            BAD_INPUT
+        }
+        Err(Failure::Message(m)) => {
+            eprintln!("plankwise: {m}");
+            BAD_INPUT
+        }
+    }
+}
+
+enum Failure {
+    Io(io::Error),
+    Input(Problems),
+    Message(String),
+}
+
+impl From<io::Error> for Failure {
+    fn from(e: io::Error) -> Self {
+        Failure::Io(e)
+    }
+}
+impl From<Problems> for Failure {
+    fn from(p: Problems) -> Self {
+        Failure::Input(p)
+    }
+}
+
+fn load(file: Option<&PathBuf>) -> Result<(Catalog, String), Failure> {
+    match file {
+        Some(f) => Ok((Catalog::load(f)?, f.display().to_string())),
+        None => Ok((Catalog::from_str(DEMO_US, "demo-us.toml")?, "demo-us.toml (built in)".into())),
+    }
+}
+
+fn print_warnings(cat: &Catalog) {
+    for w in cat.warnings.iter().filter(|w| w.severity == Severity::Warning) {
+        eprintln!("{w}");
+    }
+}
+
+fn demo() -> Result<i32, Failure> {
+    let (cat, name) = load(None)?;
+    let mut out = io::stdout().lock();
+    writeln!(out, "plankwise {} — demo catalog (invented data)", env!("CARGO_PKG_VERSION"))?;
+    writeln!(out)?;
+    report::write_summary(&mut out, &cat, &name)?;
+    writeln!(out)?;
+    report::write_section_table(&mut out, &cat)?;
+    writeln!(out)?;
+    report::write_cautions(&mut out)?;
+    writeln!(out)?;
+    writeln!(out, "Try: plankwise sections catalog/demo-si.toml   ·   plankwise validate FILE   ·   plankwise --help")?;
+    Ok(OK)
+}
+
+fn validate(file: &PathBuf) -> Result<i32, Failure> {
+    let (cat, name) = load(Some(file))?;
+    print_warnings(&cat);
+    let mut out = io::stdout().lock();
+    let warnings = cat.warnings.iter().filter(|w| w.severity == Severity::Warning).count();
+    writeln!(
+        out,
+        "{name}: ok — '{}': {} sections, {} patterns, {} mixes, {warnings} warning(s)",
+        cat.meta.name,
+        cat.sections.len(),
+        cat.entry_count(),
+        cat.mixes.len()
+    )?;
+    Ok(OK)
+}
+
+#[derive(Serialize)]
+struct SectionJson {
+    #[serde(flatten)]
+    summary: SectionSummary,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    composite: Option<CompositeJson>,
+}
+
+#[derive(Serialize)]
+struct CompositeJson {
+    topping_in: f64,
+    topping_width_in: f64,
+    modular_ratio: f64,
+    area_in2: f64,
+    yb_in: f64,
+    ix_in4: f64,
+    sb_in3: f64,
+    st_precast_in3: f64,
+    st_topping_in3: f64,
+    depth_in: f64,
+}
+
+fn default_topping() -> Mix {
+    // Common practice, no source: cast-in-place topping of 4000 psi normalweight concrete.
+    Mix {
+        id: "topping (default)".into(),
+        fc: Stress::new(4000.0),
+        fci: Stress::new(4000.0),
+        unit_weight: UnitWeight::from_unit(150.0, "pcf"),
+        aggregate: Aggregate::Carbonate,
+        modulus: Modulus::UnitWeight,
+    }
+}
+
+fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mix: Option<&str>) -> Result<i32, Failure> {
+    let (cat, _) = load(file.as_ref())?;
+    print_warnings(&cat);
+    let top = match topping {
+        None => None,
+        Some(t) => {
+            let th = Length::parse(t).map_err(|e| Failure::Message(format!("--topping: {e}")))?;
+            if th.get() <= 0.0 || th.get() > 12.0 {
+                return Err(Failure::Message(format!("--topping: '{t}' must be more than 0 and at most 12 in")));
+            }
+            let mix = match topping_mix {
+                None => default_topping(),
+                Some(id) => cat.mixes.iter().find(|m| m.id == id).cloned().ok_or_else(|| {
+                    let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
+                    Failure::Message(format!("--topping-mix: no mix '{id}' in the catalog; it has: {}", ids.join(", ")))
+                })?,
+            };
+            Some((th, mix))
+        }
+    };
+    let rows: Vec<SectionJson> = cat
+        .sections
+        .iter()
+        .map(|s| {
+            let composite = top.as_ref().map(|(th, mix)| {
+                let n = mix.ec().get() / s.mix(&cat).ec().get();
+                let c = Composite::new(&s.props, th.get(), s.props.width_in, n);
+                CompositeJson {
+                    topping_in: c.topping_in,
+                    topping_width_in: c.topping_width_in,
+                    modular_ratio: c.n,
+                    area_in2: c.area_in2,
+                    yb_in: c.yb_in,
+                    ix_in4: c.ix_in4,
+                    sb_in3: c.sb_in3,
+                    st_precast_in3: c.st_precast_in3,
+                    st_topping_in3: c.st_topping_in3,
+                    depth_in: c.depth_in,
+                }
+            });
+            SectionJson {
+                summary: s.summary(&cat),
+                composite,
+            }
+        })
+        .collect();
+    let mut out = io::stdout().lock();
+    if json {
+        serde_json::to_writer_pretty(&mut out, &rows).map_err(io::Error::from)?;
+        writeln!(out)?;
+        return Ok(OK);
+    }
+    report::write_section_table(&mut out, &cat)?;
+    if let Some((th, mix)) = &top {
+        writeln!(out)?;
+        writeln!(
+            out,
+            "With a {} in composite topping ({}; n = Ec,topping / Ec,precast):",
+            th.get(),
+            mix.id
+        )?;
+        writeln!(out, "{:<22} {:>6} {:>8} {:>7} {:>9} {:>8} {:>8} {:>8}", "section", "n", "A in2", "yb in", "I in4", "Sb in3", "St,pc", "St,top")?;
+        for (s, r) in cat.sections.iter().zip(&rows) {
+            if let Some(c) = &r.composite {
+                writeln!(
+                    out,
+                    "{:<22} {:>6.3} {:>8.1} {:>7.2} {:>9.0} {:>8.1} {:>8.1} {:>8.1}",
+                    s.id, c.modular_ratio, c.area_in2, c.yb_in, c.ix_in4, c.sb_in3, c.st_precast_in3, c.st_topping_in3
+                )?;
+            }
+        }
+    }
+    Ok(OK)
+}

@@ -1,0 +1,322 @@
+//! Member cross-sections: geometry of the three families and their exact
+//! section properties.
+//!
+//! A [`Geometry`] is one outline polygon less any number of voids, with an
+//! optional lumped area reduction (an edge keyway given only by its area).
+//! [`Geometry::properties`] integrates it in closed form — no meshing.
+
+pub mod composite;
+pub mod family;
+pub mod shapes;
+
+pub use composite::Composite;
+pub use family::{CoreShape, Cores, DoubleTee, Generic, HollowCore, Keyway, VoidSpec};
+pub use shapes::{Moments, Polygon, Shape};
+
+use serde::Serialize;
+
+/// Which family a section belongs to; decides which rules apply (depressed
+/// strands, fire cover table, shear reinforcement rule).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Family {
+    /// Extruded or slip-formed hollow-core plank (a one-way slab).
+    HollowCore,
+    /// Double tee: flange on two or more stems (stems are beams).
+    DoubleTee,
+    /// Any other shape given as a polygon with voids.
+    Generic,
+}
+
+impl Family {
+    /// The name used in catalogs and output.
+    pub fn name(self) -> &'static str {
+        match self {
+            Family::HollowCore => "hollow-core",
+            Family::DoubleTee => "double-tee",
+            Family::Generic => "generic",
+        }
+    }
+    /// Whether strands may be depressed (draped). Hollow-core is cast on a
+    /// long bed by extrusion or slip-forming, where strands stay straight
+    /// (common practice, no source).
+    pub fn allows_depressed(self) -> bool {
+        !matches!(self, Family::HollowCore)
+    }
+}
+
+/// A lumped area taken out of the section (an edge keyway given by area).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct AreaReduction {
+    /// Area removed, in².
+    pub area: f64,
+    /// Height of its centroid above the soffit, in.
+    pub centroid: f64,
+}
+
+/// A cross-section: outline less voids, in inches (x from the left edge,
+/// y up from the soffit).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Geometry {
+    /// Outer boundary.
+    pub outline: Polygon,
+    /// Voids (cores).
+    pub voids: Vec<Shape>,
+    /// Lumped reduction, if any.
+    pub reduction: Option<AreaReduction>,
+    /// Nominal width over which area loads act, in.
+    pub width: f64,
+    /// Overall depth, in.
+    pub depth: f64,
+    /// Thickness of solid top flange over which a topping bears and the
+    /// compression block first forms, in.
+    pub top_flange: f64,
+    /// Least thickness of concrete below the voids (0 for open stems), in.
+    pub bottom_flange: f64,
+    /// Centre-line x of each stem of a stemmed section (empty otherwise), in.
+    pub stems: Vec<f64>,
+}
+
+/// Exact section properties of the bare precast section.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Properties {
+    /// Net area, in².
+    pub area_in2: f64,
+    /// Centroid height above the soffit, in.
+    pub yb_in: f64,
+    /// Distance from the centroid to the top fibre, in.
+    pub yt_in: f64,
+    /// Second moment of area about the horizontal centroidal axis, in⁴.
+    pub ix_in4: f64,
+    /// Bottom-fibre section modulus I/yb, in³.
+    pub sb_in3: f64,
+    /// Top-fibre section modulus I/yt, in³.
+    pub st_in3: f64,
+    /// Overall depth, in.
+    pub depth_in: f64,
+    /// Nominal width, in.
+    pub width_in: f64,
+    /// Outer perimeter, in.
+    pub perimeter_in: f64,
+    /// Perimeter of the voids, in.
+    pub void_perimeter_in: f64,
+    /// Volume-to-surface ratio for shrinkage and creep: area over the
+    /// perimeter exposed to drying, outer and void perimeters counted
+    /// (common practice, no source), in.
+    pub vs_ratio_in: f64,
+    /// Net area ÷ nominal width (IBC 2021 §722.2.2.1.1 for hollow-core), in.
+    pub net_thickness_in: f64,
+    /// Solid concrete above the voids, or the flange thickness, in.
+    pub top_flange_in: f64,
+    /// Least concrete below the voids, in (0 for stemmed sections).
+    pub bottom_flange_in: f64,
+    /// Least summed web width over the height of the voids or stems — the
+    /// bw for shear, in.
+    pub web_width_min_in: f64,
+    /// Height at which that least width occurs, in.
+    pub web_width_min_at_in: f64,
+}
+
+impl Geometry {
+    /// Area integrals of the net section about the soffit.
+    pub fn moments(&self) -> Moments {
+        let mut m = self.outline.moments();
+        for v in &self.voids {
+            m = m.minus(v.moments());
+        }
+        if let Some(r) = self.reduction {
+            m = m.minus(Moments {
+                area: r.area,
+                qx: r.area * r.centroid,
+                ixx: r.area * r.centroid * r.centroid,
+            });
+        }
+        m
+    }
+
+    /// Net width of concrete cut by the horizontal line at `y`, in: the
+    /// summed web width at that height. A lumped reduction is ignored here.
+    pub fn width_at(&self, y: f64) -> f64 {
+        let mut b = self.outline.chord(y);
+        for v in &self.voids {
+            b -= v.chord(y);
+        }
+        b.max(0.0)
+    }
+
+    /// The least summed web width and the height where it occurs, searched
+    /// over the web zone (the voids' height, or below the flange for stems).
+    pub fn min_web_width(&self) -> (f64, f64) {
+        let (lo, hi) = if self.voids.is_empty() {
+            (0.0, self.depth - self.top_flange)
+        } else {
+            self.voids.iter().fold((f64::INFINITY, f64::NEG_INFINITY), |(a, b), v| {
+                let (y0, y1) = v.y_range();
+                (a.min(y0), b.max(y1))
+            })
+        };
+        let (lo, hi) = (lo.max(0.0), hi.min(self.depth));
+        if hi <= lo {
+            return (self.width_at(self.depth / 2.0), self.depth / 2.0);
+        }
+        // coarse scan, then golden refinement around the best sample
+        let n = 400;
+        let mut best = (f64::INFINITY, lo);
+        for k in 0..=n {
+            let y = lo + (hi - lo) * (k as f64 + 0.5) / (n as f64 + 1.0);
+            let b = self.width_at(y);
+            if b < best.0 {
+                best = (b, y);
+            }
+        }
+        let step = (hi - lo) / n as f64;
+        let (mut a, mut c) = ((best.1 - step).max(lo), (best.1 + step).min(hi));
+        for _ in 0..60 {
+            let m1 = a + (c - a) * 0.382;
+            let m2 = a + (c - a) * 0.618;
+            if self.width_at(m1) <= self.width_at(m2) {
+                c = m2;
+            } else {
+                a = m1;
+            }
+        }
+        let y = (a + c) / 2.0;
+        let b = self.width_at(y).min(best.0);
+        (b, if self.width_at(y) <= best.0 { y } else { best.1 })
+    }
+
+    /// Exact properties of the net section.
+    pub fn properties(&self) -> Properties {
+        let m = self.moments();
+        let yb = m.qx / m.area;
+        let ix = m.ixx - m.area * yb * yb;
+        let yt = self.depth - yb;
+        let perimeter = self.outline.perimeter();
+        let void_perimeter: f64 = self.voids.iter().map(Shape::perimeter).sum();
+        let (bw, bw_at) = self.min_web_width();
+        Properties {
+            area_in2: m.area,
+            yb_in: yb,
+            yt_in: yt,
+            ix_in4: ix,
+            sb_in3: ix / yb,
+            st_in3: ix / yt,
+            depth_in: self.depth,
+            width_in: self.width,
+            perimeter_in: perimeter,
+            void_perimeter_in: void_perimeter,
+            vs_ratio_in: m.area / (perimeter + void_perimeter),
+            net_thickness_in: m.area / self.width,
+            top_flange_in: self.top_flange,
+            bottom_flange_in: self.bottom_flange,
+            web_width_min_in: bw,
+            web_width_min_at_in: bw_at,
+        }
+    }
+
+    /// Clear distance from a bar or strand of diameter `d` centred at (x, y)
+    /// to the nearest concrete surface, in; negative when it breaks out.
+    pub fn clear_cover(&self, x: f64, y: f64, d: f64) -> f64 {
+        let mut c = if self.outline.contains(x, y) {
+            self.outline.distance_to_edge(x, y)
+        } else {
+            -self.outline.distance_to_edge(x, y)
+        };
+        for v in &self.voids {
+            c = c.min(v.signed_distance(x, y));
+        }
+        c - d / 2.0
+    }
+
+    /// Clear cover from a strand at (x, y) of diameter `d` to the soffit or
+    /// the nearest void or side, the three distances a fire table asks
+    /// about: (bottom, side, least), in.
+    pub fn covers(&self, x: f64, y: f64, d: f64) -> (f64, f64, f64) {
+        let bottom = y - d / 2.0;
+        let least = self.clear_cover(x, y, d);
+        let (x0, x1) = self.outline.x_range();
+        let side = (x - x0).min(x1 - x) - d / 2.0;
+        (bottom, side, least)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    fn solid(b: f64, h: f64) -> Geometry {
+        Geometry {
+            outline: Polygon {
+                points: vec![(0.0, 0.0), (b, 0.0), (b, h), (0.0, h)],
+            },
+            voids: vec![],
+            reduction: None,
+            width: b,
+            depth: h,
+            top_flange: h,
+            bottom_flange: h,
+            stems: vec![],
+        }
+    }
+
+    #[test]
+    fn solid_strip_matches_textbook() {
+        // 48 × 8 in strip: A = 384 in², I = bh³/12 = 2048 in⁴, Sb = 512 in³
+        // (also the check values of the engineering reference sheet, §10.2 A).
+        let p = solid(48.0, 8.0).properties();
+        assert_relative_eq!(p.area_in2, 384.0);
+        assert_relative_eq!(p.yb_in, 4.0);
+        assert_relative_eq!(p.ix_in4, 2048.0, max_relative = 1e-12);
+        assert_relative_eq!(p.sb_in3, 512.0, max_relative = 1e-12);
+        assert_relative_eq!(p.vs_ratio_in, 384.0 / 112.0, max_relative = 1e-12);
+        assert_relative_eq!(p.web_width_min_in, 48.0);
+    }
+
+    #[test]
+    fn hollow_rectangle_matches_textbook() {
+        // 12 × 20 outer, 8 × 16 inner, concentric: I = (12·20³ − 8·16³)/12.
+        let mut g = solid(12.0, 20.0);
+        g.voids.push(Shape::Polygon(Polygon {
+            points: vec![(2.0, 2.0), (10.0, 2.0), (10.0, 18.0), (2.0, 18.0)],
+        }));
+        let p = g.properties();
+        assert_relative_eq!(p.area_in2, 240.0 - 128.0);
+        assert_relative_eq!(p.yb_in, 10.0, max_relative = 1e-12);
+        assert_relative_eq!(p.ix_in4, (12.0 * 8000.0 - 8.0 * 4096.0) / 12.0, max_relative = 1e-12);
+        assert_relative_eq!(p.web_width_min_in, 4.0, max_relative = 1e-9);
+    }
+
+    #[test]
+    fn tee_section_matches_textbook() {
+        // T: flange 30 × 4 on a 6 × 16 web, total depth 20 (hand calculation:
+        // A = 216, yb = (96·8 + 120·18)/216 = 13.556, I by parallel axes).
+        let g = Geometry {
+            outline: Polygon {
+                points: vec![(12.0, 0.0), (18.0, 0.0), (18.0, 16.0), (30.0, 16.0), (30.0, 20.0), (0.0, 20.0), (0.0, 16.0), (12.0, 16.0)],
+            },
+            voids: vec![],
+            reduction: None,
+            width: 30.0,
+            depth: 20.0,
+            top_flange: 4.0,
+            bottom_flange: 0.0,
+            stems: vec![15.0],
+        };
+        let p = g.properties();
+        let yb = (96.0 * 8.0 + 120.0 * 18.0) / 216.0;
+        let i = 6.0 * 16f64.powi(3) / 12.0 + 96.0 * (yb - 8.0).powi(2) + 30.0 * 64.0 / 12.0 + 120.0 * (18.0 - yb).powi(2);
+        assert_relative_eq!(p.area_in2, 216.0);
+        assert_relative_eq!(p.yb_in, yb, max_relative = 1e-12);
+        assert_relative_eq!(p.ix_in4, i, max_relative = 1e-12);
+        assert_relative_eq!(p.web_width_min_in, 6.0, max_relative = 1e-9);
+        assert_relative_eq!(g.width_at(18.0), 30.0);
+    }
+
+    #[test]
+    fn cover_to_surfaces() {
+        let g = solid(48.0, 8.0);
+        assert_relative_eq!(g.clear_cover(24.0, 1.75, 0.5), 1.5);
+        assert!(g.clear_cover(24.0, 0.1, 0.5) < 0.0);
+    }
+}

@@ -1,0 +1,503 @@
+//! Plane shapes with closed-form area integrals: polygons, circles, stadiums
+//! (ovals) and rounded rectangles. Coordinates in inches, x across the
+//! member from its left edge, y up from the soffit.
+//!
+//! Moments are taken about the soffit line y = 0; the section module moves
+//! them to the centroid. Formulas: the shoelace (Green's theorem) integrals
+//! for polygons; for curved shapes the exact circle, semicircle and
+//! rectangle results of any mechanics text (e.g. Gere & Goodno, *Mechanics
+//! of Materials*, Appendix E).
+
+use std::f64::consts::PI;
+
+/// Area integrals of a shape about the soffit line.
+#[derive(Debug, Clone, Copy, Default, PartialEq)]
+pub struct Moments {
+    /// Area, in².
+    pub area: f64,
+    /// First moment ∫y dA about y = 0, in³.
+    pub qx: f64,
+    /// Second moment ∫y² dA about y = 0, in⁴.
+    pub ixx: f64,
+}
+
+impl Moments {
+    /// The sum of two sets of integrals.
+    pub fn plus(self, o: Moments) -> Moments {
+        Moments {
+            area: self.area + o.area,
+            qx: self.qx + o.qx,
+            ixx: self.ixx + o.ixx,
+        }
+    }
+    /// The difference (a void taken out).
+    pub fn minus(self, o: Moments) -> Moments {
+        Moments {
+            area: self.area - o.area,
+            qx: self.qx - o.qx,
+            ixx: self.ixx - o.ixx,
+        }
+    }
+    /// A rectangle of width `b` and height `h` whose centroid is at height `yc`.
+    pub fn rect(b: f64, h: f64, yc: f64) -> Moments {
+        let a = b * h;
+        Moments {
+            area: a,
+            qx: a * yc,
+            ixx: b * h.powi(3) / 12.0 + a * yc * yc,
+        }
+    }
+    /// A full circle of radius `r` centred at height `yc`.
+    pub fn circle(r: f64, yc: f64) -> Moments {
+        let a = PI * r * r;
+        Moments {
+            area: a,
+            qx: a * yc,
+            ixx: PI * r.powi(4) / 4.0 + a * yc * yc,
+        }
+    }
+    /// A half circle of radius `r` whose diameter lies at height `y0`,
+    /// bulging up (`up = true`) or down.
+    pub fn semicircle(r: f64, y0: f64, up: bool) -> Moments {
+        let a = PI * r * r / 2.0;
+        let s = if up { 1.0 } else { -1.0 };
+        // about its own diameter: Q = ±2r³/3, I = πr⁴/8
+        let q0 = s * 2.0 * r.powi(3) / 3.0;
+        let i0 = PI * r.powi(4) / 8.0;
+        Moments {
+            area: a,
+            qx: q0 + a * y0,
+            ixx: i0 + 2.0 * y0 * q0 + a * y0 * y0,
+        }
+    }
+}
+
+/// A simple polygon, vertices in order (either direction), not repeated at the end.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Polygon {
+    /// Vertices (x, y), inches.
+    pub points: Vec<(f64, f64)>,
+}
+
+/// A void or a curved shape.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Shape {
+    /// A polygon.
+    Polygon(Polygon),
+    /// A circle of centre (cx, cy) and radius r.
+    Circle {
+        /// Centre x, in.
+        cx: f64,
+        /// Centre y, in.
+        cy: f64,
+        /// Radius, in.
+        r: f64,
+    },
+    /// A stadium (oval): a rectangle with semicircular ends on its shorter
+    /// sides; `w` × `h` overall. Vertical when h > w.
+    Stadium {
+        /// Centre x, in.
+        cx: f64,
+        /// Centre y, in.
+        cy: f64,
+        /// Overall width, in.
+        w: f64,
+        /// Overall height, in.
+        h: f64,
+    },
+    /// A rectangle `w` × `h` with corners rounded to radius `r`.
+    RoundedRect {
+        /// Centre x, in.
+        cx: f64,
+        /// Centre y, in.
+        cy: f64,
+        /// Overall width, in.
+        w: f64,
+        /// Overall height, in.
+        h: f64,
+        /// Corner radius, in (0 ≤ r ≤ min(w, h)/2).
+        r: f64,
+    },
+}
+
+impl Polygon {
+    /// Signed area (positive when counter-clockwise).
+    fn signed_area(&self) -> f64 {
+        self.edges().map(|((x0, y0), (x1, y1))| x0 * y1 - x1 * y0).sum::<f64>() / 2.0
+    }
+
+    fn edges(&self) -> impl Iterator<Item = ((f64, f64), (f64, f64))> + '_ {
+        let n = self.points.len();
+        (0..n).map(move |i| (self.points[i], self.points[(i + 1) % n]))
+    }
+
+    /// Area integrals (shoelace forms), independent of vertex order.
+    pub fn moments(&self) -> Moments {
+        let (mut a, mut q, mut i) = (0.0, 0.0, 0.0);
+        for ((x0, y0), (x1, y1)) in self.edges() {
+            let c = x0 * y1 - x1 * y0;
+            a += c;
+            q += (y0 + y1) * c;
+            i += (y0 * y0 + y0 * y1 + y1 * y1) * c;
+        }
+        let s = if a < 0.0 { -1.0 } else { 1.0 };
+        Moments {
+            area: s * a / 2.0,
+            qx: s * q / 6.0,
+            ixx: s * i / 12.0,
+        }
+    }
+
+    /// Perimeter, in.
+    pub fn perimeter(&self) -> f64 {
+        self.edges()
+            .map(|((x0, y0), (x1, y1))| (x1 - x0).hypot(y1 - y0))
+            .sum()
+    }
+
+    /// Total width of the polygon cut by the horizontal line at `y`, in.
+    pub fn chord(&self, y: f64) -> f64 {
+        let mut xs: Vec<f64> = Vec::new();
+        for ((x0, y0), (x1, y1)) in self.edges() {
+            // half-open rule so shared vertices count once
+            if (y0 <= y && y < y1) || (y1 <= y && y < y0) {
+                xs.push(x0 + (y - y0) * (x1 - x0) / (y1 - y0));
+            }
+        }
+        xs.sort_by(f64::total_cmp);
+        xs.chunks(2)
+            .map(|p| if p.len() == 2 { p[1] - p[0] } else { 0.0 })
+            .sum()
+    }
+
+    /// Whether (x, y) lies inside (even-odd rule).
+    pub fn contains(&self, x: f64, y: f64) -> bool {
+        let mut inside = false;
+        for ((x0, y0), (x1, y1)) in self.edges() {
+            if (y0 > y) != (y1 > y) && x < x0 + (y - y0) * (x1 - x0) / (y1 - y0) {
+                inside = !inside;
+            }
+        }
+        inside
+    }
+
+    /// Distance from (x, y) to the nearest edge, in.
+    pub fn distance_to_edge(&self, x: f64, y: f64) -> f64 {
+        self.edges()
+            .map(|(a, b)| dist_to_segment((x, y), a, b))
+            .fold(f64::INFINITY, f64::min)
+    }
+
+    /// Lowest and highest y.
+    pub fn y_range(&self) -> (f64, f64) {
+        self.points
+            .iter()
+            .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), &(_, y)| (lo.min(y), hi.max(y)))
+    }
+
+    /// Leftmost and rightmost x.
+    pub fn x_range(&self) -> (f64, f64) {
+        self.points
+            .iter()
+            .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), &(x, _)| (lo.min(x), hi.max(x)))
+    }
+
+    /// Whether two non-adjacent edges cross (the polygon is not simple).
+    pub fn self_intersects(&self) -> bool {
+        let n = self.points.len();
+        let e: Vec<_> = self.edges().collect();
+        for i in 0..n {
+            for j in (i + 2)..n {
+                if i == 0 && j == n - 1 {
+                    continue;
+                }
+                if segments_cross(e[i].0, e[i].1, e[j].0, e[j].1) {
+                    return true;
+                }
+            }
+        }
+        false
+    }
+
+    /// Whether the vertices run counter-clockwise.
+    pub fn is_ccw(&self) -> bool {
+        self.signed_area() > 0.0
+    }
+}
+
+fn segments_cross(p1: (f64, f64), p2: (f64, f64), q1: (f64, f64), q2: (f64, f64)) -> bool {
+    let o = |a: (f64, f64), b: (f64, f64), c: (f64, f64)| (b.0 - a.0) * (c.1 - a.1) - (b.1 - a.1) * (c.0 - a.0);
+    let d1 = o(q1, q2, p1);
+    let d2 = o(q1, q2, p2);
+    let d3 = o(p1, p2, q1);
+    let d4 = o(p1, p2, q2);
+    (d1 * d2 < 0.0) && (d3 * d4 < 0.0)
+}
+
+/// Distance from point p to segment ab.
+pub fn dist_to_segment(p: (f64, f64), a: (f64, f64), b: (f64, f64)) -> f64 {
+    let (dx, dy) = (b.0 - a.0, b.1 - a.1);
+    let len2 = dx * dx + dy * dy;
+    let t = if len2 == 0.0 {
+        0.0
+    } else {
+        (((p.0 - a.0) * dx + (p.1 - a.1) * dy) / len2).clamp(0.0, 1.0)
+    };
+    (p.0 - a.0 - t * dx).hypot(p.1 - a.1 - t * dy)
+}
+
+fn half_chord(r: f64, dy: f64) -> f64 {
+    if dy.abs() >= r { 0.0 } else { (r * r - dy * dy).sqrt() }
+}
+
+impl Shape {
+    /// Area integrals about the soffit line.
+    pub fn moments(&self) -> Moments {
+        match *self {
+            Shape::Polygon(ref p) => p.moments(),
+            Shape::Circle { cy, r, .. } => Moments::circle(r, cy),
+            Shape::Stadium { cy, w, h, .. } => {
+                if h >= w {
+                    let r = w / 2.0;
+                    let s = h - w;
+                    Moments::rect(w, s, cy)
+                        .plus(Moments::semicircle(r, cy + s / 2.0, true))
+                        .plus(Moments::semicircle(r, cy - s / 2.0, false))
+                } else {
+                    // the two end caps together act like one circle in y
+                    Moments::rect(w - h, h, cy).plus(Moments::circle(h / 2.0, cy))
+                }
+            }
+            Shape::RoundedRect { cy, w, h, r, .. } => {
+                let band = Moments::rect(w, h - 2.0 * r, cy);
+                let strips = Moments::rect(w - 2.0 * r, r, cy + h / 2.0 - r / 2.0)
+                    .plus(Moments::rect(w - 2.0 * r, r, cy - h / 2.0 + r / 2.0));
+                // two quarter circles at the top act like one semicircle in y
+                let caps = Moments::semicircle(r, cy + h / 2.0 - r, true)
+                    .plus(Moments::semicircle(r, cy - h / 2.0 + r, false));
+                band.plus(strips).plus(caps)
+            }
+        }
+    }
+
+    /// Perimeter, in.
+    pub fn perimeter(&self) -> f64 {
+        match *self {
+            Shape::Polygon(ref p) => p.perimeter(),
+            Shape::Circle { r, .. } => 2.0 * PI * r,
+            Shape::Stadium { w, h, .. } => 2.0 * (h - w).abs() + PI * w.min(h),
+            Shape::RoundedRect { w, h, r, .. } => 2.0 * (w - 2.0 * r) + 2.0 * (h - 2.0 * r) + 2.0 * PI * r,
+        }
+    }
+
+    /// Width of the shape cut by the horizontal line at `y`, in.
+    pub fn chord(&self, y: f64) -> f64 {
+        match *self {
+            Shape::Polygon(ref p) => p.chord(y),
+            Shape::Circle { cy, r, .. } => 2.0 * half_chord(r, y - cy),
+            Shape::Stadium { cy, w, h, .. } => {
+                let dy = (y - cy).abs();
+                if h >= w {
+                    let s = (h - w) / 2.0;
+                    if dy <= s { w } else { 2.0 * half_chord(w / 2.0, dy - s) }
+                } else if dy >= h / 2.0 {
+                    0.0
+                } else {
+                    (w - h) + 2.0 * half_chord(h / 2.0, dy)
+                }
+            }
+            Shape::RoundedRect { cy, w, h, r, .. } => {
+                let dy = (y - cy).abs();
+                let s = h / 2.0 - r;
+                if dy >= h / 2.0 {
+                    0.0
+                } else if dy <= s {
+                    w
+                } else {
+                    (w - 2.0 * r) + 2.0 * half_chord(r, dy - s)
+                }
+            }
+        }
+    }
+
+    /// Signed distance from (x, y) to the boundary: negative inside.
+    pub fn signed_distance(&self, x: f64, y: f64) -> f64 {
+        match *self {
+            Shape::Polygon(ref p) => {
+                let d = p.distance_to_edge(x, y);
+                if p.contains(x, y) { -d } else { d }
+            }
+            Shape::Circle { cx, cy, r } => (x - cx).hypot(y - cy) - r,
+            Shape::Stadium { cx, cy, w, h } => {
+                let (a, b, r) = if h >= w {
+                    let s = (h - w) / 2.0;
+                    ((cx, cy - s), (cx, cy + s), w / 2.0)
+                } else {
+                    let s = (w - h) / 2.0;
+                    ((cx - s, cy), (cx + s, cy), h / 2.0)
+                };
+                dist_to_segment((x, y), a, b) - r
+            }
+            Shape::RoundedRect { cx, cy, w, h, r } => {
+                // box signed distance of the inner rectangle, less r
+                let qx = (x - cx).abs() - (w / 2.0 - r);
+                let qy = (y - cy).abs() - (h / 2.0 - r);
+                let outside = qx.max(0.0).hypot(qy.max(0.0));
+                let inside = qx.max(qy).min(0.0);
+                outside + inside - r
+            }
+        }
+    }
+
+    /// Lowest and highest y of the shape.
+    pub fn y_range(&self) -> (f64, f64) {
+        match *self {
+            Shape::Polygon(ref p) => p.y_range(),
+            Shape::Circle { cy, r, .. } => (cy - r, cy + r),
+            Shape::Stadium { cy, h, .. } | Shape::RoundedRect { cy, h, .. } => (cy - h / 2.0, cy + h / 2.0),
+        }
+    }
+
+    /// Leftmost and rightmost x of the shape.
+    pub fn x_range(&self) -> (f64, f64) {
+        match *self {
+            Shape::Polygon(ref p) => p.x_range(),
+            Shape::Circle { cx, r, .. } => (cx - r, cx + r),
+            Shape::Stadium { cx, w, .. } | Shape::RoundedRect { cx, w, .. } => (cx - w / 2.0, cx + w / 2.0),
+        }
+    }
+
+    /// Points on the boundary (for clearance checks), `n` of them.
+    pub fn boundary_points(&self, n: usize) -> Vec<(f64, f64)> {
+        match *self {
+            Shape::Polygon(ref p) => {
+                let per = (n / p.points.len().max(1)).max(2);
+                p.edges()
+                    .flat_map(|(a, b)| {
+                        (0..per).map(move |k| {
+                            let t = k as f64 / per as f64;
+                            (a.0 + t * (b.0 - a.0), a.1 + t * (b.1 - a.1))
+                        })
+                    })
+                    .collect()
+            }
+            _ => {
+                // march around by angle and project onto the boundary by the
+                // signed distance along the ray from the centre
+                let (x0, x1) = self.x_range();
+                let (y0, y1) = self.y_range();
+                let (cx, cy) = ((x0 + x1) / 2.0, (y0 + y1) / 2.0);
+                let reach = (x1 - x0).hypot(y1 - y0);
+                (0..n)
+                    .map(|k| {
+                        let t = 2.0 * PI * k as f64 / n as f64;
+                        let (dx, dy) = (t.cos(), t.sin());
+                        // bisection on the ray for the zero of the signed distance
+                        let (mut lo, mut hi) = (0.0, reach);
+                        for _ in 0..60 {
+                            let mid = (lo + hi) / 2.0;
+                            if self.signed_distance(cx + mid * dx, cy + mid * dy) < 0.0 {
+                                lo = mid;
+                            } else {
+                                hi = mid;
+                            }
+                        }
+                        (cx + lo * dx, cy + lo * dy)
+                    })
+                    .collect()
+            }
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    fn rect_poly(b: f64, h: f64) -> Polygon {
+        Polygon {
+            points: vec![(0.0, 0.0), (b, 0.0), (b, h), (0.0, h)],
+        }
+    }
+
+    #[test]
+    fn rectangle_closed_form() {
+        // b h, b h²/2, b h³/3 about the base (any mechanics text).
+        let m = rect_poly(12.0, 8.0).moments();
+        assert_relative_eq!(m.area, 96.0);
+        assert_relative_eq!(m.qx, 12.0 * 64.0 / 2.0);
+        assert_relative_eq!(m.ixx, 12.0 * 512.0 / 3.0);
+        // clockwise order gives the same result
+        let cw = Polygon {
+            points: rect_poly(12.0, 8.0).points.into_iter().rev().collect(),
+        };
+        assert_eq!(cw.moments(), m);
+        assert_relative_eq!(rect_poly(12.0, 8.0).chord(3.0), 12.0);
+    }
+
+    #[test]
+    fn circle_closed_form() {
+        // A = πr², I_c = πr⁴/4.
+        let c = Shape::Circle { cx: 0.0, cy: 5.0, r: 2.0 };
+        let m = c.moments();
+        assert_relative_eq!(m.area, PI * 4.0);
+        assert_relative_eq!(m.ixx - m.area * 25.0, PI * 16.0 / 4.0, max_relative = 1e-12);
+        assert_relative_eq!(c.chord(5.0), 4.0);
+        assert_relative_eq!(c.perimeter(), 4.0 * PI);
+        assert_relative_eq!(c.signed_distance(0.0, 5.0), -2.0);
+    }
+
+    #[test]
+    fn stadium_equals_rect_plus_circle() {
+        // vertical stadium 4 × 10: rectangle 4 × 6 plus a circle of radius 2
+        let s = Shape::Stadium { cx: 0.0, cy: 6.0, w: 4.0, h: 10.0 };
+        let m = s.moments();
+        assert_relative_eq!(m.area, 24.0 + PI * 4.0, max_relative = 1e-12);
+        assert_relative_eq!(m.qx, m.area * 6.0, max_relative = 1e-12);
+        // I about the centre: rect 4·6³/12 + two semicircles at ±3
+        let semi_c = PI * 16.0 / 8.0 - (PI * 2.0) * (8.0 / (3.0 * PI)).powi(2);
+        let semi = 2.0 * (semi_c + PI * 2.0 * (3.0 + 8.0 / (3.0 * PI)).powi(2));
+        assert_relative_eq!(m.ixx - m.area * 36.0, 4.0 * 216.0 / 12.0 + semi, max_relative = 1e-12);
+        // horizontal stadium: same area as the rotated one
+        let hz = Shape::Stadium { cx: 0.0, cy: 6.0, w: 10.0, h: 4.0 };
+        assert_relative_eq!(hz.moments().area, m.area, max_relative = 1e-12);
+        assert_relative_eq!(s.perimeter(), 12.0 + 4.0 * PI, max_relative = 1e-12);
+        assert_relative_eq!(s.chord(6.0), 4.0);
+        assert_relative_eq!(s.chord(10.0), 2.0 * (4.0f64 - 1.0).sqrt(), max_relative = 1e-12);
+    }
+
+    #[test]
+    fn rounded_rect_limits() {
+        // r = 0 is a rectangle; r = w/2 = h/2 is a circle
+        let rr = Shape::RoundedRect { cx: 0.0, cy: 3.0, w: 4.0, h: 6.0, r: 0.0 };
+        let m = rr.moments();
+        assert_relative_eq!(m.area, 24.0);
+        assert_relative_eq!(m.ixx - 24.0 * 9.0, 4.0 * 216.0 / 12.0, max_relative = 1e-12);
+        let c = Shape::RoundedRect { cx: 0.0, cy: 3.0, w: 4.0, h: 4.0, r: 2.0 };
+        let mc = Shape::Circle { cx: 0.0, cy: 3.0, r: 2.0 }.moments();
+        assert_relative_eq!(c.moments().area, mc.area, max_relative = 1e-12);
+        assert_relative_eq!(c.moments().ixx, mc.ixx, max_relative = 1e-12);
+        // area w h − (4 − π) r²
+        let g = Shape::RoundedRect { cx: 0.0, cy: 8.0, w: 7.25, h: 12.25, r: 2.5 };
+        assert_relative_eq!(g.moments().area, 7.25 * 12.25 - (4.0 - PI) * 6.25, max_relative = 1e-12);
+        assert_relative_eq!(g.signed_distance(0.0, 8.0), -7.25 / 2.0, max_relative = 1e-12);
+    }
+
+    #[test]
+    fn boundary_points_lie_on_boundary() {
+        let s = Shape::Stadium { cx: 1.0, cy: 6.0, w: 4.0, h: 10.0 };
+        for (x, y) in s.boundary_points(64) {
+            assert!(s.signed_distance(x, y).abs() < 1e-9);
+        }
+    }
+
+    #[test]
+    fn self_intersection_found() {
+        let bow = Polygon {
+            points: vec![(0.0, 0.0), (4.0, 4.0), (4.0, 0.0), (0.0, 4.0)],
+        };
+        assert!(bow.self_intersects());
+        assert!(!rect_poly(3.0, 2.0).self_intersects());
+    }
+}
