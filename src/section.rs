@@ -75,6 +75,9 @@ pub struct Geometry {
     pub bottom_flange: f64,
     /// Centre-line x of each stem of a stemmed section (empty otherwise), in.
     pub stems: Vec<f64>,
+    /// Height of the stem chamfers, below which the web width is not
+    /// searched for bw (0 when none), in.
+    pub chamfer: f64,
 }
 
 /// Exact section properties of the bare precast section.
@@ -148,7 +151,7 @@ impl Geometry {
     /// over the web zone (the voids' height, or below the flange for stems).
     pub fn min_web_width(&self) -> (f64, f64) {
         let (lo, hi) = if self.voids.is_empty() {
-            (0.0, self.depth - self.top_flange)
+            (self.chamfer, self.depth - self.top_flange)
         } else {
             self.voids.iter().fold((f64::INFINITY, f64::NEG_INFINITY), |(a, b), v| {
                 let (y0, y1) = v.y_range();
@@ -257,6 +260,7 @@ mod tests {
             top_flange: h,
             bottom_flange: h,
             stems: vec![],
+            chamfer: 0.0,
         }
     }
 
@@ -302,9 +306,10 @@ mod tests {
             top_flange: 4.0,
             bottom_flange: 0.0,
             stems: vec![15.0],
+            chamfer: 0.0,
         };
         let p = g.properties();
-        let yb = (96.0 * 8.0 + 120.0 * 18.0) / 216.0;
+        let yb: f64 = (96.0 * 8.0 + 120.0 * 18.0) / 216.0;
         let i = 6.0 * 16f64.powi(3) / 12.0 + 96.0 * (yb - 8.0).powi(2) + 30.0 * 64.0 / 12.0 + 120.0 * (18.0 - yb).powi(2);
         assert_relative_eq!(p.area_in2, 216.0);
         assert_relative_eq!(p.yb_in, yb, max_relative = 1e-12);

@@ -210,47 +210,48 @@ fn serde_problem(rep: &mut Reporter, err: &toml::de::Error, entry: &Spanned<DeVa
     } else if msg.starts_with("invalid type") && msg.contains("expected a string") {
         format!("{msg}; quantities are quoted strings with a unit, e.g. \"8 in\"")
     } else {
-        msg
+        msg.replace("expected i64", "expected a whole number").replace("expected f64", "expected a number")
     };
     rep.error(at, &join(path, &field), message);
 }
 
-/// The dotted key path of the value under byte offset `at` within `v`.
+/// The dotted key path of the key or value under byte offset `at` within
+/// `v`, searched depth-first (header tables carry no span of their own).
 fn field_path(v: &Spanned<DeValue>, at: usize) -> String {
-    let mut parts: Vec<String> = Vec::new();
-    let mut cur = v;
-    'outer: loop {
-        match cur.get_ref() {
+    fn walk(v: &Spanned<DeValue>, at: usize, path: &mut Vec<String>) -> bool {
+        match v.get_ref() {
             DeValue::Table(t) => {
                 for (k, val) in t.iter() {
-                    if k.span().contains(&at) {
-                        parts.push(k.get_ref().to_string());
-                        break 'outer;
+                    path.push(k.get_ref().to_string());
+                    if k.span().contains(&at) || walk(val, at, path) {
+                        return true;
                     }
-                    if val.span().contains(&at) {
-                        parts.push(k.get_ref().to_string());
-                        cur = val;
-                        continue 'outer;
-                    }
+                    path.pop();
                 }
-                break;
+                v.span().contains(&at)
             }
             DeValue::Array(a) => {
                 for (i, val) in a.iter().enumerate() {
-                    if val.span().contains(&at) {
-                        if let Some(last) = parts.last_mut() {
-                            last.push_str(&format!("[{}]", i + 1));
+                    if let Some(last) = path.last_mut() {
+                        let base = last.clone();
+                        last.push_str(&format!("[{}]", i + 1));
+                        if walk(val, at, path) {
+                            return true;
                         }
-                        cur = val;
-                        continue 'outer;
+                        if let Some(l) = path.last_mut() {
+                            *l = base;
+                        }
+                    } else if walk(val, at, path) {
+                        return true;
                     }
                 }
-                break;
+                false
             }
-            _ => break,
+            _ => v.span().contains(&at),
         }
     }
-    parts.join(".")
+    let mut path = Vec::new();
+    if walk(v, at, &mut path) { path.join(" / ") } else { String::new() }
 }
 
 fn de<'a, T: Deserialize<'a>>(rep: &mut Reporter, v: &Spanned<DeValue<'a>>, path: &str) -> Option<T> {
@@ -323,7 +324,8 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
             }
             "mix" => {
                 for (i, e) in tables(&mut cx.rep, v, "mix").into_iter().enumerate() {
-                    let path = format!("mix {}", i + 1);
+                    let id = e.get_ref().as_table().and_then(|t| key_str(t, "id"));
+                    let path = id.map_or(format!("mix {}", i + 1), |id| format!("mix '{id}'"));
                     match de::<raw::RawMix>(&mut cx.rep, e, &path) {
                         Some(m) => raw_mixes.push(Spanned::new(e.span(), m)),
                         None => broken_mixes.extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
@@ -332,7 +334,8 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
             }
             "strand" => {
                 for (i, e) in tables(&mut cx.rep, v, "strand").into_iter().enumerate() {
-                    let path = format!("strand {}", i + 1);
+                    let id = e.get_ref().as_table().and_then(|t| key_str(t, "id"));
+                    let path = id.map_or(format!("strand {}", i + 1), |id| format!("strand '{id}'"));
                     match de::<raw::RawStrand>(&mut cx.rep, e, &path) {
                         Some(m) => raw_strands.push(Spanned::new(e.span(), m)),
                         None => broken_strands.extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
@@ -340,6 +343,14 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                 }
             }
             "section" => {
+                if v.get_ref().as_table().is_some_and(|t| t.iter().any(|(k, _)| k.get_ref() == "pattern")) {
+                    cx.rep.error(
+                        Some(v.span()),
+                        "section",
+                        "a [[section.pattern]] appears before any [[section]]; put each pattern after the [[section]] it belongs to",
+                    );
+                    continue;
+                }
                 for (i, e) in tables(&mut cx.rep, v, "section").into_iter().enumerate() {
                     let Some(t) = e.get_ref().as_table() else { continue };
                     let name = key_str(t, "id").map_or(format!("section {}", i + 1), |id| format!("section '{id}'"));
@@ -392,7 +403,11 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
     let mut mixes: Vec<Mix> = Vec::new();
     for m in &raw_mixes {
         let path = format!("mix '{}'", m.get_ref().id.get_ref());
-        if let Some(mix) = mix(&mut cx, m.get_ref(), &path) {
+        let found = mix(&mut cx, m.get_ref(), &path);
+        if found.is_none() {
+            broken_mixes.push(m.get_ref().id.get_ref().clone());
+        }
+        if let Some(mix) = found {
             if mixes.iter().any(|x| x.id == mix.id) {
                 cx.rep.error(span(&m.get_ref().id), &join(&path, "id"), format!("duplicate mix id '{}'; each id must be unique", mix.id));
             }
@@ -403,7 +418,11 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
     let mut strands: Vec<StrandKind> = Vec::new();
     for s in &raw_strands {
         let path = format!("strand '{}'", s.get_ref().id.get_ref());
-        if let Some(st) = strand(&mut cx, s.get_ref(), &path) {
+        let found = strand(&mut cx, s.get_ref(), &path);
+        if found.is_none() {
+            broken_strands.push(s.get_ref().id.get_ref().clone());
+        }
+        if let Some(st) = found {
             if strands.iter().any(|x| x.id == st.id) || builtin_strand(&st.id).is_some() {
                 cx.rep.error(
                     span(&s.get_ref().id),
@@ -619,23 +638,36 @@ fn section(
     if pats.is_empty() && pattern_failures == 0 {
         cx.rep.error(Some(s.span()), path, "has no strand patterns; add at least one [[section.pattern]]");
     }
-    let spec = spec?;
-    let (family, geometry) = match &spec {
-        FamilySpec::HollowCore(h) => (Family::HollowCore, h.geometry()),
-        FamilySpec::DoubleTee(t) => (Family::DoubleTee, t.geometry()),
-        FamilySpec::Generic(g) => (Family::Generic, g.geometry()),
+    let family = if r.hollow_core.is_some() {
+        Family::HollowCore
+    } else if r.double_tee.is_some() {
+        Family::DoubleTee
+    } else {
+        Family::Generic
     };
-    let props = geometry.properties();
+    let shaped = spec.map(|spec| {
+        let geometry = match &spec {
+            FamilySpec::HollowCore(h) => h.geometry(),
+            FamilySpec::DoubleTee(t) => t.geometry(),
+            FamilySpec::Generic(g) => g.geometry(),
+        };
+        (spec, geometry)
+    });
+    // patterns are checked even when the geometry is broken, so that their
+    // own problems are reported too; positions need the geometry
     let mut patterns: Vec<Pattern> = Vec::new();
     for p in pats {
         let ppath = format!("{path} / pattern '{}'", p.get_ref().id.get_ref());
-        if let Some(pat) = pattern(cx, p, &ppath, &spec, family, &geometry, refs) {
+        let shape = shaped.as_ref().map(|(s, g)| (s, g));
+        if let Some(pat) = pattern(cx, p, &ppath, shape, family, refs) {
             if patterns.iter().any(|x| x.id == pat.id) {
                 cx.rep.error(span(&p.get_ref().id), &join(&ppath, "id"), format!("duplicate pattern id '{}' in this section", pat.id));
             }
             patterns.push(pat);
         }
     }
+    let (spec, geometry) = shaped?;
+    let props = geometry.properties();
     let published = published(cx, r.published.as_ref(), path);
     let (mix, price, max_length) = (mix?, price?, max_length?);
     let sec = Section {
@@ -966,9 +998,8 @@ fn pattern(
     cx: &mut Ctx,
     p: &Spanned<RawPattern>,
     path: &str,
-    spec: &FamilySpec,
+    shape: Option<(&FamilySpec, &crate::section::Geometry)>,
     family: Family,
-    geometry: &crate::section::Geometry,
     refs: &Refs,
 ) -> Option<Pattern> {
     let r = p.get_ref();
@@ -1025,7 +1056,7 @@ fn pattern(
     if rows_raw.is_empty() {
         cx.rep.error(Some(p.span()), path, "has no strand rows; add at least one [[section.pattern.row]]");
     }
-    let depth = geometry.depth;
+    let depth = shape.map_or(f64::INFINITY, |(_, g)| g.depth);
     let db = strand.as_ref().map_or(0.5, |s| s.diameter.get());
     let mut rows = Vec::new();
     let mut rows_ok = true;
@@ -1059,6 +1090,10 @@ fn pattern(
             rows_ok = false;
             continue;
         };
+        let Some((spec, geometry)) = shape else {
+            rows_ok = false;
+            continue;
+        };
         let xs = if ok { row_positions(cx, row, count, spec, geometry, &rpath) } else { None };
         match (xs, height, end_height.unwrap_or(Some(Length::new(f64::NAN))), debond.unwrap_or(Some(Length::new(f64::NAN)))) {
             (Some(xs), Some(height), Some(eh), Some(dl)) if ok => {
@@ -1069,8 +1104,11 @@ fn pattern(
                         let Some(y) = y else { continue };
                         let c = geometry.clear_cover(x, y.get(), db);
                         if c <= 0.0 {
-                            let msg = if c <= -db / 2.0 {
+                            let in_void = geometry.voids.iter().any(|v| v.signed_distance(x, y.get()) < 0.0);
+                            let msg = if !geometry.outline.contains(x, y.get()) {
                                 format!("strand {} at x = {} in, y = {} in is not inside the concrete", k + 1, fmt(x), fmt(y.get()))
+                            } else if in_void {
+                                format!("strand {} at x = {} in, y = {} in lies inside a core or void", k + 1, fmt(x), fmt(y.get()))
                             } else {
                                 format!(
                                     "strand {} at x = {} in, y = {} in ({} in diameter) has no clear cover: it breaks through a surface or into a core",

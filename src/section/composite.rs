@@ -79,6 +79,7 @@ mod tests {
             top_flange: 8.0,
             bottom_flange: 8.0,
             stems: vec![],
+            chamfer: 0.0,
         };
         let c = Composite::new(&g.properties(), 2.0, 48.0, 1.0);
         assert_relative_eq!(c.area_in2, 480.0);
@@ -111,7 +112,7 @@ mod tests {
         };
         let c = Composite::new(&p, 2.0, 48.0, 0.8);
         let at = 76.8;
-        let yb = (384.0 * 4.0 + at * 9.0) / (384.0 + at);
+        let yb: f64 = (384.0 * 4.0 + at * 9.0) / (384.0 + at);
         let i = 2048.0 + 384.0 * (yb - 4.0f64).powi(2) + 38.4 * 8.0 / 12.0 + at * (9.0 - yb).powi(2);
         assert_relative_eq!(c.yb_in, yb, max_relative = 1e-12);
         assert_relative_eq!(c.ix_in4, i, max_relative = 1e-12);

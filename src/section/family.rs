@@ -179,6 +179,7 @@ impl HollowCore {
             top_flange: self.depth - top,
             bottom_flange: bottom,
             stems: vec![],
+            chamfer: 0.0,
         }
     }
 
@@ -273,6 +274,7 @@ impl DoubleTee {
             top_flange: tf,
             bottom_flange: 0.0,
             stems: self.stem_centres(),
+            chamfer: self.chamfer,
         }
     }
 
@@ -344,6 +346,7 @@ impl Generic {
             top_flange,
             bottom_flange,
             stems: vec![],
+            chamfer: 0.0,
         }
     }
 
@@ -430,7 +433,7 @@ mod tests {
         let webs = hc().cores.web_centres(48.0);
         assert_eq!(webs.len(), 7);
         assert_relative_eq!(webs[0], 1.25);
-        assert_relative_eq!(webs[1], 8.0);
+        assert_relative_eq!(webs[1], 9.0);
     }
 
     #[test]
