@@ -134,7 +134,11 @@ impl Pattern {
     /// Strand centroid at the member ends, in above the soffit.
     pub fn end_centroid(&self) -> f64 {
         let n = self.strand_count() as f64;
-        self.rows.iter().map(|r| r.count as f64 * r.end_height.unwrap_or(r.height).get()).sum::<f64>() / n
+        self.rows
+            .iter()
+            .map(|r| r.count as f64 * r.end_height.unwrap_or(r.height).get())
+            .sum::<f64>()
+            / n
     }
     /// Whether any row is depressed.
     pub fn is_depressed(&self) -> bool {

@@ -6,7 +6,7 @@ use std::path::PathBuf;
 use clap::{Parser, Subcommand};
 use serde::Serialize;
 
-use plankwise::catalog::{Catalog, DEMO_US, Problems, Severity, SectionSummary};
+use plankwise::catalog::{Catalog, DEMO_US, Problems, SectionSummary, Severity};
 use plankwise::material::{Aggregate, Mix, Modulus};
 use plankwise::report;
 use plankwise::section::Composite;
@@ -128,7 +128,10 @@ fn demo() -> Result<i32, Failure> {
     writeln!(out)?;
     report::write_cautions(&mut out)?;
     writeln!(out)?;
-    writeln!(out, "Try: plankwise sections catalog/demo-si.toml   ·   plankwise validate FILE   ·   plankwise --help")?;
+    writeln!(
+        out,
+        "Try: plankwise sections catalog/demo-si.toml   ·   plankwise validate FILE   ·   plankwise --help"
+    )?;
     Ok(OK)
 }
 
@@ -243,7 +246,11 @@ fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mi
             th.get(),
             mix.id
         )?;
-        writeln!(out, "{:<22} {:>6} {:>8} {:>7} {:>9} {:>8} {:>8} {:>8}", "section", "n", "A in2", "yb in", "I in4", "Sb in3", "St,pc", "St,top")?;
+        writeln!(
+            out,
+            "{:<22} {:>6} {:>8} {:>7} {:>9} {:>8} {:>8} {:>8}",
+            "section", "n", "A in2", "yb in", "I in4", "Sb in3", "St,pc", "St,top"
+        )?;
         for (s, r) in cat.sections.iter().zip(&rows) {
             if let Some(c) = &r.composite {
                 writeln!(

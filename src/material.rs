@@ -174,15 +174,18 @@ pub const BUILTIN_STRANDS: &[(&[&str], f64, f64)] = &[
 /// A built-in strand by any of its names ("1/2 in", "12.7 mm").
 pub fn builtin_strand(name: &str) -> Option<StrandKind> {
     let key: String = name.split_whitespace().collect::<Vec<_>>().join(" ").to_lowercase();
-    BUILTIN_STRANDS.iter().find(|(names, _, _)| names.iter().any(|n| *n == key)).map(|&(names, d, a)| StrandKind {
-        id: names[0].to_string(),
-        diameter: Length::new(d),
-        area: Area::new(a),
-        fpu: Stress::from_unit(270.0, "ksi"),
-        fpy: Stress::from_unit(243.0, "ksi"),
-        eps: Stress::from_unit(28_500.0, "ksi"),
-        relaxation: Relaxation::Low,
-    })
+    BUILTIN_STRANDS
+        .iter()
+        .find(|(names, _, _)| names.iter().any(|n| *n == key))
+        .map(|&(names, d, a)| StrandKind {
+            id: names[0].to_string(),
+            diameter: Length::new(d),
+            area: Area::new(a),
+            fpu: Stress::from_unit(270.0, "ksi"),
+            fpy: Stress::from_unit(243.0, "ksi"),
+            eps: Stress::from_unit(28_500.0, "ksi"),
+            relaxation: Relaxation::Low,
+        })
 }
 
 /// The names of the built-in strands, for messages.
@@ -209,12 +212,24 @@ mod tests {
     #[test]
     fn modulus_check_values() {
         // Engineering reference sheet §1.1 check values (derived from ACI 318-19 §19.2.2.1).
-        assert_relative_eq!(mix(5000.0, 150.0, Modulus::Normalweight).ec().get(), 4_030_509.0, max_relative = 1e-6);
+        assert_relative_eq!(
+            mix(5000.0, 150.0, Modulus::Normalweight).ec().get(),
+            4_030_509.0,
+            max_relative = 1e-6
+        );
         assert_relative_eq!(mix(5000.0, 150.0, Modulus::UnitWeight).ec().get(), 4_286_826.0, max_relative = 1e-6);
         assert_relative_eq!(mix(5000.0, 145.0, Modulus::UnitWeight).ec().get(), 4_074_281.0, max_relative = 1e-6);
-        assert_relative_eq!(mix(4000.0, 150.0, Modulus::Normalweight).ec().get(), 3_604_997.0, max_relative = 1e-6);
+        assert_relative_eq!(
+            mix(4000.0, 150.0, Modulus::Normalweight).ec().get(),
+            3_604_997.0,
+            max_relative = 1e-6
+        );
         // Eci with f'ci = 3500 psi: 57000 √3500 = 3 372 165 psi (sheet §10.2 B: 3372.2 ksi)
-        assert_relative_eq!(mix(5000.0, 150.0, Modulus::Normalweight).eci().get(), 3_372_165.0, max_relative = 1e-6);
+        assert_relative_eq!(
+            mix(5000.0, 150.0, Modulus::Normalweight).eci().get(),
+            3_372_165.0,
+            max_relative = 1e-6
+        );
     }
 
     #[test]
@@ -224,7 +239,15 @@ mod tests {
         assert_relative_eq!(mix(4000.0, 150.0, Modulus::Normalweight).fr().get(), 474.34, max_relative = 1e-4);
         assert_relative_eq!(mix(6000.0, 150.0, Modulus::Normalweight).fr().get(), 580.95, max_relative = 1e-4);
         // ACI 318-19 Table 22.2.2.4.3 (from memory, high confidence).
-        for (fc, b) in [(3000.0, 0.85), (4000.0, 0.85), (5000.0, 0.80), (6000.0, 0.75), (7000.0, 0.70), (8000.0, 0.65), (10000.0, 0.65)] {
+        for (fc, b) in [
+            (3000.0, 0.85),
+            (4000.0, 0.85),
+            (5000.0, 0.80),
+            (6000.0, 0.75),
+            (7000.0, 0.70),
+            (8000.0, 0.65),
+            (10000.0, 0.65),
+        ] {
             assert_relative_eq!(beta1(Stress::new(fc)), b, max_relative = 1e-12);
         }
     }

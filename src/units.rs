@@ -209,10 +209,7 @@ impl<K: Kind> Div for Q<K> {
 }
 
 fn factor<K: Kind>(unit: &str) -> Option<f64> {
-    K::UNITS
-        .iter()
-        .find(|(u, _)| u.eq_ignore_ascii_case(unit))
-        .map(|&(_, f)| f)
+    K::UNITS.iter().find(|(u, _)| u.eq_ignore_ascii_case(unit)).map(|&(_, f)| f)
 }
 
 /// Why a quantity string could not be read.
@@ -331,10 +328,7 @@ fn terms(text: &str) -> Result<Vec<(String, String)>, ()> {
         }
         let start = i;
         // number: digits and . / - + e, but 'e' only after a digit
-        while i < chars.len()
-            && is_num(chars[i])
-            && !(matches!(chars[i], 'e' | 'E') && (i == start || !chars[i - 1].is_ascii_digit()))
-        {
+        while i < chars.len() && is_num(chars[i]) && !(matches!(chars[i], 'e' | 'E') && (i == start || !chars[i - 1].is_ascii_digit())) {
             i += 1;
         }
         if i == start {
@@ -424,9 +418,7 @@ fn parse<K: Kind>(text: &str) -> Result<f64, UnitError> {
         total += v * f;
     }
     if !total.is_finite() {
-        return Err(UnitError::NotFinite {
-            text: t.to_string(),
-        });
+        return Err(UnitError::NotFinite { text: t.to_string() });
     }
     Ok(total)
 }
@@ -487,13 +479,25 @@ mod tests {
     fn load_and_density_factors_match_nist_sp811() {
         // NIST SP 811 B.8: pound-force per square foot = 4.788 026 E+01 Pa.
         assert_relative_eq!(AreaLoad::parse("1 psf").unwrap().in_unit("Pa"), 47.88026, max_relative = SP811);
-        assert_relative_eq!(AreaLoad::parse("2.4 kPa").unwrap().in_unit("psf"), 2400.0 / 47.88026, max_relative = SP811);
+        assert_relative_eq!(
+            AreaLoad::parse("2.4 kPa").unwrap().in_unit("psf"),
+            2400.0 / 47.88026,
+            max_relative = SP811
+        );
         // pound-force per foot = 1.459 390 E+01 N/m.
         assert_relative_eq!(LineLoad::parse("1 plf").unwrap().in_unit("N/m"), 14.59390, max_relative = SP811);
-        assert_relative_eq!(LineLoad::parse("7.3 kN/m").unwrap().in_unit("klf"), 7300.0 / 14.59390 / 1000.0, max_relative = SP811);
+        assert_relative_eq!(
+            LineLoad::parse("7.3 kN/m").unwrap().in_unit("klf"),
+            7300.0 / 14.59390 / 1000.0,
+            max_relative = SP811
+        );
         // pound per cubic foot = 1.601 846 E+01 kg/m³ (mass); as weight with g_n.
         assert_relative_eq!(UnitWeight::parse("1 pcf").unwrap().in_unit("kg/m3"), 16.01846, max_relative = SP811);
-        assert_relative_eq!(UnitWeight::parse("2400 kg/m3").unwrap().in_unit("pcf"), 2400.0 / 16.01846, max_relative = SP811);
+        assert_relative_eq!(
+            UnitWeight::parse("2400 kg/m3").unwrap().in_unit("pcf"),
+            2400.0 / 16.01846,
+            max_relative = SP811
+        );
     }
 
     #[test]
@@ -505,9 +509,17 @@ mod tests {
         // inch⁴ (second moment of area) = 4.162 314 E-07 m⁴.
         assert_relative_eq!(Inertia::parse("1 in4").unwrap().in_unit("m4"), 4.162314e-7, max_relative = SP811);
         // inch³ (section modulus) = 1.638 706 E-05 m³.
-        assert_relative_eq!(SectionModulus::parse("1 in3").unwrap().in_unit("m3"), 1.638706e-5, max_relative = SP811);
+        assert_relative_eq!(
+            SectionModulus::parse("1 in3").unwrap().in_unit("m3"),
+            1.638706e-5,
+            max_relative = SP811
+        );
         // foot-pound-force = 1.355 818 E+00 N·m.
-        assert_relative_eq!(Moment::parse("1 lb-ft").unwrap().in_unit("kN-m") * 1000.0, 1.355818, max_relative = SP811);
+        assert_relative_eq!(
+            Moment::parse("1 lb-ft").unwrap().in_unit("kN-m") * 1000.0,
+            1.355818,
+            max_relative = SP811
+        );
     }
 
     #[test]
@@ -531,7 +543,10 @@ mod tests {
     #[test]
     fn wrong_kind_names_both_kinds() {
         let e = Stress::parse("50 ft").unwrap_err();
-        assert_eq!(e.to_string(), "'50 ft' is a length, but a stress is needed (psi, ksi, MPa, GPa, kPa, Pa)");
+        assert_eq!(
+            e.to_string(),
+            "'50 ft' is a length, but a stress is needed (psi, ksi, MPa, GPa, kPa, Pa)"
+        );
         let e = Length::parse("12").unwrap_err();
         assert!(e.to_string().contains("has no unit"), "{e}");
         let e = Length::parse("12 furlongs").unwrap_err();

@@ -53,7 +53,11 @@ fn every_broken_catalog_is_refused_with_its_message() {
             continue;
         }
         let text = fs::read_to_string(&path).unwrap();
-        let expect = text.lines().next().and_then(|l| l.strip_prefix("# expect: ")).unwrap_or_else(|| panic!("{} has no expect line", path.display()));
+        let expect = text
+            .lines()
+            .next()
+            .and_then(|l| l.strip_prefix("# expect: "))
+            .unwrap_or_else(|| panic!("{} has no expect line", path.display()));
         let name = path.file_name().unwrap().to_str().unwrap();
         let stderr = refuse(name, text.as_bytes());
         assert!(stderr.contains(expect), "{name}: expected '{expect}' in:\n{stderr}");
@@ -62,8 +66,16 @@ fn every_broken_catalog_is_refused_with_its_message() {
         let loc = format!("{name}:");
         assert!(first.starts_with(&loc), "{name}: no file name in '{first}'");
         let mut parts = first[loc.len()..].splitn(3, ':');
-        let line: usize = parts.next().unwrap().parse().unwrap_or_else(|_| panic!("{name}: no line in '{first}'"));
-        let col: usize = parts.next().unwrap().parse().unwrap_or_else(|_| panic!("{name}: no column in '{first}'"));
+        let line: usize = parts
+            .next()
+            .unwrap()
+            .parse()
+            .unwrap_or_else(|_| panic!("{name}: no line in '{first}'"));
+        let col: usize = parts
+            .next()
+            .unwrap()
+            .parse()
+            .unwrap_or_else(|_| panic!("{name}: no column in '{first}'"));
         assert!(line >= 1 && col >= 1, "{name}");
         n += 1;
     }
@@ -76,7 +88,9 @@ fn misspelt_key_is_located_at_its_line_and_column() {
     let line = text.lines().position(|l| l.starts_with("widht")).unwrap() + 1;
     let stderr = refuse("misspelt.toml", text.as_bytes());
     assert!(
-        stderr.starts_with(&format!("misspelt.toml:{line}:1: error: section 'hc8' / hollow_core / widht: unknown key 'widht' (did you mean 'width'?)")),
+        stderr.starts_with(&format!(
+            "misspelt.toml:{line}:1: error: section 'hc8' / hollow_core / widht: unknown key 'widht' (did you mean 'width'?)"
+        )),
         "{stderr}"
     );
 }
@@ -90,7 +104,13 @@ fn all_problems_are_reported_at_once() {
         .replacen("stem_spacing = \"48 in\"", "stem_spacing = \"100 in\"", 1)
         .replacen("strand = \"1/2 in\"", "strand = \"1/2 inch\"", 1);
     let stderr = refuse("many.toml", text.as_bytes());
-    for frag in ["plausible range 2500", "overlap each other", "stems do not fit", "no strand '1/2 inch'", "4 problems found"] {
+    for frag in [
+        "plausible range 2500",
+        "overlap each other",
+        "stems do not fit",
+        "no strand '1/2 inch'",
+        "4 problems found",
+    ] {
         assert!(stderr.contains(frag), "missing '{frag}' in:\n{stderr}");
     }
 }

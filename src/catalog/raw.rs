@@ -96,7 +96,17 @@ pub struct RawSection {
 
 /// Keys of `[[section]]`, patterns included.
 pub const SECTION_KEYS: &[&str] = &[
-    "id", "designation", "mix", "hollow_core", "double_tee", "generic", "published", "price", "max_length", "remarks", "pattern",
+    "id",
+    "designation",
+    "mix",
+    "hollow_core",
+    "double_tee",
+    "generic",
+    "published",
+    "price",
+    "max_length",
+    "remarks",
+    "pattern",
 ];
 
 /// `[section.hollow_core]`.

@@ -8,11 +8,19 @@ use toml::de::{DeTable, DeValue, ValueDeserializer};
 
 use super::diag::{Reporter, suggestion};
 use super::raw::{self, Point, RawPattern, RawSection, S};
-use super::{Bar, Catalog, FamilySpec, Meta, Pattern, Problems, Published, Row, Section, content_hash};
-use crate::material::{Aggregate, Mix, Modulus, Relaxation, StrandKind, builtin_strand, builtin_strand_names};
+mod geometry;
+mod materials;
+mod pattern;
+
+use geometry::{double_tee, generic, hollow_core};
+use materials::{mix, strand};
+use pattern::{compare_published, pattern, published};
+
+use super::{Catalog, FamilySpec, Meta, Pattern, Problems, Section, content_hash};
+use crate::material::{Mix, StrandKind, builtin_strand};
+use crate::section::Family;
 use crate::section::family::fmt;
-use crate::section::{CoreShape, Cores, DoubleTee, Family, Generic, HollowCore, Keyway, VoidSpec};
-use crate::units::{Area, AreaLoad, Inertia, Kind, Length, LineLoad, Q, Stress};
+use crate::units::{Kind, Length, Q};
 
 /// Plausible ranges; values outside are typing mistakes far more often than
 /// real members (common practice, no source).
@@ -107,7 +115,8 @@ impl Ctx<'_> {
     fn positive_len(&mut self, s: &S, path: &str, field: &str) -> Option<Length> {
         let v = self.q::<crate::units::LengthK>(s, path, field)?;
         if v.get() <= 0.0 {
-            self.rep.error(span(s), &join(path, field), format!("'{}' must be greater than zero", s.get_ref()));
+            self.rep
+                .error(span(s), &join(path, field), format!("'{}' must be greater than zero", s.get_ref()));
             return None;
         }
         Some(v)
@@ -116,7 +125,11 @@ impl Ctx<'_> {
     fn count(&mut self, c: &Spanned<i64>, path: &str, field: &str, (lo, hi): (i64, i64)) -> Option<u32> {
         let v = *c.get_ref();
         if !(lo..=hi).contains(&v) {
-            self.rep.error(span(c), &join(path, field), format!("{v} is outside the allowed range {lo} to {hi}"));
+            self.rep.error(
+                span(c),
+                &join(path, field),
+                format!("{v} is outside the allowed range {lo} to {hi}"),
+            );
             return None;
         }
         Some(v as u32)
@@ -130,7 +143,11 @@ impl Ctx<'_> {
                     self.rep.error(
                         span(s),
                         &join(path, field),
-                        format!("is {} characters long; at most {} allowed", s.get_ref().chars().count(), limits::TEXT_CHARS),
+                        format!(
+                            "is {} characters long; at most {} allowed",
+                            s.get_ref().chars().count(),
+                            limits::TEXT_CHARS
+                        ),
                     );
                 }
                 s.get_ref().clone()
@@ -143,7 +160,11 @@ impl Ctx<'_> {
         if id.trim().is_empty() {
             self.rep.error(span(s), &join(path, "id"), "is empty; give each entry a short id");
         } else if id.chars().count() > 80 {
-            self.rep.error(span(s), &join(path, "id"), format!("is {} characters long; at most 80 allowed", id.chars().count()));
+            self.rep.error(
+                span(s),
+                &join(path, "id"),
+                format!("is {} characters long; at most 80 allowed", id.chars().count()),
+            );
         }
         id.clone()
     }
@@ -173,7 +194,11 @@ impl Ctx<'_> {
             }
         }
         if ok && out.len() < min {
-            self.rep.error(span(pts), &join(path, field), format!("has {} points; at least {min} needed", out.len()));
+            self.rep.error(
+                span(pts),
+                &join(path, field),
+                format!("has {} points; at least {min} needed", out.len()),
+            );
             return None;
         }
         ok.then_some(out)
@@ -210,7 +235,8 @@ fn serde_problem(rep: &mut Reporter, err: &toml::de::Error, entry: &Spanned<DeVa
     } else if msg.starts_with("invalid type") && msg.contains("expected a string") {
         format!("{msg}; quantities are quoted strings with a unit, e.g. \"8 in\"")
     } else {
-        msg.replace("expected i64", "expected a whole number").replace("expected f64", "expected a number")
+        msg.replace("expected i64", "expected a whole number")
+            .replace("expected f64", "expected a number")
     };
     rep.error(at, &join(path, &field), message);
 }
@@ -273,7 +299,14 @@ fn tables<'v, 'a>(rep: &mut Reporter, v: &'v Spanned<DeValue<'a>>, key: &str) ->
     match v.get_ref() {
         DeValue::Array(a) if a.iter().all(|e| e.get_ref().is_table()) => a.iter().collect(),
         _ => {
-            rep.error(Some(v.span()), key, format!("'{key}' must be a list of tables, written [[{key}]]; found a {}", v.get_ref().type_str()));
+            rep.error(
+                Some(v.span()),
+                key,
+                format!(
+                    "'{key}' must be a list of tables, written [[{key}]]; found a {}",
+                    v.get_ref().type_str()
+                ),
+            );
             Vec::new()
         }
     }
@@ -316,7 +349,11 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                     meta.producer = cx.text(&m.producer, "catalog", "producer");
                     if let Some(code) = &m.code {
                         if code.get_ref() != "ACI 318-19" {
-                            cx.rep.error(span(code), "catalog / code", format!("'{}' is not supported; plankwise checks to 'ACI 318-19'", code.get_ref()));
+                            cx.rep.error(
+                                span(code),
+                                "catalog / code",
+                                format!("'{}' is not supported; plankwise checks to 'ACI 318-19'", code.get_ref()),
+                            );
                         }
                     }
                     meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| n.into_inner()).collect();
@@ -343,7 +380,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                 }
             }
             "section" => {
-                if v.get_ref().as_table().is_some_and(|t| t.iter().any(|(k, _)| k.get_ref() == "pattern")) {
+                if v.get_ref()
+                    .as_table()
+                    .is_some_and(|t| t.iter().any(|(k, _)| k.get_ref() == "pattern"))
+                {
                     cx.rep.error(
                         Some(v.span()),
                         "section",
@@ -396,7 +436,11 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         }
     }
     if !saw_catalog {
-        cx.rep.error(Some(root_span.start..root_span.start), "catalog", "missing [catalog] table with at least name = \"…\"");
+        cx.rep.error(
+            Some(root_span.start..root_span.start),
+            "catalog",
+            "missing [catalog] table with at least name = \"…\"",
+        );
     }
 
     // mixes
@@ -409,7 +453,11 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         }
         if let Some(mix) = found {
             if mixes.iter().any(|x| x.id == mix.id) {
-                cx.rep.error(span(&m.get_ref().id), &join(&path, "id"), format!("duplicate mix id '{}'; each id must be unique", mix.id));
+                cx.rep.error(
+                    span(&m.get_ref().id),
+                    &join(&path, "id"),
+                    format!("duplicate mix id '{}'; each id must be unique", mix.id),
+                );
             }
             mixes.push(mix);
         }
@@ -427,7 +475,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                 cx.rep.error(
                     span(&s.get_ref().id),
                     &join(&path, "id"),
-                    format!("duplicate strand id '{}'; ids must differ from each other and from the built-in names", st.id),
+                    format!(
+                        "duplicate strand id '{}'; ids must differ from each other and from the built-in names",
+                        st.id
+                    ),
                 );
             }
             strands.push(st);
@@ -447,13 +498,21 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         };
         if let Some(sec) = section(&mut cx, s, pats, *failures, &path, &refs) {
             if sections.iter().any(|x| x.id == sec.id) {
-                cx.rep.error(span(&s.get_ref().id), &join(&path, "id"), format!("duplicate section id '{}'; each id must be unique", sec.id));
+                cx.rep.error(
+                    span(&s.get_ref().id),
+                    &join(&path, "id"),
+                    format!("duplicate section id '{}'; each id must be unique", sec.id),
+                );
             }
             sections.push(sec);
         }
     }
     if section_count == 0 && !cx.rep.has_errors() {
-        cx.rep.error(Some(root_span.start..root_span.start), "section", "the catalog has no sections; add at least one [[section]] with a [[section.pattern]]");
+        cx.rep.error(
+            Some(root_span.start..root_span.start),
+            "section",
+            "the catalog has no sections; add at least one [[section]] with a [[section.pattern]]",
+        );
     }
 
     if cx.rep.has_errors() {
@@ -466,114 +525,6 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         sections,
         warnings: cx.rep.finish(),
         hash: content_hash(text),
-    })
-}
-
-fn mix(cx: &mut Ctx, m: &raw::RawMix, path: &str) -> Option<Mix> {
-    let id = cx.id(&m.id, path);
-    let fc = cx.ranged::<crate::units::StressK>(&m.fc, path, "fc", limits::FC_PSI, "psi");
-    let fci = cx.ranged::<crate::units::StressK>(&m.fci, path, "fci", limits::FCI_PSI, "psi");
-    let wc = cx.ranged::<crate::units::UnitWeightK>(&m.unit_weight, path, "unit_weight", limits::WC_PCF, "pcf");
-    let agg = Aggregate::from_name(m.aggregate.get_ref());
-    if agg.is_none() {
-        cx.rep.error(
-            span(&m.aggregate),
-            &join(path, "aggregate"),
-            format!(
-                "'{}' is not an aggregate kind{}; use one of: {}",
-                m.aggregate.get_ref(),
-                suggestion(m.aggregate.get_ref(), Aggregate::NAMES.iter().copied()),
-                Aggregate::NAMES.join(", ")
-            ),
-        );
-    }
-    let modulus = match m.modulus.as_ref().map(|s| (s, s.get_ref().as_str())) {
-        None | Some((_, "unit-weight")) => Some(Modulus::UnitWeight),
-        Some((_, "normalweight")) => Some(Modulus::Normalweight),
-        Some((s, _)) => match Stress::parse(s.get_ref()) {
-            Ok(_) => cx.ranged::<crate::units::StressK>(s, path, "modulus", limits::EC_KSI, "ksi").map(Modulus::Given),
-            Err(_) => {
-                cx.rep.error(
-                    span(s),
-                    &join(path, "modulus"),
-                    format!(
-                        "'{}' is neither a formula nor a stress{}; use 'unit-weight' (33 wc^1.5 √f'c), 'normalweight' (57000 √f'c) or a value such as \"4400 ksi\"",
-                        s.get_ref(),
-                        suggestion(s.get_ref(), ["unit-weight", "normalweight"])
-                    ),
-                );
-                None
-            }
-        },
-    };
-    let (fc, fci, wc, agg, modulus) = (fc?, fci?, wc?, agg?, modulus?);
-    if fci.get() > fc.get() {
-        cx.rep.error(
-            span(&m.fci),
-            &join(path, "fci"),
-            format!("f'ci '{}' is above f'c '{}'; the strength at release cannot exceed the specified strength", m.fci.get_ref(), m.fc.get_ref()),
-        );
-        return None;
-    }
-    if modulus == Modulus::Normalweight && !matches!(agg, Aggregate::Siliceous | Aggregate::Carbonate) {
-        cx.rep.error(
-            m.modulus.as_ref().map(|s| s.span()),
-            &join(path, "modulus"),
-            format!("'normalweight' (57000 √f'c) applies only to normalweight concrete, not {}; use 'unit-weight'", agg.name()),
-        );
-        return None;
-    }
-    Some(Mix {
-        id,
-        fc,
-        fci,
-        unit_weight: wc,
-        aggregate: agg,
-        modulus,
-    })
-}
-
-fn strand(cx: &mut Ctx, s: &raw::RawStrand, path: &str) -> Option<StrandKind> {
-    let id = cx.id(&s.id, path);
-    let d = cx.ranged::<crate::units::LengthK>(&s.diameter, path, "diameter", limits::STRAND_D_IN, "in");
-    let a = cx.ranged::<crate::units::AreaK>(&s.area, path, "area", limits::STRAND_A_IN2, "in2");
-    let fpu = cx.ranged::<crate::units::StressK>(&s.fpu, path, "fpu", limits::FPU_KSI, "ksi");
-    let relaxation = match s.relaxation.as_ref().map(|r| r.get_ref().as_str()) {
-        None | Some("low") => Some(Relaxation::Low),
-        Some("stress-relieved") => Some(Relaxation::StressRelieved),
-        Some(other) => {
-            cx.rep.error(
-                s.relaxation.as_ref().map(|r| r.span()),
-                &join(path, "relaxation"),
-                format!("'{other}'{} is not a relaxation class; use 'low' or 'stress-relieved'", suggestion(other, ["low", "stress-relieved"])),
-            );
-            None
-        }
-    };
-    let eps = match &s.modulus {
-        None => Some(Stress::from_unit(28_500.0, "ksi")),
-        Some(m) => cx.ranged::<crate::units::StressK>(m, path, "modulus", limits::EPS_KSI, "ksi"),
-    };
-    let fpy = cx.opt_q::<crate::units::StressK>(&s.fpy, path, "fpy");
-    let (d, a, fpu, relaxation, eps, fpy) = (d?, a?, fpu?, relaxation?, eps?, fpy?);
-    // ASTM A416: fpy at 1 % extension is 0.90 fpu (low-relaxation) or 0.85 fpu
-    let fpy = fpy.unwrap_or(fpu * if relaxation == Relaxation::Low { 0.90 } else { 0.85 });
-    if fpy.get() > fpu.get() || fpy.get() < 0.8 * fpu.get() {
-        cx.rep.error(
-            s.fpy.as_ref().map(|f| f.span()),
-            &join(path, "fpy"),
-            format!("fpy {} ksi must lie between 0.80 fpu and fpu ({} ksi)", fmt(fpy.in_unit("ksi")), fmt(fpu.in_unit("ksi"))),
-        );
-        return None;
-    }
-    Some(StrandKind {
-        id,
-        diameter: d,
-        area: a,
-        fpu,
-        fpy,
-        eps,
-        relaxation,
     })
 }
 
@@ -594,7 +545,11 @@ fn section(
 ) -> Option<Section> {
     let r = s.get_ref();
     let id = cx.id(&r.id, path);
-    let designation = if r.designation.is_some() { cx.text(&r.designation, path, "designation") } else { id.clone() };
+    let designation = if r.designation.is_some() {
+        cx.text(&r.designation, path, "designation")
+    } else {
+        id.clone()
+    };
     let remarks = cx.text(&r.remarks, path, "remarks");
     let mix = refs.mixes.iter().position(|m| &m.id == r.mix.get_ref());
     if mix.is_none() && !refs.broken_mixes.contains(r.mix.get_ref()) {
@@ -610,14 +565,15 @@ fn section(
             ),
         );
     }
-    let given = [r.hollow_core.is_some(), r.double_tee.is_some(), r.generic.is_some()].iter().filter(|&&b| b).count();
+    let given = [r.hollow_core.is_some(), r.double_tee.is_some(), r.generic.is_some()]
+        .iter()
+        .filter(|&&b| b)
+        .count();
     if given != 1 {
         cx.rep.error(
             Some(s.span()),
             path,
-            format!(
-                "give exactly one geometry table — [section.hollow_core], [section.double_tee] or [section.generic]; found {given}"
-            ),
+            format!("give exactly one geometry table — [section.hollow_core], [section.double_tee] or [section.generic]; found {given}"),
         );
         return None;
     }
@@ -633,10 +589,13 @@ fn section(
     let price = cx.opt_q::<crate::units::PriceK>(&r.price, path, "price");
     let max_length = match &r.max_length {
         None => Some(None),
-        Some(m) => cx.ranged::<crate::units::LengthK>(m, path, "max_length", limits::LENGTH_FT, "ft").map(Some),
+        Some(m) => cx
+            .ranged::<crate::units::LengthK>(m, path, "max_length", limits::LENGTH_FT, "ft")
+            .map(Some),
     };
     if pats.is_empty() && pattern_failures == 0 {
-        cx.rep.error(Some(s.span()), path, "has no strand patterns; add at least one [[section.pattern]]");
+        cx.rep
+            .error(Some(s.span()), path, "has no strand patterns; add at least one [[section.pattern]]");
     }
     let family = if r.hollow_core.is_some() {
         Family::HollowCore
@@ -661,7 +620,11 @@ fn section(
         let shape = shaped.as_ref().map(|(s, g)| (s, g));
         if let Some(pat) = pattern(cx, p, &ppath, shape, family, refs) {
             if patterns.iter().any(|x| x.id == pat.id) {
-                cx.rep.error(span(&p.get_ref().id), &join(&ppath, "id"), format!("duplicate pattern id '{}' in this section", pat.id));
+                cx.rep.error(
+                    span(&p.get_ref().id),
+                    &join(&ppath, "id"),
+                    format!("duplicate pattern id '{}' in this section", pat.id),
+                );
             }
             patterns.push(pat);
         }
@@ -686,574 +649,4 @@ fn section(
     };
     compare_published(cx, &sec, &refs.mixes[mix], r.published.as_ref(), path);
     Some(sec)
-}
-
-fn hollow_core(cx: &mut Ctx, h: &Spanned<raw::RawHollowCore>, path: &str) -> Option<HollowCore> {
-    let r = h.get_ref();
-    let width = cx.ranged::<crate::units::LengthK>(&r.width, path, "width", limits::WIDTH_IN, "in");
-    let depth = cx.ranged::<crate::units::LengthK>(&r.depth, path, "depth", limits::DEPTH_IN, "in");
-    let c = r.cores.get_ref();
-    let cpath = join(path, "cores");
-    let count = cx.count(&c.count, &cpath, "count", limits::CORES);
-    let spacing = cx.positive_len(&c.spacing, &cpath, "spacing");
-    let center = c.center_height.as_ref().map(|s| cx.positive_len(s, &cpath, "center_height"));
-    let need = |cx: &mut Ctx, v: &Option<S>, key: &str, why: &str| -> Option<Length> {
-        match v {
-            Some(s) => cx.positive_len(s, &cpath, key),
-            None => {
-                cx.rep.error(Some(r.cores.span()), &cpath, format!("missing key '{key}' ({why})"));
-                None
-            }
-        }
-    };
-    let shape_name = c.shape.get_ref().as_str();
-    let (shape, w, ht) = match shape_name {
-        "circle" => {
-            for (k, v) in [("width", &c.width), ("height", &c.height), ("corner_radius", &c.corner_radius)] {
-                if let Some(v) = v {
-                    cx.rep.error(span(v), &join(&cpath, k), format!("'{k}' does not apply to circular cores; give 'diameter'"));
-                }
-            }
-            let d = need(cx, &c.diameter, "diameter", "circular cores need a diameter");
-            (Some(CoreShape::Circle), d, d)
-        }
-        "stadium" | "oval" | "rounded-rectangle" => {
-            if let Some(v) = &c.diameter {
-                cx.rep.error(span(v), &join(&cpath, "diameter"), format!("'diameter' is for circular cores; {shape_name} cores take 'width' and 'height'"));
-            }
-            let w = need(cx, &c.width, "width", "the overall core width");
-            let ht = need(cx, &c.height, "height", "the overall core height");
-            let shape = if shape_name == "rounded-rectangle" {
-                need(cx, &c.corner_radius, "corner_radius", "rounded rectangles need a corner radius").and_then(|r| {
-                    let limit = w.zip(ht).map_or(f64::INFINITY, |(w, h)| w.get().min(h.get()) / 2.0);
-                    if r.get() > limit {
-                        cx.rep.error(
-                            c.corner_radius.as_ref().map(|s| s.span()),
-                            &join(&cpath, "corner_radius"),
-                            format!("{} in is more than half the smaller core side ({} in)", fmt(r.get()), fmt(limit)),
-                        );
-                        None
-                    } else {
-                        Some(CoreShape::RoundedRect { radius: r.get() })
-                    }
-                })
-            } else {
-                if let Some(v) = &c.corner_radius {
-                    cx.rep.error(span(v), &join(&cpath, "corner_radius"), "'corner_radius' applies only to rounded-rectangle cores");
-                }
-                Some(CoreShape::Stadium)
-            };
-            (shape, w, ht)
-        }
-        other => {
-            cx.rep.error(
-                span(&c.shape),
-                &join(&cpath, "shape"),
-                format!(
-                    "'{other}' is not a core shape{}; use circle, stadium (or oval) or rounded-rectangle",
-                    suggestion(other, ["circle", "stadium", "oval", "rounded-rectangle"])
-                ),
-            );
-            (None, None, None)
-        }
-    };
-    let keyway = match &r.keyway {
-        None => Some(None),
-        Some(k) => keyway(cx, k, &join(path, "keyway"), width.zip(depth)).map(Some),
-    };
-    let (width, depth, count, spacing, shape, w, ht, keyway) = (width?, depth?, count?, spacing?, shape?, w?, ht?, keyway?);
-    let center_height = match center {
-        None => depth.get() / 2.0,
-        Some(c) => c?.get(),
-    };
-    let hc = HollowCore {
-        width: width.get(),
-        depth: depth.get(),
-        cores: Cores {
-            shape,
-            count,
-            width: w.get(),
-            height: ht.get(),
-            spacing: spacing.get(),
-            center_height,
-        },
-        keyway,
-    };
-    let problems = hc.shell_problems();
-    for p in &problems {
-        cx.rep.error(Some(r.cores.span()), &cpath, p.clone());
-    }
-    problems.is_empty().then_some(hc)
-}
-
-fn keyway(cx: &mut Ctx, k: &Spanned<raw::RawKeyway>, path: &str, wd: Option<(Length, Length)>) -> Option<Keyway> {
-    let r = k.get_ref();
-    match (&r.profile, &r.area) {
-        (Some(p), None) => {
-            let pts = cx.points(p, path, "profile", 2)?;
-            let (w, d) = wd?;
-            let (w, d) = (w.get(), d.get());
-            let ok_ends = pts.first().is_some_and(|p| p.1.abs() < 1e-9) && pts.last().is_some_and(|p| (p.1 - d).abs() < 1e-9);
-            let rising = pts.windows(2).all(|q| q[1].1 >= q[0].1);
-            let insets = pts.iter().all(|p| p.0 >= 0.0 && p.0 < w / 4.0);
-            if !ok_ends || !rising || !insets {
-                cx.rep.error(
-                    span(p),
-                    &join(path, "profile"),
-                    format!(
-                        "the side-face profile must run from height 0 to the depth ({} in) without going down, with insets from 0 to less than a quarter of the width ({} in)",
-                        fmt(d),
-                        fmt(w / 4.0)
-                    ),
-                );
-                return None;
-            }
-            Some(Keyway::Profile(pts))
-        }
-        (None, Some(a)) => {
-            let area = cx.q::<crate::units::AreaK>(a, path, "area")?;
-            if area.get() <= 0.0 {
-                cx.rep.error(span(a), &join(path, "area"), format!("'{}' must be greater than zero", a.get_ref()));
-                return None;
-            }
-            let centroid = match &r.center_height {
-                Some(c) => cx.positive_len(c, path, "center_height")?.get(),
-                None => wd?.1.get() / 2.0,
-            };
-            Some(Keyway::Area {
-                area: area.get(),
-                centroid,
-            })
-        }
-        _ => {
-            cx.rep.error(Some(k.span()), path, "give either 'profile' (side-face points) or 'area' (area removed), not both or neither");
-            None
-        }
-    }
-}
-
-fn double_tee(cx: &mut Ctx, t: &Spanned<raw::RawDoubleTee>, path: &str) -> Option<DoubleTee> {
-    let r = t.get_ref();
-    let fw = cx.ranged::<crate::units::LengthK>(&r.flange_width, path, "flange_width", limits::WIDTH_IN, "in");
-    let ft = cx.positive_len(&r.flange_thickness, path, "flange_thickness");
-    let d = cx.ranged::<crate::units::LengthK>(&r.depth, path, "depth", limits::DEPTH_IN, "in");
-    let stems = match &r.stems {
-        None => Some(2),
-        Some(s) => cx.count(s, path, "stems", limits::STEMS),
-    };
-    let sp = cx.positive_len(&r.stem_spacing, path, "stem_spacing");
-    let wt = cx.positive_len(&r.stem_width_top, path, "stem_width_top");
-    let wb = cx.positive_len(&r.stem_width_bottom, path, "stem_width_bottom");
-    let ch = match &r.chamfer {
-        None => Some(0.0),
-        Some(c) => cx.q::<crate::units::LengthK>(c, path, "chamfer").and_then(|v| {
-            if v.get() < 0.0 {
-                cx.rep.error(span(c), &join(path, "chamfer"), format!("'{}' must not be negative", c.get_ref()));
-                None
-            } else {
-                Some(v.get())
-            }
-        }),
-    };
-    let dt = DoubleTee {
-        flange_width: fw?.get(),
-        flange_thickness: ft?.get(),
-        depth: d?.get(),
-        stems: stems?,
-        stem_spacing: sp?.get(),
-        stem_width_top: wt?.get(),
-        stem_width_bottom: wb?.get(),
-        chamfer: ch?,
-    };
-    let problems = dt.shape_problems();
-    for p in &problems {
-        cx.rep.error(Some(t.span()), path, p.clone());
-    }
-    problems.is_empty().then_some(dt)
-}
-
-fn generic(cx: &mut Ctx, g: &Spanned<raw::RawGeneric>, path: &str) -> Option<Generic> {
-    let r = g.get_ref();
-    let outline = cx.points(&r.outline, path, "outline", 3);
-    let mut voids = Vec::new();
-    let mut ok = true;
-    for (i, v) in r.void.iter().flatten().enumerate() {
-        let vpath = join(path, &format!("void {}", i + 1));
-        let rv = v.get_ref();
-        match (&rv.points, &rv.center, &rv.diameter) {
-            (Some(p), None, None) => match cx.points(p, &vpath, "points", 3) {
-                Some(p) => voids.push(VoidSpec::Polygon(p)),
-                None => ok = false,
-            },
-            (None, Some(c), Some(d)) => match (cx.point(c, &vpath, "center"), cx.positive_len(d, &vpath, "diameter")) {
-                (Some((x, y)), Some(d)) => voids.push(VoidSpec::Circle { x, y, diameter: d.get() }),
-                _ => ok = false,
-            },
-            _ => {
-                cx.rep.error(Some(v.span()), &vpath, "a void is either 'points' (a polygon) or 'center' with 'diameter' (a circle)");
-                ok = false;
-            }
-        }
-    }
-    let outline = outline?;
-    if !ok {
-        return None;
-    }
-    let spec = Generic { outline, voids };
-    let geo = spec.geometry();
-    let mut problems = spec.shape_problems();
-    if problems.is_empty() {
-        let p = geo.properties();
-        if !(limits::DEPTH_IN.0..=limits::DEPTH_IN.1).contains(&p.depth_in) {
-            problems.push(format!("depth {} in is outside the plausible range {} to {} in", fmt(p.depth_in), limits::DEPTH_IN.0, limits::DEPTH_IN.1));
-        }
-        if !(limits::WIDTH_IN.0..=limits::WIDTH_IN.1).contains(&p.width_in) {
-            problems.push(format!("width {} in is outside the plausible range {} to {} in", fmt(p.width_in), limits::WIDTH_IN.0, limits::WIDTH_IN.1));
-        }
-        if p.area_in2 <= 0.0 {
-            problems.push("the net area is not positive".into());
-        }
-    }
-    for p in &problems {
-        cx.rep.error(Some(g.span()), path, p.clone());
-    }
-    problems.is_empty().then_some(spec)
-}
-
-/// Choose `count` of `n` slots symmetrically (web or stem positions).
-fn symmetric_pick(n: usize, count: usize) -> Vec<usize> {
-    if count == n {
-        return (0..n).collect();
-    }
-    if count == 1 {
-        return vec![(n - 1) / 2];
-    }
-    let mut idx = vec![0usize; count];
-    for i in 0..count / 2 {
-        idx[i] = ((i as f64) * (n as f64 - 1.0) / (count as f64 - 1.0)).round() as usize;
-        idx[count - 1 - i] = n - 1 - idx[i];
-    }
-    if count % 2 == 1 {
-        idx[count / 2] = (n - 1) / 2;
-    }
-    idx
-}
-
-#[allow(clippy::too_many_arguments)]
-fn row_positions(cx: &mut Ctx, row: &Spanned<raw::RawRow>, count: u32, spec: &FamilySpec, geometry: &crate::section::Geometry, path: &str) -> Option<Vec<f64>> {
-    let r = row.get_ref();
-    if let Some(xs) = &r.x {
-        let mut out = Vec::new();
-        for x in xs.get_ref() {
-            out.push(cx.q::<crate::units::LengthK>(x, path, "x")?.get());
-        }
-        if out.len() != count as usize {
-            cx.rep.error(span(xs), &join(path, "x"), format!("gives {} positions for a row of {count} strands", out.len()));
-            return None;
-        }
-        return Some(out);
-    }
-    let n = count as usize;
-    match spec {
-        FamilySpec::HollowCore(h) => {
-            let webs = h.cores.web_centres(h.width);
-            if n > webs.len() {
-                cx.rep.error(
-                    Some(row.span()),
-                    path,
-                    format!("{count} strands do not fit one per web in a unit with {} webs; give their positions with x = [...]", webs.len()),
-                );
-                return None;
-            }
-            Some(symmetric_pick(webs.len(), n).into_iter().map(|i| webs[i]).collect())
-        }
-        FamilySpec::DoubleTee(t) => {
-            let stems = t.stem_centres();
-            if n % stems.len() != 0 {
-                cx.rep.error(
-                    Some(row.span()),
-                    path,
-                    format!("{count} strands do not share equally among {} stems; use a multiple of {} or give x = [...]", stems.len(), stems.len()),
-                );
-                return None;
-            }
-            let per = n / stems.len();
-            // several strands per stem in one row sit on a 2 in grid (common practice, no source)
-            Some(
-                stems
-                    .iter()
-                    .flat_map(|&c| (0..per).map(move |k| c + (k as f64 - (per as f64 - 1.0) / 2.0) * 2.0))
-                    .collect(),
-            )
-        }
-        FamilySpec::Generic(_) => {
-            let (x0, x1) = geometry.outline.x_range();
-            Some((0..n).map(|i| x0 + (x1 - x0) * (i as f64 + 0.5) / n as f64).collect())
-        }
-    }
-}
-
-#[allow(clippy::too_many_arguments)]
-fn pattern(
-    cx: &mut Ctx,
-    p: &Spanned<RawPattern>,
-    path: &str,
-    shape: Option<(&FamilySpec, &crate::section::Geometry)>,
-    family: Family,
-    refs: &Refs,
-) -> Option<Pattern> {
-    let r = p.get_ref();
-    let id = cx.id(&r.id, path);
-    let designation = if r.designation.is_some() { cx.text(&r.designation, path, "designation") } else { id.clone() };
-    let remarks = cx.text(&r.remarks, path, "remarks");
-    let strand = builtin_strand(r.strand.get_ref()).or_else(|| refs.strands.iter().find(|s| &s.id == r.strand.get_ref()).cloned());
-    if strand.is_none() && !refs.broken_strands.contains(r.strand.get_ref()) {
-        let mut names: Vec<&str> = builtin_strand_names();
-        names.extend(refs.strands.iter().map(|s| s.id.as_str()));
-        cx.rep.error(
-            span(&r.strand),
-            &join(path, "strand"),
-            format!(
-                "no strand '{}'{}; use a built-in size ({}) or a [[strand]] id",
-                r.strand.get_ref(),
-                suggestion(r.strand.get_ref(), names.iter().copied()),
-                "3/8 in, 7/16 in, 1/2 in, 0.6 in, 9.5 mm, 11.1 mm, 12.7 mm, 15.2 mm"
-            ),
-        );
-    }
-    let jacking = match &r.jacking {
-        None => Some(0.75),
-        Some(j) => {
-            let v = *j.get_ref();
-            let (lo, hi) = limits::JACKING;
-            if (lo..=hi).contains(&v) {
-                Some(v)
-            } else {
-                cx.rep.error(span(j), &join(path, "jacking"), format!("{v} is outside the plausible range {lo} to {hi} (a fraction of fpu)"));
-                None
-            }
-        }
-    };
-    let hold_down = match &r.hold_down {
-        None => Some(None),
-        Some(h) => {
-            let v = *h.get_ref();
-            let (lo, hi) = limits::HOLD_DOWN;
-            if (lo..=hi).contains(&v) {
-                Some(Some(v))
-            } else {
-                cx.rep.error(span(h), &join(path, "hold_down"), format!("{v} is outside {lo} to {hi} (a fraction of the member length from each end; 0.5 is one point at midspan)"));
-                None
-            }
-        }
-    };
-    let price = cx.opt_q::<crate::units::PriceK>(&r.price, path, "price");
-    let max_length = match &r.max_length {
-        None => Some(None),
-        Some(m) => cx.ranged::<crate::units::LengthK>(m, path, "max_length", limits::LENGTH_FT, "ft").map(Some),
-    };
-    let rows_raw = r.row.as_deref().unwrap_or(&[]);
-    if rows_raw.is_empty() {
-        cx.rep.error(Some(p.span()), path, "has no strand rows; add at least one [[section.pattern.row]]");
-    }
-    let depth = shape.map_or(f64::INFINITY, |(_, g)| g.depth);
-    let db = strand.as_ref().map_or(0.5, |s| s.diameter.get());
-    let mut rows = Vec::new();
-    let mut rows_ok = true;
-    let mut total: i64 = 0;
-    for (i, row) in rows_raw.iter().enumerate() {
-        let rpath = join(path, &format!("row {}", i + 1));
-        let rr = row.get_ref();
-        total += *rr.count.get_ref();
-        let count = cx.count(&rr.count, &rpath, "count", limits::STRANDS);
-        let height = cx.positive_len(&rr.height, &rpath, "height");
-        let end_height = rr.end_height.as_ref().map(|e| cx.positive_len(e, &rpath, "end_height"));
-        let debond = rr.debond.as_ref().map(|d| cx.positive_len(d, &rpath, "debond"));
-        let mut ok = true;
-        for (h, key, s) in [(height, "height", Some(&rr.height)), (end_height.flatten(), "end_height", rr.end_height.as_ref())] {
-            if let (Some(h), Some(s)) = (h, s) {
-                if h.get() >= depth {
-                    cx.rep.error(span(s), &join(&rpath, key), format!("'{}' is not below the top of the {} in section", s.get_ref(), fmt(depth)));
-                    ok = false;
-                }
-            }
-        }
-        if end_height.is_some() && !family.allows_depressed() {
-            cx.rep.error(
-                rr.end_height.as_ref().map(|e| e.span()),
-                &join(&rpath, "end_height"),
-                format!("{} strands stay straight; depressed strands are allowed for double-tee and generic sections only", family.name()),
-            );
-            ok = false;
-        }
-        let Some(count) = count else {
-            rows_ok = false;
-            continue;
-        };
-        let Some((spec, geometry)) = shape else {
-            rows_ok = false;
-            continue;
-        };
-        let xs = if ok { row_positions(cx, row, count, spec, geometry, &rpath) } else { None };
-        match (xs, height, end_height.unwrap_or(Some(Length::new(f64::NAN))), debond.unwrap_or(Some(Length::new(f64::NAN)))) {
-            (Some(xs), Some(height), Some(eh), Some(dl)) if ok => {
-                let eh = (!eh.get().is_nan()).then_some(eh);
-                // strands inside the concrete with positive clear cover
-                for (k, &x) in xs.iter().enumerate() {
-                    for (y, key) in [(Some(height), "height"), (eh, "end_height")] {
-                        let Some(y) = y else { continue };
-                        let c = geometry.clear_cover(x, y.get(), db);
-                        if c <= 0.0 {
-                            let in_void = geometry.voids.iter().any(|v| v.signed_distance(x, y.get()) < 0.0);
-                            let msg = if !geometry.outline.contains(x, y.get()) {
-                                format!("strand {} at x = {} in, y = {} in is not inside the concrete", k + 1, fmt(x), fmt(y.get()))
-                            } else if in_void {
-                                format!("strand {} at x = {} in, y = {} in lies inside a core or void", k + 1, fmt(x), fmt(y.get()))
-                            } else {
-                                format!(
-                                    "strand {} at x = {} in, y = {} in ({} in diameter) has no clear cover: it breaks through a surface or into a core",
-                                    k + 1,
-                                    fmt(x),
-                                    fmt(y.get()),
-                                    fmt(db)
-                                )
-                            };
-                            cx.rep.error(Some(row.span()), &join(&rpath, key), msg);
-                            ok = false;
-                        }
-                    }
-                }
-                if ok {
-                    rows.push(Row {
-                        count,
-                        height,
-                        end_height: eh,
-                        x: xs,
-                        debond: (!dl.get().is_nan()).then_some(dl),
-                    });
-                } else {
-                    rows_ok = false;
-                }
-            }
-            _ => rows_ok = false,
-        }
-    }
-    if total > limits::STRANDS.1 {
-        cx.rep.error(Some(p.span()), path, format!("has {total} strands; at most {} allowed in one pattern", limits::STRANDS.1));
-        rows_ok = false;
-    }
-    let depressed = rows.iter().any(|r| r.end_height.is_some());
-    if let Ok(Some(h)) = hold_down.ok_or(()) {
-        if !depressed && rows_ok {
-            cx.rep.warn(r.hold_down.as_ref().map(|h| h.span()), &join(path, "hold_down"), format!("hold_down {h} is given but no row has an end_height; the strands are straight"));
-        }
-    }
-    if depressed && matches!(hold_down, Some(None)) {
-        cx.rep.error(Some(p.span()), path, "depressed rows need 'hold_down' (a fraction of the member length from each end, e.g. 0.4; 0.5 for one point at midspan)");
-        rows_ok = false;
-    }
-    let mut bars = Vec::new();
-    for (i, b) in r.bar.iter().flatten().enumerate() {
-        let bpath = join(path, &format!("bar {}", i + 1));
-        let rb = b.get_ref();
-        let count = cx.count(&rb.count, &bpath, "count", limits::BARS);
-        let area = cx.ranged::<crate::units::AreaK>(&rb.area, &bpath, "area", limits::BAR_A_IN2, "in2");
-        let fy = cx.ranged::<crate::units::StressK>(&rb.fy, &bpath, "fy", limits::FY_KSI, "ksi");
-        let height = cx.positive_len(&rb.height, &bpath, "height");
-        if let Some(h) = height {
-            if h.get() >= depth {
-                cx.rep.error(span(&rb.height), &join(&bpath, "height"), format!("'{}' is not below the top of the {} in section", rb.height.get_ref(), fmt(depth)));
-                rows_ok = false;
-            }
-        }
-        match (count, area, fy, height) {
-            (Some(count), Some(area), Some(fy), Some(height)) => bars.push(Bar { count, area, fy, height }),
-            _ => rows_ok = false,
-        }
-    }
-    let (strand, jacking, hold_down, price, max_length) = (strand?, jacking?, hold_down?, price?, max_length?);
-    if !rows_ok || rows.is_empty() {
-        return None;
-    }
-    Some(Pattern {
-        id,
-        designation,
-        strand,
-        jacking,
-        hold_down: if depressed { hold_down } else { None },
-        rows,
-        bars,
-        price,
-        max_length,
-        remarks,
-    })
-}
-
-fn published(cx: &mut Ctx, p: Option<&raw::RawPublished>, path: &str) -> Option<Published> {
-    let Some(p) = p else { return Some(Published::default()) };
-    let path = join(path, "published");
-    let area = cx.opt_q::<crate::units::AreaK>(&p.area, &path, "area");
-    let yb = cx.opt_q::<crate::units::LengthK>(&p.yb, &path, "yb");
-    let inertia = cx.opt_q::<crate::units::InertiaK>(&p.inertia, &path, "inertia");
-    let (mut wa, mut wl) = (None, None);
-    let mut ok = true;
-    if let Some(w) = &p.weight {
-        if let Ok(v) = AreaLoad::parse(w.get_ref()) {
-            wa = Some(v.get());
-        } else if let Ok(v) = LineLoad::parse(w.get_ref()) {
-            wl = Some(v.get());
-        } else {
-            cx.rep.error(span(w), &join(&path, "weight"), format!("'{}' is neither a weight per area (psf, kPa) nor per length (plf, kN/m)", w.get_ref()));
-            ok = false;
-        }
-    }
-    let (area, yb, inertia) = (area?, yb?, inertia?);
-    ok.then_some(Published {
-        area,
-        yb,
-        inertia: inertia.map(Inertia::get),
-        weight_per_area: wa,
-        weight_per_length: wl,
-    })
-}
-
-fn compare_published(cx: &mut Ctx, s: &Section, mix: &Mix, raw: Option<&raw::RawPublished>, path: &str) {
-    let Some(raw) = raw else { return };
-    let path = join(path, "published");
-    let wl = s.weight_per_length(mix);
-    let checks: [(Option<f64>, f64, &str, &str, &Option<S>); 5] = [
-        (s.published.area.map(Area::get), s.props.area_in2, "area", "in²", &raw.area),
-        (s.published.yb.map(Length::get), s.props.yb_in, "yb", "in", &raw.yb),
-        (s.published.inertia, s.props.ix_in4, "inertia", "in⁴", &raw.inertia),
-        (s.published.weight_per_area.map(|w| w * 144.0), wl / s.props.width_in * 144.0, "weight", "psf", &raw.weight),
-        (s.published.weight_per_length.map(|w| w * 12.0), wl * 12.0, "weight", "plf", &raw.weight),
-    ];
-    for (given, ours, key, unit, src) in checks {
-        let Some(given) = given else { continue };
-        let diff = (given - ours) / ours;
-        if diff.abs() > PUBLISHED_TOLERANCE {
-            cx.rep.warn(
-                src.as_ref().map(|s| s.span()),
-                &join(&path, key),
-                format!(
-                    "published {key} {given:.1} {unit} differs from the computed {ours:.1} {unit} by {:+.1} %; check the dimensions or the published figure",
-                    diff * 100.0
-                ),
-            );
-        }
-    }
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-
-    #[test]
-    fn symmetric_choices() {
-        assert_eq!(symmetric_pick(7, 4), vec![0, 2, 4, 6]);
-        assert_eq!(symmetric_pick(7, 5), vec![0, 2, 3, 4, 6]);
-        assert_eq!(symmetric_pick(7, 7), (0..7).collect::<Vec<_>>());
-        assert_eq!(symmetric_pick(8, 2), vec![0, 7]);
-        assert_eq!(symmetric_pick(7, 1), vec![3]);
-    }
 }

@@ -123,9 +123,24 @@ impl Cores {
                 let cx = x0 + i as f64 * self.spacing;
                 let cy = self.center_height;
                 match self.shape {
-                    CoreShape::Circle => Shape::Circle { cx, cy, r: self.width / 2.0 },
-                    CoreShape::Stadium => Shape::Stadium { cx, cy, w: self.width, h: self.height },
-                    CoreShape::RoundedRect { radius } => Shape::RoundedRect { cx, cy, w: self.width, h: self.height, r: radius },
+                    CoreShape::Circle => Shape::Circle {
+                        cx,
+                        cy,
+                        r: self.width / 2.0,
+                    },
+                    CoreShape::Stadium => Shape::Stadium {
+                        cx,
+                        cy,
+                        w: self.width,
+                        h: self.height,
+                    },
+                    CoreShape::RoundedRect { radius } => Shape::RoundedRect {
+                        cx,
+                        cy,
+                        w: self.width,
+                        h: self.height,
+                        r: radius,
+                    },
                 }
             })
             .collect()
@@ -331,7 +346,11 @@ impl Generic {
             .iter()
             .map(|v| match v {
                 VoidSpec::Polygon(p) => Shape::Polygon(Polygon { points: p.clone() }),
-                VoidSpec::Circle { x, y, diameter } => Shape::Circle { cx: *x, cy: *y, r: diameter / 2.0 },
+                VoidSpec::Circle { x, y, diameter } => Shape::Circle {
+                    cx: *x,
+                    cy: *y,
+                    r: diameter / 2.0,
+                },
             })
             .collect();
         let top = voids.iter().map(|v| v.y_range().1).fold(f64::NEG_INFINITY, f64::max);
@@ -366,11 +385,16 @@ impl Generic {
         }
         for (i, v) in g.voids.iter().enumerate() {
             let pts = v.boundary_points(180);
-            if !pts.iter().all(|&(x, y)| g.outline.contains(x, y) && g.outline.distance_to_edge(x, y) > 1e-9) {
+            if !pts
+                .iter()
+                .all(|&(x, y)| g.outline.contains(x, y) && g.outline.distance_to_edge(x, y) > 1e-9)
+            {
                 out.push(format!("void {} is not wholly inside the outline", i + 1));
             }
             for (j, w) in g.voids.iter().enumerate().skip(i + 1) {
-                if pts.iter().any(|&(x, y)| w.signed_distance(x, y) < 0.0) || w.boundary_points(180).iter().any(|&(x, y)| v.signed_distance(x, y) < 0.0) {
+                if pts.iter().any(|&(x, y)| w.signed_distance(x, y) < 0.0)
+                    || w.boundary_points(180).iter().any(|&(x, y)| v.signed_distance(x, y) < 0.0)
+                {
                     out.push(format!("voids {} and {} overlap", i + 1, j + 1));
                 }
             }
@@ -469,7 +493,11 @@ mod tests {
         // a chamfer takes off 2 stems × 2 corners × c²/2
         let mut c = t;
         c.chamfer = 0.75;
-        assert_relative_eq!(c.geometry().properties().area_in2, a - 4.0 * 0.75 * 0.75 / 2.0, max_relative = 1e-12);
+        assert_relative_eq!(
+            c.geometry().properties().area_in2,
+            a - 4.0 * 0.75 * 0.75 / 2.0,
+            max_relative = 1e-12
+        );
         assert!(t.shape_problems().is_empty());
     }
 }

@@ -150,9 +150,7 @@ impl Polygon {
 
     /// Perimeter, in.
     pub fn perimeter(&self) -> f64 {
-        self.edges()
-            .map(|((x0, y0), (x1, y1))| (x1 - x0).hypot(y1 - y0))
-            .sum()
+        self.edges().map(|((x0, y0), (x1, y1))| (x1 - x0).hypot(y1 - y0)).sum()
     }
 
     /// Total width of the polygon cut by the horizontal line at `y`, in.
@@ -165,9 +163,7 @@ impl Polygon {
             }
         }
         xs.sort_by(f64::total_cmp);
-        xs.chunks(2)
-            .map(|p| if p.len() == 2 { p[1] - p[0] } else { 0.0 })
-            .sum()
+        xs.chunks(2).map(|p| if p.len() == 2 { p[1] - p[0] } else { 0.0 }).sum()
     }
 
     /// Whether (x, y) lies inside (even-odd rule).
@@ -270,11 +266,10 @@ impl Shape {
             }
             Shape::RoundedRect { cy, w, h, r, .. } => {
                 let band = Moments::rect(w, h - 2.0 * r, cy);
-                let strips = Moments::rect(w - 2.0 * r, r, cy + h / 2.0 - r / 2.0)
-                    .plus(Moments::rect(w - 2.0 * r, r, cy - h / 2.0 + r / 2.0));
+                let strips =
+                    Moments::rect(w - 2.0 * r, r, cy + h / 2.0 - r / 2.0).plus(Moments::rect(w - 2.0 * r, r, cy - h / 2.0 + r / 2.0));
                 // two quarter circles at the top act like one semicircle in y
-                let caps = Moments::semicircle(r, cy + h / 2.0 - r, true)
-                    .plus(Moments::semicircle(r, cy - h / 2.0 + r, false));
+                let caps = Moments::semicircle(r, cy + h / 2.0 - r, true).plus(Moments::semicircle(r, cy - h / 2.0 + r, false));
                 band.plus(strips).plus(caps)
             }
         }
@@ -451,7 +446,12 @@ mod tests {
     #[test]
     fn stadium_equals_rect_plus_circle() {
         // vertical stadium 4 × 10: rectangle 4 × 6 plus a circle of radius 2
-        let s = Shape::Stadium { cx: 0.0, cy: 6.0, w: 4.0, h: 10.0 };
+        let s = Shape::Stadium {
+            cx: 0.0,
+            cy: 6.0,
+            w: 4.0,
+            h: 10.0,
+        };
         let m = s.moments();
         assert_relative_eq!(m.area, 24.0 + PI * 4.0, max_relative = 1e-12);
         assert_relative_eq!(m.qx, m.area * 6.0, max_relative = 1e-12);
@@ -460,7 +460,12 @@ mod tests {
         let semi = 2.0 * (semi_c + PI * 2.0 * (3.0 + 8.0 / (3.0 * PI)).powi(2));
         assert_relative_eq!(m.ixx - m.area * 36.0, 4.0 * 216.0 / 12.0 + semi, max_relative = 1e-12);
         // horizontal stadium: same area as the rotated one
-        let hz = Shape::Stadium { cx: 0.0, cy: 6.0, w: 10.0, h: 4.0 };
+        let hz = Shape::Stadium {
+            cx: 0.0,
+            cy: 6.0,
+            w: 10.0,
+            h: 4.0,
+        };
         assert_relative_eq!(hz.moments().area, m.area, max_relative = 1e-12);
         assert_relative_eq!(s.perimeter(), 12.0 + 4.0 * PI, max_relative = 1e-12);
         assert_relative_eq!(s.chord(6.0), 4.0);
@@ -470,23 +475,46 @@ mod tests {
     #[test]
     fn rounded_rect_limits() {
         // r = 0 is a rectangle; r = w/2 = h/2 is a circle
-        let rr = Shape::RoundedRect { cx: 0.0, cy: 3.0, w: 4.0, h: 6.0, r: 0.0 };
+        let rr = Shape::RoundedRect {
+            cx: 0.0,
+            cy: 3.0,
+            w: 4.0,
+            h: 6.0,
+            r: 0.0,
+        };
         let m = rr.moments();
         assert_relative_eq!(m.area, 24.0);
         assert_relative_eq!(m.ixx - 24.0 * 9.0, 4.0 * 216.0 / 12.0, max_relative = 1e-12);
-        let c = Shape::RoundedRect { cx: 0.0, cy: 3.0, w: 4.0, h: 4.0, r: 2.0 };
+        let c = Shape::RoundedRect {
+            cx: 0.0,
+            cy: 3.0,
+            w: 4.0,
+            h: 4.0,
+            r: 2.0,
+        };
         let mc = Shape::Circle { cx: 0.0, cy: 3.0, r: 2.0 }.moments();
         assert_relative_eq!(c.moments().area, mc.area, max_relative = 1e-12);
         assert_relative_eq!(c.moments().ixx, mc.ixx, max_relative = 1e-12);
         // area w h − (4 − π) r²
-        let g = Shape::RoundedRect { cx: 0.0, cy: 8.0, w: 7.25, h: 12.25, r: 2.5 };
+        let g = Shape::RoundedRect {
+            cx: 0.0,
+            cy: 8.0,
+            w: 7.25,
+            h: 12.25,
+            r: 2.5,
+        };
         assert_relative_eq!(g.moments().area, 7.25 * 12.25 - (4.0 - PI) * 6.25, max_relative = 1e-12);
         assert_relative_eq!(g.signed_distance(0.0, 8.0), -7.25 / 2.0, max_relative = 1e-12);
     }
 
     #[test]
     fn boundary_points_lie_on_boundary() {
-        let s = Shape::Stadium { cx: 1.0, cy: 6.0, w: 4.0, h: 10.0 };
+        let s = Shape::Stadium {
+            cx: 1.0,
+            cy: 6.0,
+            w: 4.0,
+            h: 10.0,
+        };
         for (x, y) in s.boundary_points(64) {
             assert!(s.signed_distance(x, y).abs() < 1e-9);
         }
