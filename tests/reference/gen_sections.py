@@ -46,6 +46,7 @@ from fractions import Fraction
 from pathlib import Path
 
 import shapely
+import shapely.affinity
 from shapely.geometry import Polygon
 from shapely.ops import unary_union
 
