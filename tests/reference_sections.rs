@@ -12,7 +12,8 @@ const TOLERANCE: f64 = 1e-3;
 #[test]
 fn section_properties_agree_with_sectionproperties() {
     let root = Path::new(env!("CARGO_MANIFEST_DIR"));
-    let refs: serde_json::Value = serde_json::from_str(&std::fs::read_to_string(root.join("tests/reference/sections.json")).unwrap()).unwrap();
+    let refs: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(root.join("tests/reference/sections.json")).unwrap()).unwrap();
     let table = refs["sections"].as_object().unwrap();
     let mut compared = 0;
     for file in ["catalog/demo-us.toml", "catalog/demo-si.toml", "tests/reference/shapes.toml"] {
@@ -20,11 +21,17 @@ fn section_properties_agree_with_sectionproperties() {
         let stem = Path::new(file).file_stem().unwrap().to_str().unwrap();
         for s in &cat.sections {
             let key = format!("{stem}/{}", s.id);
-            let r = table.get(&key).unwrap_or_else(|| panic!("{key} missing from sections.json: run gen_sections.py"));
+            let r = table
+                .get(&key)
+                .unwrap_or_else(|| panic!("{key} missing from sections.json: run gen_sections.py"));
             for (name, ours) in [("area_in2", s.props.area_in2), ("yb_in", s.props.yb_in), ("ix_in4", s.props.ix_in4)] {
                 let theirs = r[name].as_f64().unwrap();
                 let rel = (ours - theirs).abs() / theirs.abs();
-                assert!(rel <= TOLERANCE, "{key} {name}: plankwise {ours} vs sectionproperties {theirs} ({:.4} %)", rel * 100.0);
+                assert!(
+                    rel <= TOLERANCE,
+                    "{key} {name}: plankwise {ours} vs sectionproperties {theirs} ({:.4} %)",
+                    rel * 100.0
+                );
             }
             compared += 1;
         }
