@@ -225,6 +225,8 @@ pub struct SectionSummary {
     pub weight_psf: f64,
     /// Equivalent thickness for fire, IBC 2021 §722.2.2.1, in.
     pub equiv_thickness_in: f64,
+    /// Summed web width at 21 heights from soffit to top: [height_in, width_in].
+    pub web_widths_in: Vec<[f64; 2]>,
     /// Pattern ids.
     pub patterns: Vec<String>,
 }
@@ -274,6 +276,13 @@ impl Section {
             weight_plf: wl * 12.0,
             weight_psf: wl / self.props.width_in * 144.0,
             equiv_thickness_in: self.equivalent_thickness(),
+            web_widths_in: (0..=20)
+                .map(|k| {
+                    // just inside the soffit and the top, so the faces count
+                    let y = (k as f64 / 20.0 * self.props.depth_in).clamp(1e-6, self.props.depth_in - 1e-6);
+                    [y, self.geometry.width_at(y)]
+                })
+                .collect(),
             patterns: self.patterns.iter().map(|p| p.id.clone()).collect(),
         }
     }

@@ -148,3 +148,24 @@ fn a_closed_pipe_is_not_an_error() {
     child.stderr.take().unwrap().read_to_string(&mut err).unwrap();
     assert_eq!(status.code(), Some(0), "{err}");
 }
+
+#[test]
+fn the_example_in_the_catalog_reference_is_valid() {
+    let doc = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/catalog/README.md")).unwrap();
+    let start = doc.rfind("```toml").unwrap() + "```toml".len();
+    let end = start + doc[start..].find("```").unwrap();
+    let cat = plankwise::catalog::Catalog::from_str(&doc[start..end], "catalog/README.md").unwrap();
+    assert_eq!(cat.entry_count(), 1);
+    assert!(cat.warnings.is_empty());
+}
+
+#[test]
+fn web_widths_follow_the_cores() {
+    let (_, out, _) = run(&["sections", "--json"]);
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    let w = v[1]["web_widths_in"].as_array().unwrap();
+    assert_eq!(w.len(), 21);
+    // 8 in plank: full 48 in at the soffit, 48 − 6 × 5.5 − 2 × 0.625 = 13.75 in at core centres
+    assert!((w[0][1].as_f64().unwrap() - 48.0).abs() < 1e-9);
+    assert!((w[10][1].as_f64().unwrap() - 13.75).abs() < 1e-9);
+}
