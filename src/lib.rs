@@ -13,8 +13,13 @@
 
 #![forbid(unsafe_code)]
 
+pub mod case;
 pub mod catalog;
+pub mod checks;
 pub mod material;
+pub mod member;
+pub mod prestress;
 pub mod report;
 pub mod section;
+pub mod strength;
 pub mod units;

@@ -1,5 +1,7 @@
 //! Printers over `impl Write`: plain text for people, JSON for scripts.
 
+pub mod check;
+
 use std::io::{self, Write};
 
 use crate::catalog::{Catalog, Severity};

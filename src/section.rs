@@ -137,6 +137,17 @@ impl Geometry {
         m
     }
 
+    /// Area integrals of the net concrete between heights `lo` and `hi`
+    /// (a lumped keyway reduction is left out: it sits at the edges and is
+    /// small next to a compression zone).
+    pub fn moments_between(&self, lo: f64, hi: f64) -> Moments {
+        let mut m = self.outline.moments_between(lo, hi);
+        for v in &self.voids {
+            m = m.minus(v.moments_between(lo, hi));
+        }
+        m
+    }
+
     /// Net width of concrete cut by the horizontal line at `y`, in: the
     /// summed web width at that height. A lumped reduction is ignored here.
     pub fn width_at(&self, y: f64) -> f64 {

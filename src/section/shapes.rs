@@ -246,32 +246,206 @@ fn half_chord(r: f64, dy: f64) -> f64 {
     if dy.abs() >= r { 0.0 } else { (r * r - dy * dy).sqrt() }
 }
 
+/// A horizontal band of a shape, for exact integration between two heights.
+#[derive(Debug, Clone, Copy, PartialEq)]
+enum Piece {
+    /// A rectangle of width `b` from `y0` to `y1`.
+    Rect { b: f64, y0: f64, y1: f64 },
+    /// The part of a full circle (radius `r`, centre height `yc`) between `lo` and `hi`.
+    Circle { r: f64, yc: f64, lo: f64, hi: f64 },
+}
+
+/// Antiderivatives of the circle chord 2√(r² − t²) times 1, t and t².
+fn circle_f(r: f64, t: f64) -> (f64, f64, f64) {
+    let t = t.clamp(-r, r);
+    let root = (r * r - t * t).max(0.0).sqrt();
+    let asin = (t / r).clamp(-1.0, 1.0).asin();
+    let f0 = t * root + r * r * asin;
+    let f1 = -2.0 / 3.0 * root.powi(3);
+    let f2 = t / 4.0 * (2.0 * t * t - r * r) * root + r.powi(4) / 4.0 * asin;
+    (f0, f1, f2)
+}
+
+impl Piece {
+    fn between(self, lo: f64, hi: f64) -> Moments {
+        match self {
+            Piece::Rect { b, y0, y1 } => {
+                let (a, c) = (y0.max(lo), y1.min(hi));
+                if c <= a {
+                    Moments::default()
+                } else {
+                    Moments::rect(b, c - a, (a + c) / 2.0)
+                }
+            }
+            Piece::Circle { r, yc, lo: l0, hi: h0 } => {
+                let (a, c) = (l0.max(lo), h0.min(hi));
+                if c <= a {
+                    return Moments::default();
+                }
+                let (a0, a1, a2) = circle_f(r, a - yc);
+                let (c0, c1, c2) = circle_f(r, c - yc);
+                let (m0, m1, m2) = (c0 - a0, c1 - a1, c2 - a2);
+                Moments {
+                    area: m0,
+                    qx: yc * m0 + m1,
+                    ixx: yc * yc * m0 + 2.0 * yc * m1 + m2,
+                }
+            }
+        }
+    }
+
+    fn chord(self, y: f64) -> f64 {
+        match self {
+            Piece::Rect { b, y0, y1 } => {
+                if y >= y0 && y < y1 {
+                    b
+                } else {
+                    0.0
+                }
+            }
+            Piece::Circle { r, yc, lo, hi } => {
+                if y >= lo && y < hi {
+                    2.0 * half_chord(r, y - yc)
+                } else {
+                    0.0
+                }
+            }
+        }
+    }
+}
+
+/// Sutherland–Hodgman clip of a polygon to lo ≤ y ≤ hi; exact for the area
+/// integrals even where the result has zero-width bridges.
+fn clip_band(points: &[(f64, f64)], lo: f64, hi: f64) -> Vec<(f64, f64)> {
+    fn clip(pts: &[(f64, f64)], inside: &dyn Fn(f64) -> bool, at: f64) -> Vec<(f64, f64)> {
+        let mut out = Vec::with_capacity(pts.len() + 4);
+        for i in 0..pts.len() {
+            let p = pts[i];
+            let q = pts[(i + 1) % pts.len()];
+            let (pin, qin) = (inside(p.1), inside(q.1));
+            if pin {
+                out.push(p);
+            }
+            if pin != qin {
+                let t = (at - p.1) / (q.1 - p.1);
+                out.push((p.0 + t * (q.0 - p.0), at));
+            }
+        }
+        out
+    }
+    let a = clip(points, &|y| y >= lo, lo);
+    clip(&a, &|y| y <= hi, hi)
+}
+
+impl Polygon {
+    /// Area integrals of the part between heights `lo` and `hi`.
+    pub fn moments_between(&self, lo: f64, hi: f64) -> Moments {
+        let c = clip_band(&self.points, lo, hi);
+        if c.len() < 3 {
+            return Moments::default();
+        }
+        Polygon { points: c }.moments()
+    }
+}
+
 impl Shape {
-    /// Area integrals about the soffit line.
-    pub fn moments(&self) -> Moments {
+    /// Horizontal bands that make up the shape (curved shapes only).
+    fn pieces(&self) -> Vec<Piece> {
         match *self {
-            Shape::Polygon(ref p) => p.moments(),
-            Shape::Circle { cy, r, .. } => Moments::circle(r, cy),
+            Shape::Polygon(_) => Vec::new(),
+            Shape::Circle { cy, r, .. } => vec![Piece::Circle {
+                r,
+                yc: cy,
+                lo: cy - r,
+                hi: cy + r,
+            }],
             Shape::Stadium { cy, w, h, .. } => {
                 if h >= w {
-                    let r = w / 2.0;
-                    let s = h - w;
-                    Moments::rect(w, s, cy)
-                        .plus(Moments::semicircle(r, cy + s / 2.0, true))
-                        .plus(Moments::semicircle(r, cy - s / 2.0, false))
+                    let (r, s) = (w / 2.0, (h - w) / 2.0);
+                    vec![
+                        Piece::Rect {
+                            b: w,
+                            y0: cy - s,
+                            y1: cy + s,
+                        },
+                        Piece::Circle {
+                            r,
+                            yc: cy + s,
+                            lo: cy + s,
+                            hi: cy + s + r,
+                        },
+                        Piece::Circle {
+                            r,
+                            yc: cy - s,
+                            lo: cy - s - r,
+                            hi: cy - s,
+                        },
+                    ]
                 } else {
-                    // the two end caps together act like one circle in y
-                    Moments::rect(w - h, h, cy).plus(Moments::circle(h / 2.0, cy))
+                    let r = h / 2.0;
+                    vec![
+                        Piece::Rect {
+                            b: w - h,
+                            y0: cy - r,
+                            y1: cy + r,
+                        },
+                        Piece::Circle {
+                            r,
+                            yc: cy,
+                            lo: cy - r,
+                            hi: cy + r,
+                        },
+                    ]
                 }
             }
             Shape::RoundedRect { cy, w, h, r, .. } => {
-                let band = Moments::rect(w, h - 2.0 * r, cy);
-                let strips =
-                    Moments::rect(w - 2.0 * r, r, cy + h / 2.0 - r / 2.0).plus(Moments::rect(w - 2.0 * r, r, cy - h / 2.0 + r / 2.0));
-                // two quarter circles at the top act like one semicircle in y
-                let caps = Moments::semicircle(r, cy + h / 2.0 - r, true).plus(Moments::semicircle(r, cy - h / 2.0 + r, false));
-                band.plus(strips).plus(caps)
+                let s = h / 2.0 - r;
+                vec![
+                    Piece::Rect {
+                        b: w,
+                        y0: cy - s,
+                        y1: cy + s,
+                    },
+                    Piece::Rect {
+                        b: w - 2.0 * r,
+                        y0: cy + s,
+                        y1: cy + h / 2.0,
+                    },
+                    Piece::Rect {
+                        b: w - 2.0 * r,
+                        y0: cy - h / 2.0,
+                        y1: cy - s,
+                    },
+                    Piece::Circle {
+                        r,
+                        yc: cy + s,
+                        lo: cy + s,
+                        hi: cy + s + r,
+                    },
+                    Piece::Circle {
+                        r,
+                        yc: cy - s,
+                        lo: cy - s - r,
+                        hi: cy - s,
+                    },
+                ]
             }
+        }
+    }
+
+    /// Area integrals of the part of the shape between heights `lo` and `hi`.
+    pub fn moments_between(&self, lo: f64, hi: f64) -> Moments {
+        match self {
+            Shape::Polygon(p) => p.moments_between(lo, hi),
+            _ => self.pieces().iter().fold(Moments::default(), |m, p| m.plus(p.between(lo, hi))),
+        }
+    }
+
+    /// Area integrals about the soffit line.
+    pub fn moments(&self) -> Moments {
+        match self {
+            Shape::Polygon(p) => p.moments(),
+            _ => self.moments_between(f64::NEG_INFINITY, f64::INFINITY),
         }
     }
 
@@ -287,31 +461,9 @@ impl Shape {
 
     /// Width of the shape cut by the horizontal line at `y`, in.
     pub fn chord(&self, y: f64) -> f64 {
-        match *self {
-            Shape::Polygon(ref p) => p.chord(y),
-            Shape::Circle { cy, r, .. } => 2.0 * half_chord(r, y - cy),
-            Shape::Stadium { cy, w, h, .. } => {
-                let dy = (y - cy).abs();
-                if h >= w {
-                    let s = (h - w) / 2.0;
-                    if dy <= s { w } else { 2.0 * half_chord(w / 2.0, dy - s) }
-                } else if dy >= h / 2.0 {
-                    0.0
-                } else {
-                    (w - h) + 2.0 * half_chord(h / 2.0, dy)
-                }
-            }
-            Shape::RoundedRect { cy, w, h, r, .. } => {
-                let dy = (y - cy).abs();
-                let s = h / 2.0 - r;
-                if dy >= h / 2.0 {
-                    0.0
-                } else if dy <= s {
-                    w
-                } else {
-                    (w - 2.0 * r) + 2.0 * half_chord(r, dy - s)
-                }
-            }
+        match self {
+            Shape::Polygon(p) => p.chord(y),
+            _ => self.pieces().iter().map(|p| p.chord(y)).sum(),
         }
     }
 
@@ -518,6 +670,52 @@ mod tests {
         for (x, y) in s.boundary_points(64) {
             assert!(s.signed_distance(x, y).abs() < 1e-9);
         }
+    }
+
+    #[test]
+    fn bands_add_up_to_the_whole() {
+        // Integrating the part above and below any cut gives the whole shape,
+        // and a half circle has its centroid 4r/(3π) from the diameter.
+        let shapes = [
+            Shape::Circle { cx: 0.0, cy: 4.0, r: 2.75 },
+            Shape::Stadium {
+                cx: 0.0,
+                cy: 5.0,
+                w: 5.75,
+                h: 7.0,
+            },
+            Shape::Stadium {
+                cx: 0.0,
+                cy: 4.0,
+                w: 9.0,
+                h: 4.0,
+            },
+            Shape::RoundedRect {
+                cx: 0.0,
+                cy: 8.0,
+                w: 7.25,
+                h: 12.25,
+                r: 2.5,
+            },
+            Shape::Polygon(rect_poly(12.0, 8.0)),
+        ];
+        for s in &shapes {
+            let whole = s.moments();
+            for cut in [0.5, 2.0, 3.3, 4.0, 6.1, 9.0, 13.0] {
+                let m = s
+                    .moments_between(f64::NEG_INFINITY, cut)
+                    .plus(s.moments_between(cut, f64::INFINITY));
+                assert_relative_eq!(m.area, whole.area, max_relative = 1e-12);
+                assert_relative_eq!(m.qx, whole.qx, max_relative = 1e-12);
+                assert_relative_eq!(m.ixx, whole.ixx, max_relative = 1e-12);
+            }
+        }
+        let half = Shape::Circle { cx: 0.0, cy: 0.0, r: 3.0 }.moments_between(0.0, 10.0);
+        assert_relative_eq!(half.area, PI * 9.0 / 2.0, max_relative = 1e-12);
+        assert_relative_eq!(half.qx / half.area, 4.0 * 3.0 / (3.0 * PI), max_relative = 1e-12);
+        let band = Shape::Polygon(rect_poly(12.0, 8.0)).moments_between(6.0, 100.0);
+        assert_relative_eq!(band.area, 24.0);
+        assert_relative_eq!(band.qx, 24.0 * 7.0);
     }
 
     #[test]

@@ -1,0 +1,324 @@
+//! The design case: span, bearings, loads and criteria, and the moments and
+//! shears they cause along a simply supported member.
+//!
+//! x is measured along the span from the centre of the left bearing; the
+//! member ends lie half a bearing length beyond each bearing centre, so the
+//! member length is span + bearing length (common practice, no source).
+
+use serde::Serialize;
+
+use crate::material::Mix;
+use crate::units::{AreaLoad, Length, LineLoad};
+
+/// What the member carries.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Use {
+    /// A floor (live load L).
+    Floor,
+    /// A roof (roof live load Lr or snow S).
+    Roof,
+}
+
+/// Service class of a prestressed flexural member, ACI 318-19 Table 24.5.2.1.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+pub enum ServiceClass {
+    /// Uncracked: ft ≤ 7.5√f′c.
+    U,
+    /// Transition: 7.5√f′c < ft ≤ 12√f′c.
+    T,
+    /// Cracked: ft > 12√f′c.
+    C,
+}
+
+impl ServiceClass {
+    /// "U", "T" or "C".
+    pub fn name(self) -> &'static str {
+        match self {
+            ServiceClass::U => "U",
+            ServiceClass::T => "T",
+            ServiceClass::C => "C",
+        }
+    }
+}
+
+/// Dead or live, for a line load.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "lowercase")]
+pub enum LoadKind {
+    /// Permanent (a wall).
+    Dead,
+    /// Transient (a movable partition counted as live).
+    Live,
+}
+
+/// A line load across the member (a wall or partition parallel to the
+/// supports): force per unit width of member at a distance from the left support.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct LineLoadSpec {
+    /// Force per width, lbf/in (entered as "0.8 klf").
+    pub w: LineLoad,
+    /// Distance from the left bearing centre.
+    pub at: Length,
+    /// Dead or live.
+    pub kind: LoadKind,
+}
+
+/// A composite cast-in-place topping, placed unshored: its weight acts on
+/// the bare member, later loads on the composite section.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Topping {
+    /// Thickness.
+    pub thickness: Length,
+    /// Topping concrete.
+    pub mix: Mix,
+}
+
+/// How the long-term prestress loss is found.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum LossMethod {
+    /// Zia, Preston, Scott & Workman (1979).
+    Zia,
+    /// A total loss given by the user (elastic shortening still computed
+    /// for the release stresses).
+    LumpSum(crate::units::Stress),
+}
+
+/// One bay's design case.
+#[derive(Debug, Clone, PartialEq)]
+pub struct DesignCase {
+    /// Span, centre to centre of bearings.
+    pub span: Length,
+    /// Bearing length at each end.
+    pub bearing: Length,
+    /// Superimposed dead load (area).
+    pub sdl: AreaLoad,
+    /// Live load (area).
+    pub live: AreaLoad,
+    /// Roof live load (area).
+    pub roof_live: AreaLoad,
+    /// Snow load (area).
+    pub snow: AreaLoad,
+    /// Sustained part of the live load, 0–1.
+    pub sustained_live: f64,
+    /// Line loads.
+    pub line_loads: Vec<LineLoadSpec>,
+    /// Composite topping, if any.
+    pub topping: Option<Topping>,
+    /// Floor or roof.
+    pub member_use: Use,
+    /// Highest service class allowed.
+    pub class_allowed: ServiceClass,
+    /// Average ambient relative humidity, %.
+    pub humidity: f64,
+    /// Loss method.
+    pub losses: LossMethod,
+}
+
+/// Default bearing length, in (common practice, no source: 3–4 in on steel
+/// or concrete ledges for hollow-core, more for tees).
+pub const DEFAULT_BEARING_IN: f64 = 4.0;
+/// Default sustained part of the live load (common practice, no source;
+/// ACI 318 does not define it).
+pub const DEFAULT_SUSTAINED_LIVE: f64 = 0.3;
+/// Default relative humidity, %.
+pub const DEFAULT_HUMIDITY: f64 = 70.0;
+
+impl DesignCase {
+    /// A floor case with the defaults and no loads.
+    pub fn new(span: Length) -> DesignCase {
+        DesignCase {
+            span,
+            bearing: Length::new(DEFAULT_BEARING_IN),
+            sdl: AreaLoad::new(0.0),
+            live: AreaLoad::new(0.0),
+            roof_live: AreaLoad::new(0.0),
+            snow: AreaLoad::new(0.0),
+            sustained_live: DEFAULT_SUSTAINED_LIVE,
+            line_loads: Vec::new(),
+            topping: None,
+            member_use: Use::Floor,
+            class_allowed: ServiceClass::U,
+            humidity: DEFAULT_HUMIDITY,
+            losses: LossMethod::Zia,
+        }
+    }
+    /// Member length = span + bearing length.
+    pub fn member_length(&self) -> f64 {
+        self.span.get() + self.bearing.get()
+    }
+    /// The larger of the roof live and snow loads: "(Lr or S)" in ASCE 7.
+    pub fn roof_load(&self) -> f64 {
+        self.roof_live.get().max(self.snow.get())
+    }
+}
+
+/// Moment (lbf·in) and shear (lbf) at x from a uniform load w (lbf/in) on span l.
+pub fn uniform(w: f64, l: f64, x: f64) -> (f64, f64) {
+    (w * x * (l - x) / 2.0, w * (l / 2.0 - x))
+}
+
+/// Moment and shear at x from a point load p (lbf) at a on span l.
+pub fn point(p: f64, a: f64, l: f64, x: f64) -> (f64, f64) {
+    if x <= a {
+        (p * (l - a) * x / l, p * (l - a) / l)
+    } else {
+        (p * a * (l - x) / l, -p * a / l)
+    }
+}
+
+/// The unfactored load effects at one station, by load group (lbf·in, lbf).
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
+pub struct Effects {
+    /// Member self-weight, on the bare section.
+    pub m_self: f64,
+    /// Topping weight, on the bare section.
+    pub m_topping: f64,
+    /// Superimposed dead and dead line loads, on the composite section.
+    pub m_sdl: f64,
+    /// Live load and live line loads.
+    pub m_live: f64,
+    /// Roof live or snow, the larger.
+    pub m_roof: f64,
+    /// Shears in the same groups.
+    pub v_self: f64,
+    /// Shear from topping weight.
+    pub v_topping: f64,
+    /// Shear from superimposed dead.
+    pub v_sdl: f64,
+    /// Shear from live.
+    pub v_live: f64,
+    /// Shear from roof live or snow.
+    pub v_roof: f64,
+}
+
+impl Effects {
+    /// Dead-load moment, all groups.
+    pub fn m_dead(&self) -> f64 {
+        self.m_self + self.m_topping + self.m_sdl
+    }
+    /// Dead-load shear, all groups.
+    pub fn v_dead(&self) -> f64 {
+        self.v_self + self.v_topping + self.v_sdl
+    }
+}
+
+/// A strength load combination of ASCE 7-16 §2.3.1 (gravity only).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Combination {
+    /// Its name as printed.
+    pub name: &'static str,
+    /// Factor on D.
+    pub d: f64,
+    /// Factor on L.
+    pub l: f64,
+    /// Factor on Lr or S.
+    pub r: f64,
+}
+
+/// ASCE 7-16 §2.3.1 combinations 1–3 (reference sheet §8.1: checked against
+/// the published text). Combination 3 takes 0.5L, the exception for
+/// L ≤ 100 psf outside garages and assembly areas.
+pub const COMBINATIONS: [Combination; 3] = [
+    Combination {
+        name: "1.4D",
+        d: 1.4,
+        l: 0.0,
+        r: 0.0,
+    },
+    Combination {
+        name: "1.2D+1.6L+0.5(Lr or S)",
+        d: 1.2,
+        l: 1.6,
+        r: 0.5,
+    },
+    Combination {
+        name: "1.2D+1.6(Lr or S)+0.5L",
+        d: 1.2,
+        l: 0.5,
+        r: 1.6,
+    },
+];
+
+impl Combination {
+    /// Factored moment and shear.
+    pub fn apply(&self, e: &Effects) -> (f64, f64) {
+        (
+            self.d * e.m_dead() + self.l * e.m_live + self.r * e.m_roof,
+            self.d * e.v_dead() + self.l * e.v_live + self.r * e.v_roof,
+        )
+    }
+}
+
+/// The governing factored moment and shear at a station, with the names of
+/// the combinations that give them.
+pub fn factored(e: &Effects) -> (f64, &'static str, f64, &'static str) {
+    let mut best_m = (f64::NEG_INFINITY, "");
+    let mut best_v = (f64::NEG_INFINITY, "");
+    for c in &COMBINATIONS {
+        let (m, v) = c.apply(e);
+        if m > best_m.0 {
+            best_m = (m, c.name);
+        }
+        if v.abs() > best_v.0 {
+            best_v = (v.abs(), c.name);
+        }
+    }
+    (best_m.0, best_m.1, best_v.0, best_v.1)
+}
+
+/// Service moments: (sustained, total), lbf·in. Sustained = D + ψL; total
+/// is the largest of D + L, D + (Lr or S) and D + 0.75L + 0.75(Lr or S),
+/// the gravity combinations of ASCE 7-16 §2.4.1 (ACI 318 prescribes no
+/// service factors).
+pub fn service_moments(e: &Effects, sustained_live: f64) -> (f64, f64) {
+    let d = e.m_dead();
+    let total = (d + e.m_live).max(d + e.m_roof).max(d + 0.75 * e.m_live + 0.75 * e.m_roof);
+    (d + sustained_live * e.m_live, total)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    #[test]
+    fn beam_formulas() {
+        // wL²/8 and wL/2 (any statics text).
+        let (m, v) = uniform(2.0, 120.0, 60.0);
+        assert_relative_eq!(m, 2.0 * 120.0 * 120.0 / 8.0);
+        assert_relative_eq!(v, 0.0);
+        assert_relative_eq!(uniform(2.0, 120.0, 0.0).1, 120.0);
+        // P at a: M = P a b / L under the load
+        let (m, v) = point(10.0, 30.0, 120.0, 30.0);
+        assert_relative_eq!(m, 10.0 * 30.0 * 90.0 / 120.0);
+        assert_relative_eq!(v, 7.5);
+        assert_relative_eq!(point(10.0, 30.0, 120.0, 60.0).1, -2.5);
+    }
+
+    #[test]
+    fn governing_combination_is_named() {
+        let e = Effects {
+            m_self: 100.0,
+            m_live: 100.0,
+            ..Effects::default()
+        };
+        let (m, name, _, _) = factored(&e);
+        assert_relative_eq!(m, 1.2 * 100.0 + 1.6 * 100.0);
+        assert_eq!(name, "1.2D+1.6L+0.5(Lr or S)");
+        let dead_only = Effects {
+            m_self: 100.0,
+            ..Effects::default()
+        };
+        assert_eq!(factored(&dead_only).1, "1.4D");
+        let roof = Effects {
+            m_self: 100.0,
+            m_roof: 80.0,
+            ..Effects::default()
+        };
+        assert_eq!(factored(&roof).1, "1.2D+1.6(Lr or S)+0.5L");
+        let (sus, tot) = service_moments(&e, 0.3);
+        assert_relative_eq!(sus, 130.0);
+        assert_relative_eq!(tot, 200.0);
+    }
+}

@@ -1,0 +1,361 @@
+//! The ACI 318-19 checks of one candidate under one design case.
+//!
+//! [`evaluate`] builds the member model, computes the state at every
+//! station once (moments, shears, stresses, strengths), and hands it to each
+//! check in the [`REGISTRY`]; every check lives in its own file under
+//! `checks/`, names its clause, and returns a [`CheckResult`].
+//!
+//! Sign convention for stresses: **compression positive, tension negative**.
+
+pub mod flexure;
+pub mod horizontal_shear;
+pub mod jacking;
+pub mod min_strength;
+pub mod production_length;
+pub mod release;
+pub mod service;
+pub mod shear;
+pub mod spacing;
+
+use serde::Serialize;
+
+use crate::case::{DesignCase, ServiceClass, factored};
+use crate::catalog::{Pattern, Section};
+use crate::material::Mix;
+use crate::member::{History, Member};
+
+/// Families of checks, in the order a failure is reported (most important first).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Group {
+    /// Flexural strength.
+    Strength,
+    /// Shear.
+    Shear,
+    /// Stresses at release and service.
+    Stresses,
+    /// Strand sanity (jacking, spacing).
+    Strand,
+    /// Deflection and camber.
+    Deflection,
+    /// Fire resistance.
+    Fire,
+    /// Cover.
+    Cover,
+    /// Production limits.
+    Production,
+}
+
+/// What a check is, independent of any member: the registry entry.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct CheckInfo {
+    /// Stable id (JSON, CSV).
+    pub id: &'static str,
+    /// Short title.
+    pub title: &'static str,
+    /// Governing clause(s).
+    pub clause: &'static str,
+    /// Unit of demand and capacity.
+    pub unit: &'static str,
+    /// Group, for the failure order.
+    pub group: Group,
+}
+
+/// The result of one check.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct CheckResult {
+    /// Registry id.
+    pub id: &'static str,
+    /// Title.
+    pub title: &'static str,
+    /// Clause.
+    pub clause: &'static str,
+    /// Demand, in `unit`.
+    pub demand: f64,
+    /// Capacity (or limit), in `unit`.
+    pub capacity: f64,
+    /// Unit of demand and capacity.
+    pub unit: &'static str,
+    /// Demand ÷ capacity.
+    pub ratio: f64,
+    /// Whether the check passes.
+    pub pass: bool,
+    /// Governing station, ft from the left bearing centre.
+    pub station_ft: Option<f64>,
+    /// What governed and any caveat.
+    pub note: String,
+    /// Group.
+    pub group: Group,
+}
+
+impl CheckResult {
+    /// A result from the registry entry and the numbers.
+    pub fn new(info: &CheckInfo, demand: f64, capacity: f64, station_in: Option<f64>, note: String) -> CheckResult {
+        let ratio = if capacity > 0.0 {
+            demand / capacity
+        } else if demand > 0.0 {
+            f64::INFINITY
+        } else {
+            0.0
+        };
+        CheckResult {
+            id: info.id,
+            title: info.title,
+            clause: info.clause,
+            demand,
+            capacity,
+            unit: info.unit,
+            ratio,
+            pass: ratio <= 1.0 + 1e-9,
+            station_ft: station_in.map(|x| x / 12.0),
+            note,
+            group: info.group,
+        }
+    }
+}
+
+/// A check: its registry entry and the function that runs it (None when it
+/// does not apply to this member).
+pub struct Check {
+    /// Registry entry.
+    pub info: CheckInfo,
+    /// Run on an analysis.
+    pub run: fn(&Analysis) -> Option<CheckResult>,
+}
+
+/// Every check, in reporting order. Ranking, help, JSON and the report
+/// legend all read this list.
+pub const REGISTRY: &[Check] = &[
+    Check {
+        info: flexure::INFO,
+        run: flexure::run,
+    },
+    Check {
+        info: min_strength::INFO,
+        run: min_strength::run,
+    },
+    Check {
+        info: shear::INFO,
+        run: shear::run,
+    },
+    Check {
+        info: shear::DEEP_INFO,
+        run: shear::run_deep,
+    },
+    Check {
+        info: horizontal_shear::INFO,
+        run: horizontal_shear::run,
+    },
+    Check {
+        info: release::COMPRESSION,
+        run: release::run_compression,
+    },
+    Check {
+        info: release::TENSION,
+        run: release::run_tension,
+    },
+    Check {
+        info: service::TENSION,
+        run: service::run_tension,
+    },
+    Check {
+        info: service::SUSTAINED,
+        run: service::run_sustained,
+    },
+    Check {
+        info: service::TOTAL,
+        run: service::run_total,
+    },
+    Check {
+        info: service::TOPPING,
+        run: service::run_topping,
+    },
+    Check {
+        info: jacking::INFO,
+        run: jacking::run,
+    },
+    Check {
+        info: spacing::INFO,
+        run: spacing::run,
+    },
+    Check {
+        info: production_length::INFO,
+        run: production_length::run,
+    },
+];
+
+/// The state of the member at one station.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Station {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// Distance from the nearer member end, in.
+    pub d_in: f64,
+    /// Governing factored moment, lbf·in.
+    pub mu_lbin: f64,
+    /// Its combination.
+    pub mu_combo: &'static str,
+    /// Governing factored shear (magnitude), lbf.
+    pub vu_lbf: f64,
+    /// Its combination.
+    pub vu_combo: &'static str,
+    /// Flexure at the station.
+    pub flexure: flexure::AtStation,
+    /// Release stresses, psi: (top, bottom).
+    pub release_psi: (f64, f64),
+    /// Service stresses.
+    pub service: service::AtStation,
+    /// Shear strength, when the station is at or beyond the critical section.
+    pub shear: Option<shear::AtStation>,
+}
+
+/// Everything the checks read: the member model and the stations.
+pub struct Analysis<'a> {
+    /// The member.
+    pub member: Member<'a>,
+    /// Stations, sorted by x.
+    pub stations: Vec<Station>,
+    /// x of the critical section for shear (h/2 from the support face), in.
+    pub x_shear: f64,
+}
+
+/// The full evaluation of one candidate.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Evaluation {
+    /// Every applicable check, in registry order.
+    pub checks: Vec<CheckResult>,
+    /// Index of the check with the highest ratio.
+    pub governing: usize,
+    /// Whether every check passes.
+    pub viable: bool,
+    /// Service class reached at service loads.
+    pub service_class: ServiceClass,
+    /// Prestress history.
+    pub history: History,
+    /// Transfer length (fse/3000)·db, in.
+    pub transfer_length_in: f64,
+    /// Member length, in.
+    pub member_length_in: f64,
+    /// Stations.
+    pub stations: Vec<Station>,
+}
+
+impl Evaluation {
+    /// The governing check.
+    pub fn governing(&self) -> &CheckResult {
+        &self.checks[self.governing]
+    }
+    /// The first failing check in the order of importance, if any.
+    pub fn first_failure(&self) -> Option<&CheckResult> {
+        self.checks.iter().filter(|c| !c.pass).min_by_key(|c| c.group)
+    }
+    /// A check by id.
+    pub fn check(&self, id: &str) -> Option<&CheckResult> {
+        self.checks.iter().find(|c| c.id == id)
+    }
+}
+
+/// A candidate member: a section, one of its patterns, and its concrete.
+#[derive(Debug, Clone, Copy)]
+pub struct Candidate<'a> {
+    /// The section.
+    pub section: &'a Section,
+    /// The pattern.
+    pub pattern: &'a Pattern,
+    /// The precast concrete.
+    pub mix: &'a Mix,
+}
+
+/// Stations: every 1/20 of the span plus the special points.
+fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
+    let l = m.l;
+    let half = (m.lm - l) / 2.0;
+    let mut xs: Vec<f64> = (0..=20).map(|k| l * k as f64 / 20.0).collect();
+    let mut special = vec![x_shear, m.ltr - half, m.ltr_shear - half, l / 2.0];
+    if let Some(hd) = m.hold_down {
+        special.push(hd - half);
+    }
+    for layer in &m.layers {
+        if layer.debond > 0.0 {
+            special.push(layer.debond - half);
+            special.push(layer.debond + m.ltr - half);
+        }
+    }
+    // development length at full fse → fps ≈ fpu as an upper estimate point
+    special.push(crate::prestress::development_length(m.history.fse_psi, m.strand.fpu.get(), m.db(), false) - half);
+    for &(_, a, _) in &m.points {
+        special.push(a);
+    }
+    for s in special {
+        xs.push(s);
+        xs.push(l - s);
+    }
+    xs.retain(|&x| (0.0..=l).contains(&x));
+    xs.sort_by(f64::total_cmp);
+    xs.dedup_by(|a, b| (*a - *b).abs() < 1e-6);
+    xs
+}
+
+/// Build the analysis: the member and the state at every station.
+pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
+    let member = Member::new(cand.section, cand.pattern, cand.mix, case);
+    let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
+    let full = flexure::full_development(&member);
+    let stations = stations(&member, x_shear)
+        .into_iter()
+        .map(|x| {
+            let d = member.end_distance(x);
+            let eff = member.effects(x);
+            let (mu, mu_combo, vu, vu_combo) = factored(&eff);
+            let flex = flexure::at(&member, d, &full);
+            let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(&member, d, &eff, mu, vu));
+            Station {
+                x_in: x,
+                d_in: d,
+                mu_lbin: mu,
+                mu_combo,
+                vu_lbf: vu,
+                vu_combo,
+                flexure: flex,
+                release_psi: release::at(&member, d),
+                service: service::at(&member, d, &eff),
+                shear,
+            }
+        })
+        .collect();
+    Analysis { member, stations, x_shear }
+}
+
+/// Evaluate every check for one candidate under one case.
+pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
+    let an = analyse(cand, case);
+    let checks: Vec<CheckResult> = REGISTRY.iter().filter_map(|c| (c.run)(&an)).collect();
+    // jacking and spacing are properties of the pattern, not of the bay:
+    // they pass or fail, but do not govern
+    let governing = checks
+        .iter()
+        .enumerate()
+        .filter(|(_, c)| c.group != Group::Strand)
+        .max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio))
+        .map_or(0, |(i, _)| i);
+    let viable = checks.iter().all(|c| c.pass);
+    Evaluation {
+        governing,
+        viable,
+        service_class: service::class_reached(&an),
+        history: an.member.history,
+        transfer_length_in: an.member.ltr,
+        member_length_in: an.member.lm,
+        stations: an.stations,
+        checks,
+    }
+}
+
+/// kip·ft from lbf·in.
+pub fn kipft(m: f64) -> f64 {
+    m / 12_000.0
+}
+/// kip from lbf.
+pub fn kip(v: f64) -> f64 {
+    v / 1000.0
+}

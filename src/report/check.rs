@@ -1,0 +1,277 @@
+//! The report of one evaluation: a table for people, JSON for scripts.
+
+use std::io::{self, Write};
+
+use serde::Serialize;
+
+use crate::case::DesignCase;
+use crate::checks::{CheckResult, Evaluation, kip, kipft};
+
+/// The sign convention, printed with every stress.
+pub const SIGN_CONVENTION: &str = "stresses: compression positive, tension negative (psi)";
+
+/// One station of the JSON output, units in the key names.
+#[derive(Debug, Clone, Serialize)]
+pub struct StationJson {
+    /// Distance from the left bearing centre, ft.
+    pub x_ft: f64,
+    /// Factored moment, kip-ft.
+    pub mu_kipft: f64,
+    /// Design flexural strength, kip-ft.
+    pub phi_mn_kipft: f64,
+    /// Cracking moment, kip-ft.
+    pub mcr_kipft: f64,
+    /// Factored shear, kip.
+    pub vu_kip: f64,
+    /// Design shear strength, kip (absent inside the critical section).
+    pub phi_vc_kip: Option<f64>,
+    /// Top fibre at release, psi.
+    pub f_top_release_psi: f64,
+    /// Bottom fibre at release, psi.
+    pub f_bottom_release_psi: f64,
+    /// Precast top fibre at service (total), psi.
+    pub f_top_service_psi: f64,
+    /// Precast bottom fibre at service (total), psi.
+    pub f_bottom_service_psi: f64,
+    /// Topping top fibre at service (total), psi.
+    pub f_topping_service_psi: f64,
+}
+
+/// The JSON of `plankwise check`.
+#[derive(Debug, Clone, Serialize)]
+pub struct CheckJson {
+    /// Section id.
+    pub section: String,
+    /// Pattern id.
+    pub pattern: String,
+    /// Span, ft.
+    pub span_ft: f64,
+    /// Member length, ft.
+    pub member_length_ft: f64,
+    /// Topping thickness, in (0 when none).
+    pub topping_in: f64,
+    /// Every check passes.
+    pub viable: bool,
+    /// Id of the check with the highest ratio.
+    pub governing: String,
+    /// Its ratio.
+    pub governing_ratio: f64,
+    /// Id of the first failing check in order of importance, if any.
+    pub first_failure: Option<String>,
+    /// Service class reached.
+    pub service_class: String,
+    /// Jacking stress, ksi.
+    pub fpj_ksi: f64,
+    /// Stress after transfer, ksi.
+    pub fpo_ksi: f64,
+    /// Effective stress after losses, ksi.
+    pub fse_ksi: f64,
+    /// Effective force, kip.
+    pub pe_kip: f64,
+    /// Elastic shortening, ksi.
+    pub loss_es_ksi: f64,
+    /// Creep, ksi.
+    pub loss_cr_ksi: f64,
+    /// Shrinkage, ksi.
+    pub loss_sh_ksi: f64,
+    /// Relaxation, ksi.
+    pub loss_re_ksi: f64,
+    /// Total loss, ksi.
+    pub loss_total_ksi: f64,
+    /// Loss method.
+    pub loss_method: String,
+    /// Transfer length (fse/3000)·db, in.
+    pub transfer_length_in: f64,
+    /// Greatest factored moment, kip-ft.
+    pub mu_kipft: f64,
+    /// φMn at that station, kip-ft.
+    pub phi_mn_kipft: f64,
+    /// Mcr at that station, kip-ft.
+    pub mcr_kipft: f64,
+    /// Factored shear at the governing shear station, kip.
+    pub vu_kip: f64,
+    /// φVc there, kip.
+    pub phi_vc_kip: f64,
+    /// Precast bottom fibre at service, at the greatest moment, psi.
+    pub f_bottom_service_psi: f64,
+    /// Precast top fibre at service, at the greatest moment, psi.
+    pub f_top_service_psi: f64,
+    /// Sign convention.
+    pub sign_convention: &'static str,
+    /// Every check.
+    pub checks: Vec<CheckResult>,
+    /// Stations.
+    pub stations: Vec<StationJson>,
+    /// Cautions.
+    pub cautions: Vec<&'static str>,
+}
+
+/// Build the JSON view.
+pub fn to_json(section: &str, pattern: &str, case: &DesignCase, ev: &Evaluation) -> CheckJson {
+    let h = &ev.history;
+    let mid = ev.stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");
+    let shear = ev.check("shear");
+    CheckJson {
+        section: section.to_string(),
+        pattern: pattern.to_string(),
+        span_ft: case.span.get() / 12.0,
+        member_length_ft: ev.member_length_in / 12.0,
+        topping_in: case.topping.as_ref().map_or(0.0, |t| t.thickness.get()),
+        viable: ev.viable,
+        governing: ev.governing().id.to_string(),
+        governing_ratio: ev.governing().ratio,
+        first_failure: ev.first_failure().map(|c| c.id.to_string()),
+        service_class: ev.service_class.name().to_string(),
+        fpj_ksi: h.fpj_psi / 1000.0,
+        fpo_ksi: h.fpo_psi / 1000.0,
+        fse_ksi: h.fse_psi / 1000.0,
+        pe_kip: h.pe_lbf / 1000.0,
+        loss_es_ksi: h.losses.es_psi / 1000.0,
+        loss_cr_ksi: h.losses.cr_psi / 1000.0,
+        loss_sh_ksi: h.losses.sh_psi / 1000.0,
+        loss_re_ksi: h.losses.re_psi / 1000.0,
+        loss_total_ksi: h.losses.total_psi / 1000.0,
+        loss_method: if h.lump_sum {
+            "lump sum (ES computed)".into()
+        } else {
+            "Zia et al. 1979".into()
+        },
+        transfer_length_in: ev.transfer_length_in,
+        mu_kipft: kipft(mid.mu_lbin),
+        phi_mn_kipft: kipft(mid.flexure.phi_mn_lbin),
+        mcr_kipft: kipft(mid.flexure.mcr_lbin),
+        vu_kip: shear.map_or(0.0, |c| c.demand),
+        phi_vc_kip: shear.map_or(0.0, |c| c.capacity),
+        f_bottom_service_psi: mid.service.bottom_total_psi,
+        f_top_service_psi: mid.service.top_total_psi,
+        sign_convention: SIGN_CONVENTION,
+        checks: ev.checks.clone(),
+        stations: ev
+            .stations
+            .iter()
+            .map(|s| StationJson {
+                x_ft: s.x_in / 12.0,
+                mu_kipft: kipft(s.mu_lbin),
+                phi_mn_kipft: kipft(s.flexure.phi_mn_lbin),
+                mcr_kipft: kipft(s.flexure.mcr_lbin),
+                vu_kip: kip(s.vu_lbf),
+                phi_vc_kip: s.shear.map(|v| kip(v.phi_vc_lbf)),
+                f_top_release_psi: s.release_psi.0,
+                f_bottom_release_psi: s.release_psi.1,
+                f_top_service_psi: s.service.top_total_psi,
+                f_bottom_service_psi: s.service.bottom_total_psi,
+                f_topping_service_psi: s.service.topping_total_psi,
+            })
+            .collect(),
+        cautions: super::CAUTIONS.to_vec(),
+    }
+}
+
+/// Write the evaluation as a table.
+pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Evaluation) -> io::Result<()> {
+    let h = &ev.history;
+    let l = &h.losses;
+    writeln!(w, "{title}")?;
+    writeln!(
+        w,
+        "span {:.2} ft, member length {:.2} ft (span + {:.1} in bearing), {}",
+        case.span.get() / 12.0,
+        ev.member_length_in / 12.0,
+        case.bearing.get(),
+        match &case.topping {
+            Some(t) => format!(
+                "{:.2} in composite topping, unshored: topping weight on the bare member",
+                t.thickness.get()
+            ),
+            None => "no topping".into(),
+        }
+    )?;
+    writeln!(
+        w,
+        "loads: SDL {:.1} psf, L {:.1} psf (sustained {:.0} %), Lr {:.1} psf, S {:.1} psf, {} line load(s); class allowed {}, RH {:.0} %",
+        case.sdl.in_unit("psf"),
+        case.live.in_unit("psf"),
+        case.sustained_live * 100.0,
+        case.roof_live.in_unit("psf"),
+        case.snow.in_unit("psf"),
+        case.line_loads.len(),
+        case.class_allowed.name(),
+        case.humidity
+    )?;
+    writeln!(w)?;
+    writeln!(
+        w,
+        "Prestress  fpj {:.1} ksi -> after transfer fpo {:.1} ksi -> effective fse {:.1} ksi (Pe {:.1} kip)",
+        h.fpj_psi / 1000.0,
+        h.fpo_psi / 1000.0,
+        h.fse_psi / 1000.0,
+        h.pe_lbf / 1000.0
+    )?;
+    if h.lump_sum {
+        writeln!(
+            w,
+            "Losses     ES {:.2} ksi; total {:.2} ksi given as a lump sum",
+            l.es_psi / 1000.0,
+            l.total_psi / 1000.0
+        )?;
+    } else {
+        writeln!(
+            w,
+            "Losses     ES {:.2} + CR {:.2} + SH {:.2} + RE {:.2} = {:.2} ksi ({:.1} % of fpj), Zia et al. 1979{}",
+            l.es_psi / 1000.0,
+            l.cr_psi / 1000.0,
+            l.sh_psi / 1000.0,
+            l.re_psi / 1000.0,
+            l.total_psi / 1000.0,
+            100.0 * l.total_psi / h.fpj_psi,
+            if l.c_clamped {
+                "; fpi/fpu outside the C table, clamped"
+            } else {
+                ""
+            }
+        )?;
+    }
+    writeln!(
+        w,
+        "Transfer   {:.1} in = (fse/3000) db; service class reached: {}",
+        ev.transfer_length_in,
+        ev.service_class.name()
+    )?;
+    writeln!(w)?;
+    writeln!(
+        w,
+        "{:<40} {:>10} {:>10} {:>7} {:>6} {:<5} {:>7}",
+        "check", "demand", "capacity", "unit", "ratio", "ok", "at ft"
+    )?;
+    for c in &ev.checks {
+        writeln!(
+            w,
+            "{:<40} {:>10.2} {:>10} {:>7} {:>6.3} {:<5} {:>7}",
+            c.title,
+            c.demand,
+            if c.capacity.is_finite() {
+                format!("{:.2}", c.capacity)
+            } else {
+                "none".into()
+            },
+            c.unit,
+            c.ratio,
+            if c.pass { "yes" } else { "NO" },
+            c.station_ft.map_or("-".into(), |x| format!("{x:.2}"))
+        )?;
+        writeln!(w, "    {} — {}", c.clause, c.note)?;
+    }
+    writeln!(w)?;
+    let g = ev.governing();
+    match ev.first_failure() {
+        None => writeln!(w, "Result     VIABLE; governing: {} (ratio {:.3})", g.title, g.ratio)?,
+        Some(f) => writeln!(
+            w,
+            "Result     NOT VIABLE; first failure: {} (ratio {:.3}, {})",
+            f.title, f.ratio, f.clause
+        )?,
+    }
+    writeln!(w, "Note       {SIGN_CONVENTION}; moments kip-ft, forces kip")?;
+    writeln!(w)?;
+    super::write_cautions(w)
+}
