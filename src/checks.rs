@@ -197,6 +197,8 @@ pub struct Station {
     pub mu_combo: &'static str,
     /// Governing factored shear (magnitude), lbf.
     pub vu_lbf: f64,
+    /// Unfactored effects by load group.
+    pub effects: crate::case::Effects,
     /// Its combination.
     pub vu_combo: &'static str,
     /// Flexure at the station.
@@ -315,6 +317,7 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
                 mu_lbin: mu,
                 mu_combo,
                 vu_lbf: vu,
+                effects: eff,
                 vu_combo,
                 flexure: flex,
                 release_psi: release::at(&member, d),

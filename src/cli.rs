@@ -464,7 +464,7 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
     let ev = evaluate(&cand, &case);
     let mut out = io::stdout().lock();
     if a.json {
-        let j = report::check::to_json(&section.id, &pattern.id, &case, &ev);
+        let j = report::check::to_json(&cand, &case, &ev);
         serde_json::to_writer_pretty(&mut out, &j).map_err(io::Error::from)?;
         writeln!(out)?;
     } else {

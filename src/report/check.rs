@@ -5,7 +5,7 @@ use std::io::{self, Write};
 use serde::Serialize;
 
 use crate::case::DesignCase;
-use crate::checks::{CheckResult, Evaluation, kip, kipft};
+use crate::checks::{Candidate, CheckResult, Evaluation, kip, kipft};
 
 /// The sign convention, printed with every stress.
 pub const SIGN_CONVENTION: &str = "stresses: compression positive, tension negative (psi)";
@@ -35,6 +35,30 @@ pub struct StationJson {
     pub f_bottom_service_psi: f64,
     /// Topping top fibre at service (total), psi.
     pub f_topping_service_psi: f64,
+}
+
+/// One strand at midspan.
+#[derive(Debug, Clone, Serialize)]
+pub struct StrandJson {
+    /// From the left edge, in.
+    pub x_in: f64,
+    /// Above the soffit, in.
+    pub y_in: f64,
+    /// Area, in².
+    pub area_in2: f64,
+}
+
+/// The precast concrete as used.
+#[derive(Debug, Clone, Serialize)]
+pub struct ConcreteJson {
+    /// f′c, psi.
+    pub fc_psi: f64,
+    /// Ec, psi.
+    pub ec_psi: f64,
+    /// fr, psi.
+    pub fr_psi: f64,
+    /// β1.
+    pub beta1: f64,
 }
 
 /// The JSON of `plankwise check`.
@@ -96,6 +120,12 @@ pub struct CheckJson {
     pub f_bottom_service_psi: f64,
     /// Precast top fibre at service, at the greatest moment, psi.
     pub f_top_service_psi: f64,
+    /// Service moment (total) at the section of greatest factored moment, kip-ft.
+    pub m_service_total_kipft: f64,
+    /// Strands at midspan: position and area.
+    pub strands: Vec<StrandJson>,
+    /// Precast concrete: f′c, Ec, fr (psi) and β1.
+    pub concrete: ConcreteJson,
     /// Sign convention.
     pub sign_convention: &'static str,
     /// Every check.
@@ -107,7 +137,8 @@ pub struct CheckJson {
 }
 
 /// Build the JSON view.
-pub fn to_json(section: &str, pattern: &str, case: &DesignCase, ev: &Evaluation) -> CheckJson {
+pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJson {
+    let (section, pattern) = (cand.section.id.as_str(), cand.pattern.id.as_str());
     let h = &ev.history;
     let mid = ev.stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");
     let shear = ev.check("shear");
@@ -144,6 +175,25 @@ pub fn to_json(section: &str, pattern: &str, case: &DesignCase, ev: &Evaluation)
         phi_vc_kip: shear.map_or(0.0, |c| c.capacity),
         f_bottom_service_psi: mid.service.bottom_total_psi,
         f_top_service_psi: mid.service.top_total_psi,
+        m_service_total_kipft: kipft(crate::case::service_moments(&mid.effects, case.sustained_live).1),
+        strands: cand
+            .pattern
+            .rows
+            .iter()
+            .flat_map(|r| {
+                r.x.iter().map(move |&x| StrandJson {
+                    x_in: x,
+                    y_in: r.height.get(),
+                    area_in2: cand.pattern.strand.area.get(),
+                })
+            })
+            .collect(),
+        concrete: ConcreteJson {
+            fc_psi: cand.mix.fc.get(),
+            ec_psi: cand.mix.ec().get(),
+            fr_psi: cand.mix.fr().get(),
+            beta1: cand.mix.beta1(),
+        },
         sign_convention: SIGN_CONVENTION,
         checks: ev.checks.clone(),
         stations: ev
