@@ -84,6 +84,19 @@ pub enum LossMethod {
     LumpSum(crate::units::Stress),
 }
 
+/// Which deflection limits of ACI 318-19 Table 24.2.2 apply.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Attachment {
+    /// Not supporting or attached to nonstructural elements likely to be
+    /// damaged: the immediate live-load limit only (floor ℓ/360, flat roof ℓ/180).
+    None,
+    /// Attached elements not likely to be damaged: also ℓ/240 after attachment.
+    Tolerant,
+    /// Attached elements likely to be damaged: also ℓ/480 after attachment.
+    Sensitive,
+}
+
 /// One bay's design case.
 #[derive(Debug, Clone, PartialEq)]
 pub struct DesignCase {
@@ -113,6 +126,16 @@ pub struct DesignCase {
     pub humidity: f64,
     /// Loss method.
     pub losses: LossMethod,
+    /// Required fire rating, hours (None: not required).
+    pub fire_rating: Option<f64>,
+    /// Restrained assembly for fire (default unrestrained, conservative).
+    pub restrained: bool,
+    /// Exposure for durability cover.
+    pub exposure: crate::fire::Exposure,
+    /// Deflection limits that apply.
+    pub attachment: Attachment,
+    /// Least natural frequency required, Hz (None: information only).
+    pub min_frequency_hz: Option<f64>,
 }
 
 /// Default bearing length, in (common practice, no source: 3–4 in on steel
@@ -141,6 +164,11 @@ impl DesignCase {
             class_allowed: ServiceClass::U,
             humidity: DEFAULT_HUMIDITY,
             losses: LossMethod::Zia,
+            fire_rating: None,
+            restrained: false,
+            exposure: crate::fire::Exposure::Interior,
+            attachment: Attachment::None,
+            min_frequency_hz: None,
         }
     }
     /// Member length = span + bearing length.

@@ -7,6 +7,9 @@
 //!
 //! Sign convention for stresses: **compression positive, tension negative**.
 
+pub mod cover;
+pub mod deflection;
+pub mod fire;
 pub mod flexure;
 pub mod horizontal_shear;
 pub mod jacking;
@@ -16,6 +19,7 @@ pub mod release;
 pub mod service;
 pub mod shear;
 pub mod spacing;
+pub mod vibration;
 
 use serde::Serialize;
 
@@ -91,10 +95,11 @@ pub struct CheckResult {
 impl CheckResult {
     /// A result from the registry entry and the numbers.
     pub fn new(info: &CheckInfo, demand: f64, capacity: f64, station_in: Option<f64>, note: String) -> CheckResult {
+        // no capacity at all reads as RATIO_NONE, so no infinity reaches an output
         let ratio = if capacity > 0.0 {
-            demand / capacity
+            (demand / capacity).min(RATIO_NONE)
         } else if demand > 0.0 {
-            f64::INFINITY
+            RATIO_NONE
         } else {
             0.0
         };
@@ -113,6 +118,9 @@ impl CheckResult {
         }
     }
 }
+
+/// The ratio reported when there is no capacity at all (kept finite for output).
+pub const RATIO_NONE: f64 = 999.0;
 
 /// A check: its registry entry and the function that runs it (None when it
 /// does not apply to this member).
@@ -171,6 +179,26 @@ pub const REGISTRY: &[Check] = &[
         run: service::run_topping,
     },
     Check {
+        info: deflection::LIVE,
+        run: deflection::run_live,
+    },
+    Check {
+        info: deflection::AFTER,
+        run: deflection::run_after,
+    },
+    Check {
+        info: vibration::INFO,
+        run: vibration::run,
+    },
+    Check {
+        info: fire::INFO,
+        run: fire::run,
+    },
+    Check {
+        info: cover::INFO,
+        run: cover::run,
+    },
+    Check {
         info: jacking::INFO,
         run: jacking::run,
     },
@@ -219,6 +247,12 @@ pub struct Analysis<'a> {
     pub stations: Vec<Station>,
     /// x of the critical section for shear (h/2 from the support face), in.
     pub x_shear: f64,
+    /// Camber and deflections.
+    pub camber: crate::camber::Camber,
+    /// Fire assessment.
+    pub fire: fire::Fire,
+    /// Natural frequency, Hz.
+    pub frequency_hz: f64,
 }
 
 /// The full evaluation of one candidate.
@@ -238,6 +272,12 @@ pub struct Evaluation {
     pub transfer_length_in: f64,
     /// Member length, in.
     pub member_length_in: f64,
+    /// Camber and deflections.
+    pub camber: crate::camber::Camber,
+    /// Fire assessment.
+    pub fire: fire::Fire,
+    /// Natural frequency, Hz.
+    pub frequency_hz: f64,
     /// Stations.
     pub stations: Vec<Station>,
 }
@@ -325,8 +365,25 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
                 shear,
             }
         })
-        .collect();
-    Analysis { member, stations, x_shear }
+        .collect::<Vec<Station>>();
+    // camber needs the class reached and, for T and C, the stresses of the
+    // bilinear method at the section of greatest moment
+    let worst = stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");
+    let ft_total = -worst.service.bottom_total_psi;
+    let s_live = member.comp.map_or(member.bare.sb_in3, |c| c.sb_in3);
+    let f_live = worst.effects.m_live.max(worst.effects.m_roof) / s_live;
+    let class = service::class_of(ft_total, member.mix.fc.get());
+    let camber = crate::camber::camber(&member, class, ft_total, f_live);
+    let fire = fire::assess(&member);
+    let frequency_hz = vibration::frequency(&member);
+    Analysis {
+        member,
+        stations,
+        x_shear,
+        camber,
+        fire,
+        frequency_hz,
+    }
 }
 
 /// Evaluate every check for one candidate under one case.
@@ -349,6 +406,9 @@ pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
         history: an.member.history,
         transfer_length_in: an.member.ltr,
         member_length_in: an.member.lm,
+        camber: an.camber,
+        fire: an.fire,
+        frequency_hz: an.frequency_hz,
         stations: an.stations,
         checks,
     }

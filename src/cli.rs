@@ -6,7 +6,7 @@ use std::path::PathBuf;
 use clap::{Parser, Subcommand};
 use serde::Serialize;
 
-use plankwise::case::{DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Topping, Use};
+use plankwise::case::{Attachment, DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Topping, Use};
 use plankwise::catalog::diag::suggestion;
 use plankwise::catalog::{Catalog, DEMO_US, Problems, SectionSummary, Severity};
 use plankwise::checks::{Candidate, evaluate};
@@ -104,6 +104,21 @@ struct CheckArgs {
     /// Total prestress loss given as a lump sum instead of Zia et al. (1979), e.g. "30 ksi".
     #[arg(long)]
     lump_loss: Option<String>,
+    /// Required fire rating, e.g. "2 h" (1, 1.5, 2, 3 or 4 h).
+    #[arg(long)]
+    fire: Option<String>,
+    /// The assembly is restrained for fire (default unrestrained, conservative).
+    #[arg(long)]
+    restrained: bool,
+    /// Exposed to weather or in contact with ground (durability cover).
+    #[arg(long)]
+    exposed: bool,
+    /// Nonstructural elements attached: "tolerant" (l/240) or "sensitive" (l/480).
+    #[arg(long)]
+    attached: Option<String>,
+    /// Least natural frequency required, Hz (otherwise reported only).
+    #[arg(long)]
+    min_frequency: Option<f64>,
     /// Print JSON instead of a table (keys carry their units).
     #[arg(long)]
     json: bool,
@@ -455,6 +470,36 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
             return Err(Failure::Message(format!("--lump-loss: '{l}' must lie between 0 and 100 ksi")));
         }
         case.losses = LossMethod::LumpSum(v);
+    }
+    if let Some(f) = &a.fire {
+        let h: plankwise::units::Duration = flag("fire", f)?;
+        if !plankwise::fire::RATINGS.iter().any(|r| (r - h.get()).abs() < 1e-9) {
+            return Err(Failure::Message(format!(
+                "--fire: '{f}' is not a tabulated rating; use 1, 1.5, 2, 3 or 4 h"
+            )));
+        }
+        case.fire_rating = Some(h.get());
+    }
+    case.restrained = a.restrained;
+    if a.exposed {
+        case.exposure = plankwise::fire::Exposure::Weather;
+    }
+    case.attachment = match a.attached.as_deref() {
+        None => Attachment::None,
+        Some("tolerant") => Attachment::Tolerant,
+        Some("sensitive") => Attachment::Sensitive,
+        Some(other) => {
+            return Err(Failure::Message(format!(
+                "--attached: '{other}'{} is not a choice; use 'tolerant' (elements not likely damaged, l/240) or 'sensitive' (likely damaged, l/480)",
+                suggestion(other, ["tolerant", "sensitive"])
+            )));
+        }
+    };
+    if let Some(f) = a.min_frequency {
+        if !(0.5..=50.0).contains(&f) {
+            return Err(Failure::Message(format!("--min-frequency: {f} must lie between 0.5 and 50 Hz")));
+        }
+        case.min_frequency_hz = Some(f);
     }
     let cand = Candidate {
         section,

@@ -13,9 +13,11 @@
 
 #![forbid(unsafe_code)]
 
+pub mod camber;
 pub mod case;
 pub mod catalog;
 pub mod checks;
+pub mod fire;
 pub mod material;
 pub mod member;
 pub mod prestress;

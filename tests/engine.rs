@@ -250,3 +250,100 @@ fn deep_untopped_hollow_core_gets_the_half_vcw_rule() {
     let ev = evaluate(&cand(&cat, "plank-12in-4ft", "6x1/2"), &case(30.0, 15.0, 50.0));
     assert!(ev.check("shear_deep_hollow_core").is_none(), "12 in ≤ 12.5 in");
 }
+
+#[test]
+fn fire_rating_worked_by_hand() {
+    // 8 in plank, carbonate, unrestrained: te = A/b = 236.76/48 = 4.93 in → 2 h
+    // by IBC Table 722.2.2.1 (4.6 ≤ 4.93 < 5.7, floor values from memory, high);
+    // strands 1/2 in at 1.75 in → 1.5 in cover → 1½ h by IBC Table 722.2.3(1)
+    // (1.375 ≤ 1.5 < 1.625, from memory, medium). Overall 1½ h.
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let mut k = case(25.0, 15.0, 50.0);
+    k.fire_rating = Some(2.0);
+    let ev = evaluate(&c, &k);
+    assert_relative_eq!(ev.fire.equiv_thickness_in, c.section.props.area_in2 / 48.0, max_relative = 1e-12);
+    assert_eq!(ev.fire.rating_thickness_h, 2.0);
+    assert_eq!(ev.fire.rating_cover_h, Some(1.5));
+    assert_eq!(ev.fire.rating_h, Some(1.5));
+    assert!(!ev.check("fire").unwrap().pass);
+    // restrained: 3/4 in suffices for every rating, so heat transmission governs: 2 h
+    k.restrained = true;
+    let ev = evaluate(&c, &k);
+    assert_eq!(ev.fire.rating_h, Some(2.0));
+    assert!(ev.check("fire").unwrap().pass);
+    // a 2 in carbonate topping adds its thickness: 6.93 in ≥ 6.6 in → 4 h by heat transmission
+    k.topping = Some(Topping {
+        thickness: Length::new(2.0),
+        mix: cat.mixes[3].clone(),
+    });
+    assert_eq!(evaluate(&c, &k).fire.rating_thickness_h, 4.0);
+}
+
+#[test]
+fn narrow_double_tee_stems_are_not_rated_and_say_so() {
+    let cat = demo();
+    let mut k = case(50.0, 10.0, 40.0);
+    k.fire_rating = Some(1.0);
+    let ev = evaluate(&cand(&cat, "tee-32in-10ft", "12-depressed"), &k);
+    assert_eq!(ev.fire.rating_h, None);
+    // strands on the stem centre line: average cover = centroid height (IBC 722.2.3.3)
+    assert_relative_eq!(ev.fire.cover_in, (3.0 + 5.0 + 7.0 + 9.0 + 11.0 + 13.0) / 6.0, max_relative = 1e-12);
+    let f = ev.check("fire").unwrap();
+    assert!(!f.pass && f.note.contains("722.2.3(5)") && f.ratio.is_finite());
+}
+
+#[test]
+fn camber_by_hand_for_the_eight_inch_plank() {
+    // PCI Design Handbook design-aid forms (mechanics): straight strand
+    // camber P e L²/8EI and self-weight 5wL⁴/384EI on the member length with
+    // Eci; Martin (1977) multipliers 1.80/1.85 at erection (from memory, high).
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let k = case(25.0, 15.0, 50.0);
+    let ev = evaluate(&c, &k);
+    let p = &c.section.props;
+    let eci_i = c.mix.eci().get() * p.ix_in4;
+    let lm = 304.0;
+    let cam = ev.history.po_lbf * (p.yb_in - 1.75) * lm * lm / (8.0 * eci_i);
+    let w = p.area_in2 * 150.0 / 1728.0;
+    let sw = 5.0 * w * lm.powi(4) / (384.0 * eci_i);
+    assert_relative_eq!(ev.camber.prestress_release_in, cam, max_relative = 1e-12);
+    assert_relative_eq!(ev.camber.self_release_in, sw, max_relative = 1e-12);
+    assert_relative_eq!(ev.camber.camber_erection_in, 1.80 * cam - 1.85 * sw, max_relative = 1e-12);
+    // live: 5 wL L⁴/384 Ec I on the span
+    let wl = 50.0 / 144.0 * 48.0;
+    assert_relative_eq!(
+        ev.camber.defl_live_in,
+        5.0 * wl * 300f64.powi(4) / (384.0 * c.mix.ec().get() * p.ix_in4),
+        max_relative = 1e-12
+    );
+    assert!(ev.check("defl_live").unwrap().pass);
+}
+
+#[test]
+fn debonded_strand_camber_is_integrated() {
+    // The debonded pattern's two shielded strands give less camber than the
+    // same seven strands fully bonded, by the M/EI of the shielded lengths.
+    let cat = demo();
+    let k = case(30.0, 15.0, 50.0);
+    let db = evaluate(&cand(&cat, "plank-10in-4ft", "5+2x1/2-db"), &k);
+    let full = evaluate(&cand(&cat, "plank-10in-4ft", "7x1/2"), &k);
+    assert!(db.camber.prestress_release_in < full.camber.prestress_release_in);
+    assert!(db.camber.prestress_release_in > 0.9 * full.camber.prestress_release_in);
+}
+
+#[test]
+fn frequency_is_reported_and_checked_on_request() {
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let mut k = case(25.0, 15.0, 50.0);
+    let ev = evaluate(&c, &k);
+    assert!(ev.check("frequency").is_none());
+    let p = &c.section.props;
+    let w = p.area_in2 * 150.0 / 1728.0 + 15.0 / 144.0 * 48.0 + 0.1 * 50.0 / 144.0 * 48.0;
+    let f = std::f64::consts::FRAC_PI_2 * (386.0886 * c.mix.ec().get() * p.ix_in4 / (w * 300f64.powi(4))).sqrt();
+    assert_relative_eq!(ev.frequency_hz, f, max_relative = 1e-6);
+    k.min_frequency_hz = Some(8.0);
+    assert!(!evaluate(&c, &k).check("frequency").unwrap().pass);
+}

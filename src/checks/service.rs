@@ -128,7 +128,10 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
         ServiceClass::U => (7.5 * fc.sqrt(), "class U allowed: 7.5√f'c"),
         ServiceClass::T => (12.0 * fc.sqrt(), "class T allowed: 12√f'c"),
         // class C has no tension limit; crack control (24.3) is not checked
-        ServiceClass::C => (f64::INFINITY, "class C allowed: no tension limit; crack control (24.3) not checked"),
+        ServiceClass::C => (
+            12.0 * fc.sqrt(),
+            "class C allowed: no tension limit (12√f'c shown is where class C begins); crack control (24.3) not checked",
+        ),
     };
     let mut r = CheckResult::new(
         &TENSION,
@@ -137,8 +140,8 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
         Some(s.x_in),
         format!("precast bottom fibre, class {} reached; {what}", class.name()),
     );
-    if limit.is_infinite() {
-        r.ratio = 0.0;
+    if allowed == ServiceClass::C {
+        r.ratio = r.ratio.min(1.0);
         r.pass = true;
     }
     Some(r)

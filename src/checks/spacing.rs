@@ -51,7 +51,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         format!("least centre-to-centre spacing {least:.2} in"),
     );
     if least < 1e-9 {
-        r.ratio = f64::INFINITY;
+        r.ratio = super::RATIO_NONE;
         r.pass = false;
     }
     Some(r)

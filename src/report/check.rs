@@ -120,6 +120,32 @@ pub struct CheckJson {
     pub f_bottom_service_psi: f64,
     /// Precast top fibre at service, at the greatest moment, psi.
     pub f_top_service_psi: f64,
+    /// Prestress camber at release (upward), in.
+    pub camber_prestress_release_in: f64,
+    /// Self-weight deflection at release (downward), in.
+    pub defl_self_release_in: f64,
+    /// Net camber at release (upward positive), in.
+    pub camber_release_in: f64,
+    /// Camber at erection (upward positive), in.
+    pub camber_erection_in: f64,
+    /// Final camber under permanent loads (upward positive), in.
+    pub camber_final_in: f64,
+    /// Final position with the full live load (upward positive), in.
+    pub net_final_with_live_in: f64,
+    /// Immediate live-load deflection (downward), in.
+    pub defl_live_in: f64,
+    /// Deflection after attachment of nonstructural elements (downward), in.
+    pub defl_after_attach_in: f64,
+    /// Fire rating reached, h (null when a criterion is not rated).
+    pub fire_rating_h: Option<f64>,
+    /// Rating by heat transmission, h.
+    pub fire_rating_thickness_h: f64,
+    /// Equivalent thickness (with a topping of the same aggregate), in.
+    pub equiv_thickness_in: f64,
+    /// Cover used for the fire rating, in.
+    pub fire_cover_in: f64,
+    /// Natural frequency, Hz.
+    pub frequency_hz: f64,
     /// Service moment (total) at the section of greatest factored moment, kip-ft.
     pub m_service_total_kipft: f64,
     /// Strands at midspan: position and area.
@@ -175,6 +201,19 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         phi_vc_kip: shear.map_or(0.0, |c| c.capacity),
         f_bottom_service_psi: mid.service.bottom_total_psi,
         f_top_service_psi: mid.service.top_total_psi,
+        camber_prestress_release_in: ev.camber.prestress_release_in,
+        defl_self_release_in: ev.camber.self_release_in,
+        camber_release_in: ev.camber.camber_release_in,
+        camber_erection_in: ev.camber.camber_erection_in,
+        camber_final_in: ev.camber.camber_final_in,
+        net_final_with_live_in: ev.camber.net_final_with_live_in,
+        defl_live_in: ev.camber.defl_live_in,
+        defl_after_attach_in: ev.camber.defl_after_attach_in,
+        fire_rating_h: ev.fire.rating_h,
+        fire_rating_thickness_h: ev.fire.rating_thickness_h,
+        equiv_thickness_in: ev.fire.equiv_thickness_in,
+        fire_cover_in: ev.fire.cover_in,
+        frequency_hz: ev.frequency_hz,
         m_service_total_kipft: kipft(crate::case::service_moments(&mid.effects, case.sustained_live).1),
         strands: cand
             .pattern
@@ -286,6 +325,38 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
         "Transfer   {:.1} in = (fse/3000) db; service class reached: {}",
         ev.transfer_length_in,
         ev.service_class.name()
+    )?;
+    let c = &ev.camber;
+    writeln!(
+        w,
+        "Camber     release {:+.2} in (prestress {:+.2}, self-weight {:+.2}); erection {:+.2} in; final {:+.2} in; with live {:+.2} in",
+        c.camber_release_in, c.prestress_release_in, -c.self_release_in, c.camber_erection_in, c.camber_final_in, c.net_final_with_live_in
+    )?;
+    writeln!(
+        w,
+        "           upward positive; Martin (1977) multipliers, PCI Design Handbook{}",
+        if c.cracked {
+            "; live deflection on the bilinear cracked stiffness"
+        } else {
+            ""
+        }
+    )?;
+    let f = &ev.fire;
+    writeln!(
+        w,
+        "Fire       {} (heat transmission {} h, te {:.2} in; cover {:.2} in) — IBC 2021 722.2",
+        f.rating_h.map_or("not rated by plankwise's tables".to_string(), |r| format!(
+            "{} h reached",
+            crate::checks::fire::fmt_h(r)
+        )),
+        crate::checks::fire::fmt_h(f.rating_thickness_h),
+        f.equiv_thickness_in,
+        f.cover_in
+    )?;
+    writeln!(
+        w,
+        "Vibration  f = {:.2} Hz (dead + 10 % live); about 3–4 Hz is commonly sought for walking comfort",
+        ev.frequency_hz
     )?;
     writeln!(w)?;
     writeln!(

@@ -1,0 +1,280 @@
+//! Camber and deflection: elastic values at release, long-term values by the
+//! Martin (1977) multipliers as tabulated in the PCI Design Handbook, and
+//! immediate live-load deflection (cracked for classes T and C).
+//!
+//! Upward is positive for camber; deflections are given downward positive
+//! and subtracted. Internal units: in, lbf, psi.
+
+use serde::Serialize;
+
+use crate::case::ServiceClass;
+use crate::member::Member;
+
+/// Long-term multipliers of Martin (1977), PCI Journal 22(1), as tabulated in
+/// the PCI Design Handbook ("suggested simple span multipliers"). From
+/// memory, high confidence — verify (reference sheet §6.3).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Multipliers {
+    /// (1) deflection from member weight at release, to erection.
+    pub erection_self: f64,
+    /// (2) camber from prestress at release, to erection.
+    pub erection_prestress: f64,
+    /// (3) deflection from member weight at release, final.
+    pub final_self: f64,
+    /// (4) camber from prestress at release, final.
+    pub final_prestress: f64,
+    /// (5) deflection from superimposed dead load, final.
+    pub final_sdl: f64,
+    /// (6) deflection from composite topping, final (0 without topping).
+    pub final_topping: f64,
+}
+
+/// Without composite topping.
+pub const MARTIN_UNTOPPED: Multipliers = Multipliers {
+    erection_self: 1.85,
+    erection_prestress: 1.80,
+    final_self: 2.70,
+    final_prestress: 2.45,
+    final_sdl: 3.00,
+    final_topping: 0.0,
+};
+
+/// With composite topping.
+pub const MARTIN_TOPPED: Multipliers = Multipliers {
+    erection_self: 1.85,
+    erection_prestress: 1.80,
+    final_self: 2.40,
+    final_prestress: 2.20,
+    final_sdl: 3.00,
+    final_topping: 2.30,
+};
+
+/// Camber and deflection of one member, in (camber upward positive,
+/// deflections downward positive).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Camber {
+    /// Prestress camber at release (Eci, member length, force after transfer).
+    pub prestress_release_in: f64,
+    /// Self-weight deflection at release.
+    pub self_release_in: f64,
+    /// Net camber at release.
+    pub camber_release_in: f64,
+    /// Camber at erection (Martin multipliers).
+    pub camber_erection_in: f64,
+    /// Elastic deflection from the topping, on the bare section.
+    pub topping_in: f64,
+    /// Elastic deflection from superimposed dead and dead line loads.
+    pub sdl_in: f64,
+    /// Final camber under permanent loads (Martin multipliers).
+    pub camber_final_in: f64,
+    /// Immediate deflection from live load (floors) or the larger of roof
+    /// live and snow (roofs), cracked where class T or C.
+    pub defl_live_in: f64,
+    /// Deflection after attachment of nonstructural elements: the long-term
+    /// change after erection plus the immediate live deflection.
+    pub defl_after_attach_in: f64,
+    /// Final position with the full live load on (camber final − live).
+    pub net_final_with_live_in: f64,
+    /// Whether the live deflection used the cracked (bilinear) stiffness.
+    pub cracked: bool,
+    /// Multipliers used.
+    pub multipliers: Multipliers,
+}
+
+/// Midspan deflection of a simply supported span `l` under uniform `w`:
+/// 5wL⁴/384EI (any mechanics text).
+pub fn uniform_deflection(w: f64, l: f64, ei: f64) -> f64 {
+    5.0 * w * l.powi(4) / (384.0 * ei)
+}
+
+/// Midspan deflection from a point load `p` at `a` on span `l`:
+/// P a (3L² − 4a²)/48EI for a ≤ L/2 (by symmetry otherwise).
+pub fn point_deflection(p: f64, a: f64, l: f64, ei: f64) -> f64 {
+    let a = a.min(l - a).max(0.0);
+    p * a * (3.0 * l * l - 4.0 * a * a) / (48.0 * ei)
+}
+
+/// Midspan camber of one strand layer of force `p` whose eccentricity is
+/// `e_end` at the ends and `e_mid` between hold-downs at `a` from each end
+/// (a = L/2 for one hold-down; e_end = e_mid for straight strand):
+/// P·ec·L²/8EI − P·e′·a²/6EI, e′ = ec − ee (PCI Design Handbook design-aid
+/// form, reference sheet §6.2, derived by mechanics).
+pub fn layer_camber(p: f64, e_end: f64, e_mid: f64, a: f64, l: f64, ei: f64) -> f64 {
+    p * e_mid * l * l / (8.0 * ei) - p * (e_mid - e_end) * a * a / (6.0 * ei)
+}
+
+/// Midspan deflection (upward positive) from a curvature κ(x) = M(x)/EI on a
+/// simply supported length `l`, by virtual work with the unit-load moment
+/// x/2 (Simpson's rule over `n` panels, n even).
+pub fn integrate_camber(l: f64, n: usize, curvature: impl Fn(f64) -> f64) -> f64 {
+    let h = l / n as f64;
+    let m = |x: f64| if x <= l / 2.0 { x / 2.0 } else { (l - x) / 2.0 };
+    let mut s = 0.0;
+    for i in 0..=n {
+        let x = i as f64 * h;
+        let wgt = if i == 0 || i == n {
+            1.0
+        } else if i % 2 == 1 {
+            4.0
+        } else {
+            2.0
+        };
+        s += wgt * curvature(x) * m(x);
+    }
+    s * h / 3.0
+}
+
+/// Cracked moment of inertia, prestressing steel only (PCI Design Handbook
+/// approximation, reference sheet §6.4, from memory, medium):
+/// Icr ≈ n·Aps·dp²·(1 − 1.6√(n·ρp)), n = Eps/Ec, ρp = Aps/(b·dp).
+pub fn cracked_inertia(n: f64, aps: f64, dp: f64, b: f64) -> f64 {
+    let rho = aps / (b * dp);
+    n * aps * dp * dp * (1.0 - 1.6 * (n * rho).sqrt())
+}
+
+/// Camber and deflections of a member; `class` is the service class reached
+/// and `ft_total`/`f_live` the bottom-fibre tension under total load and the
+/// stress from live load alone (psi, tension positive) for the bilinear method.
+pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Camber {
+    let b = m.bare;
+    let eci_i = m.mix.eci().get() * b.ix_in4;
+    let ec_i = m.mix.ec().get() * b.ix_in4;
+    let lm = m.lm;
+    let po = m.history.fpo_psi;
+    let a = m.hold_down.unwrap_or(lm / 2.0);
+    let mut prestress = 0.0;
+    for layer in &m.layers {
+        let p = layer.area * po;
+        let (ee, ec) = (b.yb_in - layer.y_end, b.yb_in - layer.y_mid);
+        if layer.debond > 0.0 {
+            // debonded: integrate M/EI with the layer inactive over its debonded length
+            let hd = m.hold_down;
+            let e_at = |d: f64| match hd {
+                Some(h) if d < h => ee + (ec - ee) * d / h,
+                _ => ec,
+            };
+            prestress += integrate_camber(lm, 2000, |x| {
+                let d = x.min(lm - x);
+                if d < layer.debond { 0.0 } else { p * e_at(d) / eci_i }
+            });
+        } else {
+            prestress += layer_camber(p, ee, ec, a, lm, eci_i);
+        }
+    }
+    let self_rel = uniform_deflection(m.w[0], lm, eci_i);
+    let mult = if m.comp.is_some() { MARTIN_TOPPED } else { MARTIN_UNTOPPED };
+    let l = m.l;
+    let ec_comp = m.comp.map_or(ec_i, |c| m.mix.ec().get() * c.ix_in4);
+    let topping = uniform_deflection(m.w[1], l, ec_i);
+    let mut sdl = uniform_deflection(m.w[2], l, ec_comp);
+    let mut live_pts = 0.0;
+    for &(p, at, kind) in &m.points {
+        match kind {
+            crate::case::LoadKind::Dead => sdl += point_deflection(p, at, l, ec_comp),
+            crate::case::LoadKind::Live => live_pts += point_deflection(p, at, l, ec_comp),
+        }
+    }
+    let live_w = match m.case.member_use {
+        crate::case::Use::Floor => m.w[3],
+        crate::case::Use::Roof => m.w[4].max(m.w[3]),
+    };
+    let mut live = uniform_deflection(live_w, l, ec_comp) + live_pts;
+    // classes T and C: bilinear behaviour through an effective inertia
+    let mut cracked = false;
+    if class != ServiceClass::U && f_live > 0.0 {
+        let fr = m.mix.fr().get();
+        let ratio = (1.0 - (ft_total - fr) / f_live).clamp(0.0, 1.0);
+        let dp = m.h_total - m.pattern.centroid();
+        let n = m.strand.eps.get() / m.mix.ec().get();
+        let ig = m.comp.map_or(b.ix_in4, |c| c.ix_in4);
+        let icr = cracked_inertia(n, m.aps, dp, b.width_in).max(1e-6);
+        let ie = (ratio.powi(3) * ig + (1.0 - ratio.powi(3)) * icr).min(ig);
+        live *= ig / ie;
+        cracked = true;
+    }
+    let camber_release = prestress - self_rel;
+    let camber_erection = mult.erection_prestress * prestress - mult.erection_self * self_rel;
+    let camber_final = mult.final_prestress * prestress - mult.final_self * self_rel - mult.final_topping * topping - mult.final_sdl * sdl;
+    let after = (camber_erection - camber_final).max(0.0) + live;
+    Camber {
+        prestress_release_in: prestress,
+        self_release_in: self_rel,
+        camber_release_in: camber_release,
+        camber_erection_in: camber_erection,
+        topping_in: topping,
+        sdl_in: sdl,
+        camber_final_in: camber_final,
+        defl_live_in: live,
+        defl_after_attach_in: after,
+        net_final_with_live_in: camber_final - live,
+        cracked,
+        multipliers: mult,
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    #[test]
+    fn example_c_release_camber() {
+        // Engineering reference sheet §10.2 Example C [D]: 48 × 8 strip,
+        // Po = 173.50 kip, e = 2.75 in, 24 ft, Eci 3372.2 ksi, w 0.400 klf:
+        // camber +0.716 in, self-weight −0.432 in, erection +0.489, final +0.588.
+        let ei = 3_372_165.0 * 2048.0;
+        let l = 288.0;
+        let p = layer_camber(173_500.0, 2.75, 2.75, l / 2.0, l, ei);
+        let w = uniform_deflection(400.0 / 12.0, l, ei);
+        assert_relative_eq!(p, 0.716, max_relative = 2e-3);
+        assert_relative_eq!(w, 0.432, max_relative = 2e-3);
+        assert_relative_eq!(1.80 * p - 1.85 * w, 0.489, max_relative = 3e-3);
+        assert_relative_eq!(2.45 * p - 2.70 * w, 0.588, max_relative = 3e-3);
+    }
+
+    #[test]
+    fn martin_multipliers_as_tabulated() {
+        // PCI Design Handbook table of Martin (1977) multipliers (from memory, high).
+        assert_eq!(
+            [
+                MARTIN_UNTOPPED.erection_self,
+                MARTIN_UNTOPPED.erection_prestress,
+                MARTIN_UNTOPPED.final_self,
+                MARTIN_UNTOPPED.final_prestress,
+                MARTIN_UNTOPPED.final_sdl
+            ],
+            [1.85, 1.80, 2.70, 2.45, 3.00]
+        );
+        assert_eq!(
+            [
+                MARTIN_TOPPED.final_self,
+                MARTIN_TOPPED.final_prestress,
+                MARTIN_TOPPED.final_sdl,
+                MARTIN_TOPPED.final_topping
+            ],
+            [2.40, 2.20, 3.00, 2.30]
+        );
+    }
+
+    #[test]
+    fn integrator_matches_the_closed_forms() {
+        // Straight, one-point and two-point profiles against Simpson
+        // integration of M/EI (virtual work); within 0.5 %.
+        let (l, ei, p) = (600.0, 1.0e9, 300_000.0);
+        for (ee, ec, a) in [(6.0, 6.0, 300.0), (-2.0, 10.0, 300.0), (-2.0, 10.0, 240.0), (1.0, 9.0, 150.0)] {
+            let closed = layer_camber(p, ee, ec, a, l, ei);
+            let num = integrate_camber(l, 4000, |x| {
+                let d = x.min(l - x);
+                let e = if d < a { ee + (ec - ee) * d / a } else { ec };
+                p * e / ei
+            });
+            assert_relative_eq!(num, closed, max_relative = 5e-3);
+        }
+        // 5wL⁴/384EI equals the integral of wx(L−x)/2EI
+        let w = 50.0;
+        let num = integrate_camber(l, 2000, |x| w * x * (l - x) / 2.0 / ei);
+        assert_relative_eq!(num, uniform_deflection(w, l, ei), max_relative = 1e-9);
+        let num = integrate_camber(l, 2000, |x| crate::case::point(1000.0, 200.0, l, x).0 / ei);
+        assert_relative_eq!(num, point_deflection(1000.0, 200.0, l, ei), max_relative = 1e-6);
+    }
+}

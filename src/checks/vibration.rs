@@ -1,0 +1,60 @@
+//! Fundamental frequency of the simply supported member, as information or,
+//! when the case sets a minimum, as a check.
+//!
+//! f = (π/2)·√(g·E·I / (w·L⁴)), the first mode of a uniform simply
+//! supported beam (any structural dynamics text, e.g. Chopra, *Dynamics of
+//! Structures*, §16). w is the dead load plus 10 % of the live load, E = Ec,
+//! I of the section carrying superimposed loads (common practice, no source).
+//! A walking-comfort threshold of about 3–4 Hz is commonly quoted (common
+//! practice, no source).
+
+use super::{Analysis, CheckInfo, CheckResult, Group};
+use crate::member::Member;
+use crate::units::G_IN_PER_S2;
+
+/// Registry entry.
+pub const INFO: CheckInfo = CheckInfo {
+    id: "frequency",
+    title: "Natural frequency (walking comfort)",
+    clause: "simply supported beam, f = (π/2)√(gEI/wL⁴); threshold by the case",
+    unit: "Hz",
+    group: Group::Deflection,
+};
+
+/// The frequency, Hz.
+pub fn frequency(m: &Member) -> f64 {
+    let w = m.w[0] + m.w[1] + m.w[2] + 0.1 * m.w[3];
+    let i = m.comp.map_or(m.bare.ix_in4, |c| c.ix_in4);
+    let e = m.mix.ec().get();
+    std::f64::consts::FRAC_PI_2 * (G_IN_PER_S2 * e * i / (w * m.l.powi(4))).sqrt()
+}
+
+/// Run only when a minimum frequency is set; the demand is the minimum
+/// frequency and the capacity the member's own, so a ratio above 1 fails.
+pub fn run(an: &Analysis) -> Option<CheckResult> {
+    let min = an.member.case.min_frequency_hz?;
+    let f = an.frequency_hz;
+    Some(CheckResult::new(
+        &INFO,
+        min,
+        f,
+        None,
+        format!("f = {f:.2} Hz (dead + 10 % live); about 3–4 Hz is commonly sought"),
+    ))
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::units::G_IN_PER_S2;
+    use approx::assert_relative_eq;
+
+    #[test]
+    fn uniform_beam_closed_form() {
+        // Chopra, Dynamics of Structures: ω1 = π²√(EI/(m L⁴)), f = ω/2π =
+        // (π/2)√(EI/(m L⁴)) with m = w/g.
+        let (e, i, w, l): (f64, f64, f64, f64) = (4.0e6, 1772.0, 30.0, 300.0);
+        let f = std::f64::consts::FRAC_PI_2 * (G_IN_PER_S2 * e * i / (w * l.powi(4))).sqrt();
+        let omega = std::f64::consts::PI.powi(2) * (e * i / ((w / G_IN_PER_S2) * l.powi(4))).sqrt();
+        assert_relative_eq!(f, omega / (2.0 * std::f64::consts::PI), max_relative = 1e-12);
+    }
+}
