@@ -1,6 +1,7 @@
 //! Printers over `impl Write`: plain text for people, JSON for scripts.
 
 pub mod check;
+pub mod shortlist;
 
 use std::io::{self, Write};
 

@@ -70,16 +70,16 @@ pub mod limits {
 /// Published figures further than this from ours draw a warning.
 pub const PUBLISHED_TOLERANCE: f64 = 0.02;
 
-struct Ctx<'a> {
-    rep: Reporter<'a>,
+pub(crate) struct Ctx<'a> {
+    pub(crate) rep: Reporter<'a>,
 }
 
-fn span<T>(s: &Spanned<T>) -> Option<Range<usize>> {
+pub(crate) fn span<T>(s: &Spanned<T>) -> Option<Range<usize>> {
     Some(s.span())
 }
 
 impl Ctx<'_> {
-    fn q<K: Kind>(&mut self, s: &S, path: &str, field: &str) -> Option<Q<K>> {
+    pub(crate) fn q<K: Kind>(&mut self, s: &S, path: &str, field: &str) -> Option<Q<K>> {
         match Q::<K>::parse(s.get_ref()) {
             Ok(v) => Some(v),
             Err(e) => {
@@ -89,7 +89,7 @@ impl Ctx<'_> {
         }
     }
 
-    fn opt_q<K: Kind>(&mut self, s: &Option<S>, path: &str, field: &str) -> Option<Option<Q<K>>> {
+    pub(crate) fn opt_q<K: Kind>(&mut self, s: &Option<S>, path: &str, field: &str) -> Option<Option<Q<K>>> {
         match s {
             None => Some(None),
             Some(s) => self.q::<K>(s, path, field).map(Some),
@@ -97,7 +97,7 @@ impl Ctx<'_> {
     }
 
     /// A quantity that must lie in [lo, hi] (in `unit`).
-    fn ranged<K: Kind>(&mut self, s: &S, path: &str, field: &str, (lo, hi): (f64, f64), unit: &str) -> Option<Q<K>> {
+    pub(crate) fn ranged<K: Kind>(&mut self, s: &S, path: &str, field: &str, (lo, hi): (f64, f64), unit: &str) -> Option<Q<K>> {
         let v = self.q::<K>(s, path, field)?;
         let x = v.in_unit(unit);
         if !(lo..=hi).contains(&x) {
@@ -112,7 +112,7 @@ impl Ctx<'_> {
     }
 
     /// A length that must be positive.
-    fn positive_len(&mut self, s: &S, path: &str, field: &str) -> Option<Length> {
+    pub(crate) fn positive_len(&mut self, s: &S, path: &str, field: &str) -> Option<Length> {
         let v = self.q::<crate::units::LengthK>(s, path, field)?;
         if v.get() <= 0.0 {
             self.rep
@@ -122,7 +122,7 @@ impl Ctx<'_> {
         Some(v)
     }
 
-    fn count(&mut self, c: &Spanned<i64>, path: &str, field: &str, (lo, hi): (i64, i64)) -> Option<u32> {
+    pub(crate) fn count(&mut self, c: &Spanned<i64>, path: &str, field: &str, (lo, hi): (i64, i64)) -> Option<u32> {
         let v = *c.get_ref();
         if !(lo..=hi).contains(&v) {
             self.rep.error(
@@ -135,7 +135,7 @@ impl Ctx<'_> {
         Some(v as u32)
     }
 
-    fn text(&mut self, s: &Option<S>, path: &str, field: &str) -> String {
+    pub(crate) fn text(&mut self, s: &Option<S>, path: &str, field: &str) -> String {
         match s {
             None => String::new(),
             Some(s) => {
@@ -155,7 +155,7 @@ impl Ctx<'_> {
         }
     }
 
-    fn id(&mut self, s: &S, path: &str) -> String {
+    pub(crate) fn id(&mut self, s: &S, path: &str) -> String {
         let id = s.get_ref();
         if id.trim().is_empty() {
             self.rep.error(span(s), &join(path, "id"), "is empty; give each entry a short id");
@@ -169,7 +169,7 @@ impl Ctx<'_> {
         id.clone()
     }
 
-    fn point(&mut self, p: &Point, path: &str, field: &str) -> Option<(f64, f64)> {
+    pub(crate) fn point(&mut self, p: &Point, path: &str, field: &str) -> Option<(f64, f64)> {
         let v = p.get_ref();
         if v.len() != 2 {
             self.rep.error(
@@ -184,7 +184,7 @@ impl Ctx<'_> {
         Some((x.get(), y.get()))
     }
 
-    fn points(&mut self, pts: &Spanned<Vec<Point>>, path: &str, field: &str, min: usize) -> Option<Vec<(f64, f64)>> {
+    pub(crate) fn points(&mut self, pts: &Spanned<Vec<Point>>, path: &str, field: &str, min: usize) -> Option<Vec<(f64, f64)>> {
         let mut out = Vec::new();
         let mut ok = true;
         for p in pts.get_ref() {
@@ -205,7 +205,7 @@ impl Ctx<'_> {
     }
 }
 
-fn join(path: &str, field: &str) -> String {
+pub(crate) fn join(path: &str, field: &str) -> String {
     if path.is_empty() {
         field.to_string()
     } else if field.is_empty() {
@@ -217,7 +217,7 @@ fn join(path: &str, field: &str) -> String {
 
 /// Turn a serde error into a problem, naming the key and suggesting the
 /// nearest allowed one for a misspelling.
-fn serde_problem(rep: &mut Reporter, err: &toml::de::Error, entry: &Spanned<DeValue>, path: &str) {
+pub(crate) fn serde_problem(rep: &mut Reporter, err: &toml::de::Error, entry: &Spanned<DeValue>, path: &str) {
     let msg = err.message().to_string();
     let at = err.span();
     let field = at.as_ref().map(|s| field_path(entry, s.start)).unwrap_or_default();
@@ -243,7 +243,7 @@ fn serde_problem(rep: &mut Reporter, err: &toml::de::Error, entry: &Spanned<DeVa
 
 /// The dotted key path of the key or value under byte offset `at` within
 /// `v`, searched depth-first (header tables carry no span of their own).
-fn field_path(v: &Spanned<DeValue>, at: usize) -> String {
+pub(crate) fn field_path(v: &Spanned<DeValue>, at: usize) -> String {
     fn walk(v: &Spanned<DeValue>, at: usize, path: &mut Vec<String>) -> bool {
         match v.get_ref() {
             DeValue::Table(t) => {
@@ -280,7 +280,7 @@ fn field_path(v: &Spanned<DeValue>, at: usize) -> String {
     if walk(v, at, &mut path) { path.join(" / ") } else { String::new() }
 }
 
-fn de<'a, T: Deserialize<'a>>(rep: &mut Reporter, v: &Spanned<DeValue<'a>>, path: &str) -> Option<T> {
+pub(crate) fn de<'a, T: Deserialize<'a>>(rep: &mut Reporter, v: &Spanned<DeValue<'a>>, path: &str) -> Option<T> {
     match T::deserialize(ValueDeserializer::from(v.clone())) {
         Ok(t) => Some(t),
         Err(e) => {
@@ -290,12 +290,12 @@ fn de<'a, T: Deserialize<'a>>(rep: &mut Reporter, v: &Spanned<DeValue<'a>>, path
     }
 }
 
-fn key_str<'t>(t: &'t DeTable, key: &str) -> Option<&'t str> {
+pub(crate) fn key_str<'t>(t: &'t DeTable, key: &str) -> Option<&'t str> {
     t.iter().find(|(k, _)| k.get_ref() == key).and_then(|(_, v)| v.get_ref().as_str())
 }
 
 /// Entries of an array of tables, or a problem when the key is not one.
-fn tables<'v, 'a>(rep: &mut Reporter, v: &'v Spanned<DeValue<'a>>, key: &str) -> Vec<&'v Spanned<DeValue<'a>>> {
+pub(crate) fn tables<'v, 'a>(rep: &mut Reporter, v: &'v Spanned<DeValue<'a>>, key: &str) -> Vec<&'v Spanned<DeValue<'a>>> {
     match v.get_ref() {
         DeValue::Array(a) if a.iter().all(|e| e.get_ref().is_table()) => a.iter().collect(),
         _ => {

@@ -1,0 +1,545 @@
+//! The selection commands: rank, envelope, spanmap, shortlist.
+
+use std::io::{self, Write};
+use std::path::{Path, PathBuf};
+
+use serde::Serialize;
+
+use plankwise::catalog::Catalog;
+use plankwise::job::{Bay, DEMO_JOB, Job};
+use plankwise::report::shortlist::{self, BayList, Format};
+use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
+use plankwise::select::{BayRanking, Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
+use plankwise::units::Length;
+
+use super::bay::{BayFlags, objective};
+use super::{Failure, NONE_VIABLE, OK, find_entry, load, print_warnings};
+
+/// Arguments of `plankwise rank`.
+#[derive(Debug, clap::Args)]
+pub struct RankArgs {
+    /// Catalog file (TOML); the built-in demo catalog when omitted.
+    catalog: Option<PathBuf>,
+    /// Job file (TOML) with the bays; "demo" for the built-in demo job.
+    #[arg(long, conflicts_with = "span")]
+    job: Option<PathBuf>,
+    #[command(flatten)]
+    bay: BayFlags,
+    /// Ranking objective: lightest, shallowest, least-steel, cheapest, most-reserve.
+    #[arg(long)]
+    objective: Option<String>,
+    /// How many viable and failing entries to list per bay.
+    #[arg(long, default_value_t = 10)]
+    top: usize,
+    /// Print JSON.
+    #[arg(long, conflicts_with = "csv")]
+    json: bool,
+    /// Print CSV.
+    #[arg(long)]
+    csv: bool,
+}
+
+/// Arguments of `plankwise envelope`.
+#[derive(Debug, clap::Args)]
+pub struct EnvelopeArgs {
+    /// Catalog file (TOML); the built-in demo catalog when omitted.
+    catalog: Option<PathBuf>,
+    /// Section id.
+    #[arg(long)]
+    section: String,
+    /// Strand pattern id.
+    #[arg(long)]
+    pattern: String,
+    /// Span range, e.g. "20 ft..40 ft".
+    #[arg(long, default_value = "20 ft..40 ft")]
+    spans: String,
+    /// Step between spans.
+    #[arg(long, default_value = "2 ft")]
+    step: String,
+    #[command(flatten)]
+    bay: BayFlags,
+    /// Print JSON.
+    #[arg(long, conflicts_with = "csv")]
+    json: bool,
+    /// Print CSV.
+    #[arg(long)]
+    csv: bool,
+}
+
+/// Arguments of `plankwise spanmap`.
+#[derive(Debug, clap::Args)]
+pub struct SpanmapArgs {
+    /// Catalog file (TOML); the built-in demo catalog when omitted.
+    catalog: Option<PathBuf>,
+    /// Job file; with --bay, take that bay's loads and criteria.
+    #[arg(long, requires = "bay_name", conflicts_with = "span")]
+    job: Option<PathBuf>,
+    /// Bay name in the job.
+    #[arg(long = "bay")]
+    bay_name: Option<String>,
+    /// Span range, e.g. "16 ft..40 ft".
+    #[arg(long, default_value = "16 ft..40 ft")]
+    spans: String,
+    /// Sampling step before bisection of each change.
+    #[arg(long, default_value = "1 ft")]
+    step: String,
+    /// Ranking objective.
+    #[arg(long)]
+    objective: Option<String>,
+    #[command(flatten)]
+    flags: BayFlags,
+    /// Print JSON.
+    #[arg(long)]
+    json: bool,
+}
+
+/// Arguments of `plankwise shortlist`.
+#[derive(Debug, clap::Args)]
+pub struct ShortlistArgs {
+    /// Catalog file (TOML); the built-in demo catalog when omitted.
+    catalog: Option<PathBuf>,
+    /// Job file (TOML); "demo" for the built-in demo job.
+    #[arg(long)]
+    job: PathBuf,
+    /// Output file.
+    #[arg(short = 'o', long = "output")]
+    output: PathBuf,
+    /// text, md or csv.
+    #[arg(long, default_value = "text")]
+    format: String,
+    /// Members listed per bay.
+    #[arg(long, default_value_t = 5)]
+    top: usize,
+    /// Replace an existing output file.
+    #[arg(long)]
+    force: bool,
+}
+
+fn load_job(path: &Path) -> Result<(Job, String), Failure> {
+    if path.as_os_str() == "demo" {
+        return Ok((Job::from_str(DEMO_JOB, "demo-job.toml")?, "demo-job.toml (built in)".into()));
+    }
+    Ok((Job::load(path)?, path.display().to_string()))
+}
+
+fn check_job(cat: &Catalog, bays: &[Bay]) -> Result<(), Failure> {
+    let problems = cross_check(cat, bays);
+    if problems.is_empty() {
+        Ok(())
+    } else {
+        Err(Failure::Message(problems.join("\n           ")))
+    }
+}
+
+fn range(text: &str, step: &str) -> Result<Vec<f64>, Failure> {
+    let (a, b) = text
+        .split_once("..")
+        .ok_or_else(|| Failure::Message(format!("--spans: '{text}' should read like \"20 ft..40 ft\"")))?;
+    let p = |t: &str| Length::parse(t).map_err(|e| Failure::Message(format!("--spans: {e}")));
+    let (a, b) = (p(a)?.get() / 12.0, p(b)?.get() / 12.0);
+    let s = Length::parse(step).map_err(|e| Failure::Message(format!("--step: {e}")))?.get() / 12.0;
+    if !(a > 1.0 && b > a && b <= 200.0) || s <= 0.0 || (b - a) / s > 2000.0 {
+        return Err(Failure::Message(format!(
+            "--spans: '{text}' must run upward between 1 ft and 200 ft, at most 2000 steps of '{step}'"
+        )));
+    }
+    let mut v = Vec::new();
+    let mut x = a;
+    while x <= b + 1e-9 {
+        v.push(x);
+        x += s;
+    }
+    Ok(v)
+}
+
+#[derive(Serialize)]
+struct EntryJson {
+    rank: usize,
+    viable: bool,
+    section: String,
+    pattern: String,
+    topping_in: f64,
+    weight_psf: f64,
+    depth_in: f64,
+    steel_in2_per_ft2: f64,
+    price_per_ft2: Option<f64>,
+    governing: String,
+    governing_ratio: f64,
+    first_failure: Option<String>,
+    first_failure_ratio: Option<f64>,
+    reason: String,
+}
+
+fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
+    let f = r.eval.first_failure();
+    EntryJson {
+        rank,
+        viable: r.eval.viable,
+        section: r.entry.section.id.clone(),
+        pattern: r.entry.pattern.id.clone(),
+        topping_in: r.entry.topping.map_or(0.0, |t| t.get()),
+        weight_psf: r.metrics.weight_psf,
+        depth_in: r.metrics.depth_in,
+        steel_in2_per_ft2: r.metrics.steel_in2_per_ft2,
+        price_per_ft2: r.metrics.price_per_ft2,
+        governing: r.eval.governing().id.to_string(),
+        governing_ratio: r.eval.governing().ratio,
+        first_failure: f.map(|c| c.id.to_string()),
+        first_failure_ratio: f.map(|c| c.ratio),
+        reason: failure_reason(r),
+    }
+}
+
+/// `plankwise rank`.
+pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let bays = match &a.job {
+        Some(j) => load_job(j)?.0.bays,
+        None => vec![a.bay.to_bay(&cat)?],
+    };
+    check_job(&cat, &bays)?;
+    let obj = objective(a.objective.as_deref())?;
+    let ranked: Vec<(&Bay, BayRanking)> = bays.iter().map(|b| (b, rank_bay(&cat, b, obj))).collect();
+    let mut out = io::stdout().lock();
+    if a.json {
+        #[derive(Serialize)]
+        struct BayJson {
+            name: String,
+            objective: &'static str,
+            viable_count: usize,
+            failing_count: usize,
+            viable: Vec<EntryJson>,
+            failing: Vec<EntryJson>,
+        }
+        let v: Vec<BayJson> = ranked
+            .iter()
+            .map(|(b, r)| BayJson {
+                name: b.name.clone(),
+                objective: obj.unwrap_or(b.objective).name(),
+                viable_count: r.viable.len(),
+                failing_count: r.failing.len(),
+                viable: r.viable.iter().take(a.top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
+                failing: r
+                    .failing
+                    .iter()
+                    .take(a.top)
+                    .enumerate()
+                    .map(|(i, x)| entry_json(i + 1, x))
+                    .collect(),
+            })
+            .collect();
+        serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
+        writeln!(out)?;
+    } else if a.csv {
+        writeln!(
+            out,
+            "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,steel_in2_per_ft2,governing,governing_ratio,first_failure,first_failure_ratio"
+        )?;
+        for (b, r) in &ranked {
+            for (i, x) in r.viable.iter().take(a.top).chain(r.failing.iter().take(a.top)).enumerate() {
+                let e = entry_json(i + 1, x);
+                writeln!(
+                    out,
+                    "\"{}\",{},{},{},{},{},{:.2},{:.2},{:.5},{},{:.4},{},{}",
+                    b.name.replace('"', "\"\""),
+                    e.rank,
+                    e.viable,
+                    e.section,
+                    e.pattern,
+                    e.topping_in,
+                    e.weight_psf,
+                    e.depth_in,
+                    e.steel_in2_per_ft2,
+                    e.governing,
+                    e.governing_ratio,
+                    e.first_failure.unwrap_or_default(),
+                    e.first_failure_ratio.map_or(String::new(), |r| format!("{r:.4}"))
+                )?;
+            }
+        }
+    } else {
+        for (b, r) in &ranked {
+            writeln!(
+                out,
+                "Bay '{}' — span {:.2} ft; objective {}",
+                b.name,
+                b.case.span.get() / 12.0,
+                obj.unwrap_or(b.objective).name()
+            )?;
+            writeln!(out, "  {} viable of {} entries", r.viable.len(), r.viable.len() + r.failing.len())?;
+            if !r.viable.is_empty() {
+                writeln!(
+                    out,
+                    "  {:>3} {:<42} {:>6} {:>6} {:<24} {:>6}",
+                    "#", "entry", "psf", "h in", "governing", "ratio"
+                )?;
+            }
+            for (i, x) in r.viable.iter().take(a.top).enumerate() {
+                writeln!(
+                    out,
+                    "  {:>3} {:<42} {:>6.1} {:>6.2} {:<24} {:>6.3}",
+                    i + 1,
+                    x.entry.label(),
+                    x.metrics.weight_psf,
+                    x.metrics.depth_in,
+                    x.eval.governing().id,
+                    x.eval.governing().ratio
+                )?;
+            }
+            if r.viable.is_empty() {
+                writeln!(out, "  NO VIABLE MEMBER. Nearest misses:")?;
+            } else if !r.failing.is_empty() {
+                writeln!(out, "  not viable (first failing check, in order of importance):")?;
+            }
+            for x in r.failing.iter().take(a.top) {
+                writeln!(out, "      {:<42} {}", x.entry.label(), failure_reason(x))?;
+            }
+            writeln!(out)?;
+        }
+        plankwise::report::write_cautions(&mut out)?;
+    }
+    let none: Vec<&str> = ranked
+        .iter()
+        .filter(|(_, r)| r.viable.is_empty())
+        .map(|(b, _)| b.name.as_str())
+        .collect();
+    if !none.is_empty() {
+        eprintln!("plankwise: no viable member for: {}", none.join(", "));
+        return Ok(NONE_VIABLE);
+    }
+    Ok(OK)
+}
+
+/// `plankwise envelope`.
+pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let (section, pattern) = find_entry(&cat, &a.section, &a.pattern)?;
+    let spans = range(&a.spans, &a.step)?;
+    let mut flags = a.bay.clone();
+    if flags.span.is_none() {
+        flags.span = Some(format!("{} ft", spans[0]));
+    }
+    let bay = flags.to_bay(&cat)?;
+    let entry = Entry {
+        section,
+        pattern,
+        mix: section.mix(&cat),
+        topping: bay.toppings[0],
+    };
+    let base = case_for(&bay, entry.topping, &topping_mix(&cat, &bay));
+    let limits: Vec<LoadLimit> = spans
+        .iter()
+        .map(|&s| {
+            let mut c = base.clone();
+            c.span = Length::from_unit(s, "ft");
+            max_live(&entry, &c)
+        })
+        .collect();
+    let cap_ft = pattern
+        .max_length
+        .or(section.max_length)
+        .map_or(120.0, |m| (m.get() - base.bearing.get()) / 12.0);
+    let longest = longest_span(&entry, &base, cap_ft);
+    let mut out = io::stdout().lock();
+    if a.json {
+        #[derive(Serialize)]
+        struct EnvJson<'a> {
+            section: &'a str,
+            pattern: &'a str,
+            topping_in: f64,
+            live_psf_at_spans: &'a [LoadLimit],
+            longest_span_ft: Option<f64>,
+            longest_span_under_live_psf: f64,
+        }
+        serde_json::to_writer_pretty(
+            &mut out,
+            &EnvJson {
+                section: &section.id,
+                pattern: &pattern.id,
+                topping_in: entry.topping.map_or(0.0, |t| t.get()),
+                live_psf_at_spans: &limits,
+                longest_span_ft: longest,
+                longest_span_under_live_psf: base.live.in_unit("psf"),
+            },
+        )
+        .map_err(io::Error::from)?;
+        writeln!(out)?;
+    } else if a.csv {
+        writeln!(out, "span_ft,live_psf,governing,ratio")?;
+        for l in &limits {
+            writeln!(
+                out,
+                "{:.3},{},{},{:.6}",
+                l.span_ft,
+                l.live_psf.map_or(String::new(), |q| format!("{q:.2}")),
+                l.governing,
+                l.ratio
+            )?;
+        }
+    } else {
+        writeln!(out, "Envelope of {} (SDL {:.1} psf held)", entry.label(), base.sdl.in_unit("psf"))?;
+        writeln!(out, "  {:>8} {:>12}  {}", "span ft", "live psf", "limited by")?;
+        for l in &limits {
+            writeln!(
+                out,
+                "  {:>8.2} {:>12}  {}",
+                l.span_ft,
+                l.live_psf
+                    .map_or("none".into(), |q| if q >= plankwise::select::envelope::MAX_LIVE_PSF {
+                        "> 2000".into()
+                    } else {
+                        format!("{q:.1}")
+                    }),
+                if l.live_psf.is_none() {
+                    format!("{} fails without live load", l.governing)
+                } else {
+                    l.governing.clone()
+                }
+            )?;
+        }
+        writeln!(
+            out,
+            "  longest span under {:.1} psf live: {}",
+            base.live.in_unit("psf"),
+            longest.map_or("none from 4 ft up".into(), |s| format!("{s:.2} ft"))
+        )?;
+        writeln!(out)?;
+        plankwise::report::write_cautions(&mut out)?;
+    }
+    Ok(OK)
+}
+
+/// `plankwise spanmap`.
+pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let spans = range(&a.spans, &a.step)?;
+    let bay = match (&a.job, &a.bay_name) {
+        (Some(j), Some(name)) => {
+            let job = load_job(j)?.0;
+            let names: Vec<&str> = job.bays.iter().map(|b| b.name.as_str()).collect();
+            job.bays.iter().find(|b| &b.name == name).cloned().ok_or_else(|| {
+                Failure::Message(format!(
+                    "--bay: no bay '{name}'{}; the job has: {}",
+                    plankwise::catalog::diag::suggestion(name, names.iter().copied()),
+                    names.join(", ")
+                ))
+            })?
+        }
+        _ => {
+            let mut f = a.flags.clone();
+            f.span.get_or_insert_with(|| format!("{} ft", spans[0]));
+            f.to_bay(&cat)?
+        }
+    };
+    check_job(&cat, std::slice::from_ref(&bay))?;
+    let obj = objective(a.objective.as_deref())?.unwrap_or(bay.objective);
+    let step = spans.get(1).map_or(1.0, |s| s - spans[0]);
+    let runs = span_map(&cat, &bay, spans[0], *spans.last().unwrap_or(&spans[0]), step, obj);
+    let mut out = io::stdout().lock();
+    if a.json {
+        serde_json::to_writer_pretty(&mut out, &runs).map_err(io::Error::from)?;
+        writeln!(out)?;
+    } else {
+        writeln!(out, "Best entry by span for '{}' (objective {})", bay.name, obj.name())?;
+        for r in &runs {
+            writeln!(
+                out,
+                "  {:>7.2} – {:>7.2} ft  {}",
+                r.from_ft,
+                r.to_ft,
+                r.best.as_deref().unwrap_or("no viable member")
+            )?;
+        }
+        writeln!(out)?;
+        plankwise::report::write_cautions(&mut out)?;
+    }
+    Ok(OK)
+}
+
+fn same_file(a: &Path, b: &Path) -> bool {
+    match (a.canonicalize(), b.canonicalize()) {
+        (Ok(x), Ok(y)) => x == y,
+        _ => false,
+    }
+}
+
+/// Write `bytes` to `path` atomically: a temporary file beside it, then rename.
+pub fn write_atomic(path: &Path, bytes: &[u8]) -> io::Result<()> {
+    let dir = path.parent().filter(|d| !d.as_os_str().is_empty()).unwrap_or(Path::new("."));
+    let name = path.file_name().map_or("out".into(), |n| n.to_string_lossy().into_owned());
+    let tmp = dir.join(format!(".{name}.plankwise-{}.tmp", std::process::id()));
+    let result = (|| {
+        let mut f = std::fs::File::create(&tmp)?;
+        f.write_all(bytes)?;
+        f.sync_all()?;
+        std::fs::rename(&tmp, path)
+    })();
+    if result.is_err() {
+        let _ = std::fs::remove_file(&tmp);
+    }
+    result
+}
+
+/// `plankwise shortlist`.
+pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let (job, _) = load_job(&a.job)?;
+    check_job(&cat, &job.bays)?;
+    let format = match a.format.as_str() {
+        "text" | "txt" => Format::Text,
+        "md" | "markdown" => Format::Markdown,
+        "csv" => Format::Csv,
+        other => {
+            return Err(Failure::Message(format!(
+                "--format: '{other}' is not a format; use text, md or csv"
+            )));
+        }
+    };
+    for input in a.catalog.iter().chain(std::iter::once(&a.job)) {
+        if same_file(input, &a.output) {
+            return Err(Failure::Message(format!(
+                "-o: '{}' is an input file; plankwise never writes over the catalog or the job",
+                a.output.display()
+            )));
+        }
+    }
+    if a.output.is_dir() {
+        return Err(Failure::Message(format!(
+            "-o: '{}' is a folder; give a file name",
+            a.output.display()
+        )));
+    }
+    if a.output.exists() && !a.force {
+        return Err(Failure::Message(format!(
+            "-o: '{}' exists; pass --force to replace it",
+            a.output.display()
+        )));
+    }
+    let ranked: Vec<BayRanking> = job.bays.iter().map(|b| rank_bay(&cat, b, None)).collect();
+    let lists: Vec<BayList> = job
+        .bays
+        .iter()
+        .zip(&ranked)
+        .map(|(bay, ranking)| BayList { bay, ranking })
+        .collect();
+    let mut buf = Vec::new();
+    shortlist::write(&mut buf, format, &job, &cat, &lists, a.top.max(1))?;
+    write_atomic(&a.output, &buf).map_err(|e| Failure::Message(format!("-o: cannot write '{}': {e}", a.output.display())))?;
+    eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
+    let none: Vec<&str> = job
+        .bays
+        .iter()
+        .zip(&ranked)
+        .filter(|(_, r)| r.viable.is_empty())
+        .map(|(b, _)| b.name.as_str())
+        .collect();
+    if !none.is_empty() {
+        eprintln!("plankwise: no viable member for: {}", none.join(", "));
+        return Ok(NONE_VIABLE);
+    }
+    Ok(OK)
+}

@@ -1,0 +1,337 @@
+//! The shortlist for the supplier: text (80 columns, a page per bay),
+//! Markdown and CSV, written over `impl Write`.
+
+use std::io::{self, Write};
+
+use crate::catalog::Catalog;
+use crate::checks::fire::fmt_h;
+use crate::job::{Bay, Job};
+use crate::select::{BayRanking, Ranked, failure_reason};
+use crate::units::fmt_ft_in;
+
+/// Output format.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Format {
+    /// Plain text, 80 columns, form feed between bays.
+    Text,
+    /// Markdown.
+    Markdown,
+    /// Comma-separated values, one row per member.
+    Csv,
+}
+
+/// One bay of the shortlist: the bay and its ranking.
+pub struct BayList<'a, 'c> {
+    /// The bay.
+    pub bay: &'a Bay,
+    /// Its ranking.
+    pub ranking: &'a BayRanking<'c>,
+}
+
+/// The figures printed for one member.
+struct Row {
+    designation: String,
+    id: String,
+    topping: String,
+    weight_psf: f64,
+    depth_in: f64,
+    governing: String,
+    ratio: f64,
+    phi_mn_over_mu: f64,
+    shear_ratio: f64,
+    class: &'static str,
+    camber_erection: f64,
+    camber_final: f64,
+    defl_live: f64,
+    fire: String,
+    member_length: String,
+    pieces: Option<u64>,
+}
+
+fn row(r: &Ranked, bay: &Bay) -> Row {
+    let e = &r.eval;
+    let flex = e.check("flexure");
+    let shear = e.check("shear");
+    let fire = match (e.fire.rating_h, e.fire.rating_cover_h) {
+        (Some(h), Some(c)) => {
+            let by = if c < e.fire.rating_thickness_h { "cover" } else { "thickness" };
+            format!("{} h ({by})", fmt_h(h))
+        }
+        _ => "not rated".into(),
+    };
+    let width_ft = r.entry.section.props.width_in / 12.0;
+    let pieces = bay.pieces.map(u64::from).or_else(|| {
+        bay.area
+            .map(|a| (a.in_unit("ft2") / (width_ft * bay.case.span.get() / 12.0)).ceil() as u64)
+    });
+    Row {
+        designation: format!("{} — {}", r.entry.section.designation, r.entry.pattern.designation),
+        id: format!("{} / {}", r.entry.section.id, r.entry.pattern.id),
+        topping: r.entry.topping.map_or("no topping".into(), |t| {
+            format!("{} in topping", crate::section::family::fmt(t.get()))
+        }),
+        weight_psf: r.metrics.weight_psf,
+        depth_in: r.metrics.depth_in,
+        governing: e.governing().title.to_string(),
+        ratio: e.governing().ratio,
+        phi_mn_over_mu: flex.map_or(0.0, |f| f.capacity / f.demand),
+        shear_ratio: shear.map_or(0.0, |s| s.ratio),
+        class: e.service_class.name(),
+        camber_erection: e.camber.camber_erection_in,
+        camber_final: e.camber.camber_final_in,
+        defl_live: e.camber.defl_live_in,
+        fire,
+        member_length: fmt_ft_in(crate::units::Length::new(e.member_length_in)),
+        pieces,
+    }
+}
+
+fn criteria(bay: &Bay) -> Vec<String> {
+    let c = &bay.case;
+    let mut v = vec![format!(
+        "span {} ({:.2} ft), {}, SDL {:.0} psf, L {:.0} psf, Lr {:.0} psf, S {:.0} psf",
+        fmt_ft_in(c.span),
+        c.span.get() / 12.0,
+        match c.member_use {
+            crate::case::Use::Floor => "floor",
+            crate::case::Use::Roof => "roof",
+        },
+        c.sdl.in_unit("psf"),
+        c.live.in_unit("psf"),
+        c.roof_live.in_unit("psf"),
+        c.snow.in_unit("psf")
+    )];
+    for l in &c.line_loads {
+        v.push(format!(
+            "line load {:.2} klf at {} ({})",
+            l.w.in_unit("klf"),
+            fmt_ft_in(l.at),
+            if l.kind == crate::case::LoadKind::Dead { "dead" } else { "live" }
+        ));
+    }
+    v.push(format!(
+        "class {} allowed, fire {}, {}, objective {}",
+        c.class_allowed.name(),
+        c.fire_rating.map_or("not required".into(), |h| format!(
+            "{} h {}",
+            fmt_h(h),
+            if c.restrained { "restrained" } else { "unrestrained" }
+        )),
+        match c.exposure {
+            crate::fire::Exposure::Interior => "interior",
+            crate::fire::Exposure::Weather => "exposed to weather",
+        },
+        bay.objective.name()
+    ));
+    let area = bay.area.map(|a| format!("{:.0} ft2", a.in_unit("ft2")));
+    let pieces = bay.pieces.map(|p| format!("{p} pieces"));
+    if area.is_some() || pieces.is_some() {
+        v.push(format!(
+            "quantity: {}",
+            [area, pieces].into_iter().flatten().collect::<Vec<_>>().join(", ")
+        ));
+    }
+    v
+}
+
+/// Write the shortlist.
+pub fn write(w: &mut impl Write, format: Format, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+    match format {
+        Format::Text => text(w, job, cat, bays, top),
+        Format::Markdown => markdown(w, job, cat, bays, top),
+        Format::Csv => csv(w, job, bays, top),
+    }
+}
+
+fn header_lines(job: &Job, cat: &Catalog) -> Vec<String> {
+    vec![
+        format!("Project   {}", job.project),
+        format!("Engineer  {}", job.engineer),
+        format!("Date      {}", job.date),
+        format!("Catalog   {} (content hash {})", cat.meta.name, cat.hash),
+        format!("Producer  {}", cat.meta.producer),
+        format!("Basis     {}; ASCE 7-16 load combinations; IBC 2021 §722 fire", job.code),
+    ]
+}
+
+fn text(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+    writeln!(w, "PRECAST MEMBER SHORTLIST — PRELIMINARY")?;
+    writeln!(w, "{}", "=".repeat(78))?;
+    for l in header_lines(job, cat) {
+        writeln!(w, "{l}")?;
+    }
+    for (i, b) in bays.iter().enumerate() {
+        if i > 0 {
+            write!(w, "\x0c")?;
+        }
+        writeln!(w)?;
+        writeln!(w, "Bay {}: {}", i + 1, b.bay.name)?;
+        writeln!(w, "{}", "-".repeat(78))?;
+        for c in criteria(b.bay) {
+            writeln!(w, "  {c}")?;
+        }
+        writeln!(w)?;
+        if b.ranking.viable.is_empty() {
+            writeln!(w, "  NO CATALOG MEMBER WORKS FOR THIS BAY. Nearest misses:")?;
+            for r in b.ranking.failing.iter().take(3) {
+                writeln!(w, "  - {}: {}", r.entry.label(), failure_reason(r))?;
+            }
+            continue;
+        }
+        for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
+            let x = row(r, b.bay);
+            writeln!(w, "{:>3}. {}", k + 1, x.designation)?;
+            writeln!(
+                w,
+                "     [{}] {}, {:.1} psf, {:.2} in deep, member {}",
+                x.id, x.topping, x.weight_psf, x.depth_in, x.member_length
+            )?;
+            writeln!(
+                w,
+                "     governs: {} {:.2}; phiMn/Mu {:.2}; Vu/phiVc {:.2}; class {}",
+                x.governing, x.ratio, x.phi_mn_over_mu, x.shear_ratio, x.class
+            )?;
+            writeln!(
+                w,
+                "     camber at erection {:+.2} in, final {:+.2} in; live defl. {:.2} in",
+                x.camber_erection, x.camber_final, x.defl_live
+            )?;
+            writeln!(
+                w,
+                "     fire {}{}",
+                x.fire,
+                x.pieces.map_or(String::new(), |p| format!("; {p} pieces"))
+            )?;
+        }
+    }
+    writeln!(w)?;
+    writeln!(w, "Notes")?;
+    for n in &job.notes {
+        writeln!(w, "  - {n}")?;
+    }
+    writeln!(w, "  - Camber upward positive (Martin 1977 multipliers); checks per ACI 318-19.")?;
+    writeln!(w)?;
+    writeln!(w, "Cautions")?;
+    for c in super::CAUTIONS {
+        writeln!(w, "  ! {c}")?;
+    }
+    Ok(())
+}
+
+fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+    writeln!(w, "# Precast member shortlist — preliminary")?;
+    writeln!(w)?;
+    for l in header_lines(job, cat) {
+        let (k, v) = l.split_at(10);
+        writeln!(w, "- **{}**: {}", k.trim(), v.trim())?;
+    }
+    for (i, b) in bays.iter().enumerate() {
+        writeln!(w)?;
+        writeln!(w, "## Bay {}: {}", i + 1, b.bay.name)?;
+        writeln!(w)?;
+        for c in criteria(b.bay) {
+            writeln!(w, "- {c}")?;
+        }
+        writeln!(w)?;
+        if b.ranking.viable.is_empty() {
+            writeln!(w, "**No catalog member works for this bay.** Nearest misses:")?;
+            writeln!(w)?;
+            for r in b.ranking.failing.iter().take(3) {
+                writeln!(w, "- `{}`: {}", r.entry.label(), failure_reason(r))?;
+            }
+            continue;
+        }
+        writeln!(
+            w,
+            "| # | member | topping | psf | depth in | governs | ratio | φMn/Mu | Vu/φVc | class | camber erection in | camber final in | live defl in | fire | length | pieces |"
+        )?;
+        writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
+        for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
+            let x = row(r, b.bay);
+            writeln!(
+                w,
+                "| {} | {} (`{}`) | {} | {:.1} | {:.2} | {} | {:.2} | {:.2} | {:.2} | {} | {:+.2} | {:+.2} | {:.2} | {} | {} | {} |",
+                k + 1,
+                x.designation,
+                x.id,
+                x.topping,
+                x.weight_psf,
+                x.depth_in,
+                x.governing,
+                x.ratio,
+                x.phi_mn_over_mu,
+                x.shear_ratio,
+                x.class,
+                x.camber_erection,
+                x.camber_final,
+                x.defl_live,
+                x.fire,
+                x.member_length,
+                x.pieces.map_or("-".into(), |p| p.to_string())
+            )?;
+        }
+    }
+    writeln!(w)?;
+    writeln!(w, "## Notes")?;
+    writeln!(w)?;
+    for n in &job.notes {
+        writeln!(w, "- {n}")?;
+    }
+    writeln!(w, "- Camber upward positive (Martin 1977 multipliers); checks per ACI 318-19.")?;
+    writeln!(w)?;
+    writeln!(w, "## Cautions")?;
+    writeln!(w)?;
+    for c in super::CAUTIONS {
+        writeln!(w, "- **{c}**")?;
+    }
+    Ok(())
+}
+
+fn q(s: &str) -> String {
+    if s.contains([',', '"', '\n']) {
+        format!("\"{}\"", s.replace('"', "\"\""))
+    } else {
+        s.to_string()
+    }
+}
+
+fn csv(w: &mut impl Write, job: &Job, bays: &[BayList], top: usize) -> io::Result<()> {
+    writeln!(
+        w,
+        "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces"
+    )?;
+    for b in bays {
+        if b.ranking.viable.is_empty() {
+            writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
+            continue;
+        }
+        for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
+            let x = row(r, b.bay);
+            writeln!(
+                w,
+                "{},{},{},{},{},{},{},{:.1},{:.2},{},{:.3},{:.3},{:.3},{},{:.3},{:.3},{:.3},{},{},{}",
+                q(&job.project),
+                q(&b.bay.name),
+                k + 1,
+                q(&r.entry.section.id),
+                q(&r.entry.pattern.id),
+                q(&x.designation),
+                r.entry.topping.map_or(0.0, |t| t.get()),
+                x.weight_psf,
+                x.depth_in,
+                q(&x.governing),
+                x.ratio,
+                x.phi_mn_over_mu,
+                x.shear_ratio,
+                x.class,
+                x.camber_erection,
+                x.camber_final,
+                x.defl_live,
+                q(&x.fire),
+                q(&x.member_length),
+                x.pieces.map_or(String::new(), |p| p.to_string())
+            )?;
+        }
+    }
+    Ok(())
+}

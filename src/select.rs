@@ -1,0 +1,280 @@
+//! Selection for a job: every catalog entry (section × pattern × topping
+//! option) evaluated for each bay, filtered, ranked and explained; the
+//! capacity envelope by inverting the checks; the span map.
+
+pub mod envelope;
+
+use std::cmp::Ordering;
+
+use serde::Serialize;
+
+use crate::case::{DesignCase, Topping};
+use crate::catalog::{Catalog, Pattern, Section};
+use crate::checks::{Candidate, Evaluation, evaluate};
+use crate::job::{Bay, Objective};
+use crate::material::{Aggregate, Mix, Modulus};
+use crate::units::{Length, Stress, UnitWeight};
+
+/// One thing the supplier could deliver for a bay.
+#[derive(Debug, Clone, Copy)]
+pub struct Entry<'c> {
+    /// Section.
+    pub section: &'c Section,
+    /// Strand pattern.
+    pub pattern: &'c Pattern,
+    /// Precast concrete.
+    pub mix: &'c Mix,
+    /// Composite topping thickness, if any.
+    pub topping: Option<Length>,
+}
+
+impl Entry<'_> {
+    /// "section / pattern [+ 2 in topping]".
+    pub fn label(&self) -> String {
+        match self.topping {
+            Some(t) => format!("{} / {} + {} in topping", self.section.id, self.pattern.id, fmt_num(t.get())),
+            None => format!("{} / {}", self.section.id, self.pattern.id),
+        }
+    }
+    /// The candidate for the engine.
+    pub fn candidate(&self) -> Candidate<'_> {
+        Candidate {
+            section: self.section,
+            pattern: self.pattern,
+            mix: self.mix,
+        }
+    }
+}
+
+fn fmt_num(v: f64) -> String {
+    crate::section::family::fmt(v)
+}
+
+/// Figures the objectives compare, per plan area.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Metrics {
+    /// Self-weight with topping, psf.
+    pub weight_psf: f64,
+    /// Depth with topping, in.
+    pub depth_in: f64,
+    /// Prestressing steel, in² per ft² of plan.
+    pub steel_in2_per_ft2: f64,
+    /// Price per ft² (None when the catalog gives none).
+    pub price_per_ft2: Option<f64>,
+    /// Governing ratio.
+    pub governing_ratio: f64,
+}
+
+/// An evaluated entry.
+#[derive(Debug, Clone)]
+pub struct Ranked<'c> {
+    /// The entry.
+    pub entry: Entry<'c>,
+    /// Its evaluation.
+    pub eval: Evaluation,
+    /// Its figures.
+    pub metrics: Metrics,
+}
+
+/// The result for one bay.
+#[derive(Debug, Clone)]
+pub struct BayRanking<'c> {
+    /// Viable entries, best first.
+    pub viable: Vec<Ranked<'c>>,
+    /// Entries that fail, the nearest to passing first within each failure group.
+    pub failing: Vec<Ranked<'c>>,
+}
+
+/// The default topping concrete: 4000 psi normalweight at 150 pcf (common
+/// practice, no source).
+pub fn default_topping_mix() -> Mix {
+    Mix {
+        id: "topping (default 4000 psi)".into(),
+        fc: Stress::new(4000.0),
+        fci: Stress::new(4000.0),
+        unit_weight: UnitWeight::from_unit(150.0, "pcf"),
+        aggregate: Aggregate::Carbonate,
+        modulus: Modulus::UnitWeight,
+    }
+}
+
+/// Problems of a job against a catalog, as sentences (empty when sound):
+/// a topping mix that is not in the catalog, or a bay no entry can serve.
+pub fn cross_check(cat: &Catalog, bays: &[Bay]) -> Vec<String> {
+    let mut out = Vec::new();
+    for b in bays {
+        if let Some(id) = &b.topping_mix {
+            if !cat.mixes.iter().any(|m| &m.id == id) {
+                let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
+                out.push(format!(
+                    "bay '{}': topping_mix '{id}' is not a mix of the catalog{}; it has: {}",
+                    b.name,
+                    crate::catalog::diag::suggestion(id, ids.iter().copied()),
+                    ids.join(", ")
+                ));
+            }
+        }
+        if !cat.sections.iter().any(|s| b.families.is_empty() || b.families.contains(&s.family)) {
+            let fams: Vec<&str> = b.families.iter().map(|f| f.name()).collect();
+            out.push(format!(
+                "bay '{}': the catalog has no section of the families asked for ({})",
+                b.name,
+                fams.join(", ")
+            ));
+        }
+    }
+    out
+}
+
+/// The topping mix for a bay.
+pub fn topping_mix(cat: &Catalog, bay: &Bay) -> Mix {
+    bay.topping_mix
+        .as_ref()
+        .and_then(|id| cat.mixes.iter().find(|m| &m.id == id).cloned())
+        .unwrap_or_else(default_topping_mix)
+}
+
+/// Every entry a bay may use.
+pub fn entries<'c>(cat: &'c Catalog, bay: &Bay) -> Vec<Entry<'c>> {
+    let mut out = Vec::new();
+    for s in &cat.sections {
+        if !bay.families.is_empty() && !bay.families.contains(&s.family) {
+            continue;
+        }
+        for p in &s.patterns {
+            for &t in &bay.toppings {
+                out.push(Entry {
+                    section: s,
+                    pattern: p,
+                    mix: s.mix(cat),
+                    topping: t,
+                });
+            }
+        }
+    }
+    out
+}
+
+/// The design case of a bay for one entry (its topping set).
+pub fn case_for(bay: &Bay, topping: Option<Length>, mix: &Mix) -> DesignCase {
+    let mut c = bay.case.clone();
+    c.topping = topping.map(|t| Topping {
+        thickness: t,
+        mix: mix.clone(),
+    });
+    c
+}
+
+/// Figures of an evaluated entry.
+pub fn metrics(e: &Entry, case: &DesignCase, ev: &Evaluation) -> Metrics {
+    let b = e.section.props.width_in;
+    let self_psf = e.section.weight_per_length(e.mix) / b * 144.0;
+    let top_psf = case
+        .topping
+        .as_ref()
+        .map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get() * 144.0);
+    let price = e.pattern.price.or(e.section.price).map(|p| p.in_unit("/ft2"));
+    Metrics {
+        weight_psf: self_psf + top_psf,
+        depth_in: e.section.props.depth_in + e.topping.map_or(0.0, |t| t.get()),
+        steel_in2_per_ft2: e.pattern.aps() / b * 144.0,
+        price_per_ft2: price,
+        governing_ratio: ev.governing().ratio,
+    }
+}
+
+fn key(o: Objective, m: &Metrics) -> f64 {
+    match o {
+        Objective::Lightest => m.weight_psf,
+        Objective::Shallowest => m.depth_in,
+        Objective::LeastSteel => m.steel_in2_per_ft2,
+        Objective::Cheapest => m.price_per_ft2.unwrap_or(f64::MAX),
+        Objective::MostReserve => m.governing_ratio,
+    }
+}
+
+/// The ranking order: the objective, then the others in their fixed order,
+/// then section id, pattern id and topping — a total order, so equal
+/// inputs always rank alike. Figures equal to 1e-9 count as ties.
+pub fn compare(o: Objective, a: &Ranked, b: &Ranked) -> Ordering {
+    let order = std::iter::once(o).chain(Objective::ALL.into_iter().filter(move |&x| x != o));
+    for obj in order {
+        let (x, y) = (key(obj, &a.metrics), key(obj, &b.metrics));
+        if (x - y).abs() > 1e-9 * (1.0 + x.abs().max(y.abs())) {
+            return x.total_cmp(&y);
+        }
+    }
+    (a.entry.section.id.as_str(), a.entry.pattern.id.as_str())
+        .cmp(&(b.entry.section.id.as_str(), b.entry.pattern.id.as_str()))
+        .then_with(|| {
+            a.entry
+                .topping
+                .map(|t| t.get())
+                .unwrap_or(0.0)
+                .total_cmp(&b.entry.topping.map(|t| t.get()).unwrap_or(0.0))
+        })
+}
+
+/// Evaluate one entry for a bay.
+pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> {
+    let case = case_for(bay, e.topping, &topping_mix(cat, bay));
+    let eval = evaluate(&e.candidate(), &case);
+    let metrics = metrics(&e, &case, &eval);
+    Ranked { entry: e, eval, metrics }
+}
+
+/// Rank every entry for a bay with its own objective (or `objective`).
+pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -> BayRanking<'c> {
+    let o = objective.unwrap_or(bay.objective);
+    let (mut viable, mut failing): (Vec<Ranked>, Vec<Ranked>) = entries(cat, bay)
+        .into_iter()
+        .map(|e| evaluate_entry(cat, bay, e))
+        .partition(|r| r.eval.viable);
+    viable.sort_by(|a, b| compare(o, a, b));
+    failing.sort_by(|a, b| {
+        let (fa, fb) = (a.eval.first_failure(), b.eval.first_failure());
+        fa.map(|f| f.group)
+            .cmp(&fb.map(|f| f.group))
+            .then_with(|| fa.map_or(0.0, |f| f.ratio).total_cmp(&fb.map_or(0.0, |f| f.ratio)))
+            .then_with(|| compare(o, a, b))
+    });
+    BayRanking { viable, failing }
+}
+
+/// "Flexural strength 1.18" — the first failure in order of importance and by how much.
+pub fn failure_reason(r: &Ranked) -> String {
+    match r.eval.first_failure() {
+        Some(f) => format!(
+            "{} ({:.0} % over: {:.2} vs {:.2} {})",
+            f.title,
+            (f.ratio - 1.0) * 100.0,
+            f.demand,
+            f.capacity,
+            f.unit
+        ),
+        None => "passes".into(),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::catalog::DEMO_US;
+    use crate::job::{DEMO_JOB, Job};
+
+    #[test]
+    fn demo_job_ranks_with_reasons() {
+        let cat = Catalog::from_str(DEMO_US, "demo-us.toml").unwrap();
+        let job = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
+        assert!(cross_check(&cat, &job.bays).is_empty());
+        let r = rank_bay(&cat, &job.bays[0], None);
+        assert!(!r.viable.is_empty());
+        for w in r.viable.windows(2) {
+            assert_ne!(compare(Objective::Lightest, &w[0], &w[1]), Ordering::Greater);
+            assert!(w[0].metrics.weight_psf <= w[1].metrics.weight_psf + 1e-9);
+        }
+        for f in &r.failing {
+            assert!(failure_reason(f).contains("% over"));
+        }
+    }
+}

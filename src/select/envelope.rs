@@ -1,0 +1,249 @@
+//! The capacity envelope of an entry and the span map of a bay.
+//!
+//! The largest superimposed live load is found by inverting the checks:
+//! every ratio is evaluated at no live load and at a probe load; for the
+//! checks that grow with load, the load that brings the ratio to 1 is
+//! solved on that straight line; the least of these is then checked forward,
+//! and only where the forward ratio is not 1 within 1e-6 (shear, cracked
+//! deflection, a change of governing combination or station) is the answer
+//! bracketed and bisected.
+
+use serde::Serialize;
+
+use super::{Entry, case_for, evaluate_entry, rank_bay, topping_mix};
+use crate::case::DesignCase;
+use crate::catalog::Catalog;
+use crate::checks::{Evaluation, evaluate};
+use crate::job::{Bay, Objective};
+use crate::units::{AreaLoad, Length};
+
+/// Probe live load for the linear estimate, psf.
+const PROBE_PSF: f64 = 100.0;
+/// Largest live load searched, psf.
+pub const MAX_LIVE_PSF: f64 = 2000.0;
+/// Forward-check tolerance on the governing ratio.
+pub const TOLERANCE: f64 = 1e-6;
+
+/// The load limit at one span.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct LoadLimit {
+    /// Span, ft.
+    pub span_ft: f64,
+    /// Largest superimposed live load, psf (None: fails even with none).
+    pub live_psf: Option<f64>,
+    /// The check that limits it (or fails without live load).
+    pub governing: String,
+    /// Its ratio at that load (1 within the tolerance when limited by load).
+    pub ratio: f64,
+}
+
+fn with_live(base: &DesignCase, q_psf: f64) -> DesignCase {
+    let mut c = base.clone();
+    c.live = AreaLoad::from_unit(q_psf, "psf");
+    c
+}
+
+/// The ratios that grow with live load, at load `q`: (id, ratio).
+fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f64)> {
+    ev.checks
+        .iter()
+        .filter(|c| driven.contains(&c.id))
+        .map(|c| (c.id, c.ratio))
+        .collect()
+}
+
+/// Largest live load on `entry` for `base` (its live load ignored).
+pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
+    let cand = entry.candidate();
+    let span_ft = base.span.get() / 12.0;
+    let e0 = evaluate(&cand, &with_live(base, 0.0));
+    if let Some(f) = e0.first_failure() {
+        return LoadLimit {
+            span_ft,
+            live_psf: None,
+            governing: f.id.to_string(),
+            ratio: f.ratio,
+        };
+    }
+    let e1 = evaluate(&cand, &with_live(base, PROBE_PSF));
+    // checks whose ratio rises with load; the rest cannot limit it
+    let mut driven: Vec<&'static str> = Vec::new();
+    let mut best = (MAX_LIVE_PSF, "none");
+    for c0 in &e0.checks {
+        let Some(c1) = e1.check(c0.id) else { continue };
+        if c1.ratio > c0.ratio + 1e-12 {
+            driven.push(c0.id);
+            let q = (1.0 - c0.ratio) / (c1.ratio - c0.ratio) * PROBE_PSF;
+            if q < best.0 {
+                best = (q.max(0.0), c0.id);
+            }
+        }
+    }
+    if driven.is_empty() {
+        return LoadLimit {
+            span_ft,
+            live_psf: Some(MAX_LIVE_PSF),
+            governing: "none".into(),
+            ratio: 0.0,
+        };
+    }
+    let worst = |q: f64| -> (f64, &'static str) {
+        let ev = evaluate(&cand, &with_live(base, q));
+        load_ratios(&ev, &driven)
+            .into_iter()
+            .fold((f64::NEG_INFINITY, ""), |a, (id, r)| if r > a.0 { (r, id) } else { a })
+    };
+    let (r, id) = worst(best.0);
+    if (r - 1.0).abs() <= TOLERANCE {
+        return LoadLimit {
+            span_ft,
+            live_psf: Some(best.0),
+            governing: id.to_string(),
+            ratio: r,
+        };
+    }
+    // not linear: bracket the crossing of 1 and bisect
+    let (mut lo, mut hi) = if r > 1.0 { (0.0, best.0) } else { (best.0, best.0) };
+    if r < 1.0 {
+        while worst(hi).0 < 1.0 && hi < MAX_LIVE_PSF {
+            hi = (hi * 2.0).clamp(1.0, MAX_LIVE_PSF);
+        }
+        if worst(hi).0 < 1.0 {
+            return LoadLimit {
+                span_ft,
+                live_psf: Some(MAX_LIVE_PSF),
+                governing: "none".into(),
+                ratio: worst(hi).0,
+            };
+        }
+    }
+    let mut last = (r, id);
+    for _ in 0..200 {
+        let mid = 0.5 * (lo + hi);
+        last = worst(mid);
+        if (last.0 - 1.0).abs() <= TOLERANCE * 0.1 || hi - lo < 1e-12 {
+            lo = mid;
+            break;
+        }
+        if last.0 > 1.0 {
+            hi = mid;
+        } else {
+            lo = mid;
+        }
+    }
+    LoadLimit {
+        span_ft,
+        live_psf: Some(lo),
+        governing: last.1.to_string(),
+        ratio: last.0,
+    }
+}
+
+/// The envelope over a range of spans, with the bay's other loads held.
+pub fn envelope(entry: &Entry, base: &DesignCase, spans_ft: &[f64]) -> Vec<LoadLimit> {
+    spans_ft
+        .iter()
+        .map(|&s| {
+            let mut c = base.clone();
+            c.span = Length::from_unit(s, "ft");
+            max_live(entry, &c)
+        })
+        .collect()
+}
+
+/// The longest span (ft) the entry carries under the case's loads: the
+/// largest viable span on a 1 ft scan down from `max_ft`, then bisected to
+/// 0.01 ft against the next, failing one (None when no span from 4 ft works).
+pub fn longest_span(entry: &Entry, base: &DesignCase, max_ft: f64) -> Option<f64> {
+    let cand = entry.candidate();
+    let ok = |s: f64| {
+        let mut c = base.clone();
+        c.span = Length::from_unit(s, "ft");
+        evaluate(&cand, &c).viable
+    };
+    let mut s = max_ft.floor();
+    if ok(max_ft) {
+        return Some(max_ft);
+    }
+    while s >= 4.0 && !ok(s) {
+        s -= 1.0;
+    }
+    if s < 4.0 {
+        return None;
+    }
+    let (mut lo, mut hi) = (s, (s + 1.0).min(max_ft));
+    while hi - lo > 0.005 {
+        let mid = 0.5 * (lo + hi);
+        if ok(mid) { lo = mid } else { hi = mid }
+    }
+    Some(lo)
+}
+
+/// One run of the span map: from one span to the next, the best entry.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SpanRun {
+    /// From this span, ft.
+    pub from_ft: f64,
+    /// To this span, ft.
+    pub to_ft: f64,
+    /// The best entry's label (None: no entry is viable).
+    pub best: Option<String>,
+}
+
+fn winner(cat: &Catalog, bay: &Bay, span_ft: f64, objective: Objective) -> Option<String> {
+    let mut b = bay.clone();
+    b.case.span = Length::from_unit(span_ft, "ft");
+    rank_bay(cat, &b, Some(objective)).viable.first().map(|r| r.entry.label())
+}
+
+/// Which entry is best at each span of [from, to], as runs whose ends are
+/// the breakpoints where the winner changes (found to 0.01 ft by bisection
+/// between samples `step` apart).
+pub fn span_map(cat: &Catalog, bay: &Bay, from_ft: f64, to_ft: f64, step_ft: f64, objective: Objective) -> Vec<SpanRun> {
+    let mut runs: Vec<SpanRun> = Vec::new();
+    let mut s = from_ft;
+    let mut cur = winner(cat, bay, s, objective);
+    let mut start = from_ft;
+    while s < to_ft - 1e-9 {
+        let next = (s + step_ft).min(to_ft);
+        let w = winner(cat, bay, next, objective);
+        if w != cur {
+            let (mut lo, mut hi) = (s, next);
+            while hi - lo > 0.005 {
+                let mid = 0.5 * (lo + hi);
+                if winner(cat, bay, mid, objective) == cur {
+                    lo = mid
+                } else {
+                    hi = mid
+                }
+            }
+            runs.push(SpanRun {
+                from_ft: start,
+                to_ft: lo,
+                best: cur,
+            });
+            start = hi;
+            cur = winner(cat, bay, hi, objective);
+        }
+        s = next;
+    }
+    runs.push(SpanRun {
+        from_ft: start,
+        to_ft,
+        best: cur,
+    });
+    runs
+}
+
+/// The envelope of an entry for a bay (its topping mix and loads).
+pub fn bay_envelope(cat: &Catalog, bay: &Bay, entry: &Entry, spans_ft: &[f64]) -> Vec<LoadLimit> {
+    let base = case_for(bay, entry.topping, &topping_mix(cat, bay));
+    envelope(entry, &base, spans_ft)
+}
+
+/// The evaluation of an entry at the bay's own loads (for the forward check in tests).
+pub fn forward(cat: &Catalog, bay: &Bay, entry: Entry, live_psf: f64) -> Evaluation {
+    let mut b = bay.clone();
+    b.case.live = AreaLoad::from_unit(live_psf, "psf");
+    evaluate_entry(cat, &b, entry).eval
+}
