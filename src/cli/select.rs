@@ -380,7 +380,7 @@ pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
         }
     } else {
         writeln!(out, "Envelope of {} (SDL {:.1} psf held)", entry.label(), base.sdl.in_unit("psf"))?;
-        writeln!(out, "  {:>8} {:>12}  {}", "span ft", "live psf", "limited by")?;
+        writeln!(out, "  {:>8} {:>12}  limited by", "span ft", "live psf")?;
         for l in &limits {
             writeln!(
                 out,
