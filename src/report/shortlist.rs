@@ -54,7 +54,11 @@ fn row(r: &Ranked, bay: &Bay) -> Row {
     let shear = e.check("shear");
     let fire = match (e.fire.rating_h, e.fire.rating_cover_h) {
         (Some(h), Some(c)) => {
-            let by = if c < e.fire.rating_thickness_h { "cover" } else { "thickness" };
+            let by = match c.total_cmp(&e.fire.rating_thickness_h) {
+                std::cmp::Ordering::Less => "by cover",
+                std::cmp::Ordering::Greater => "by thickness",
+                std::cmp::Ordering::Equal => "thickness and cover",
+            };
             format!("{} h ({by})", fmt_h(h))
         }
         _ => "not rated".into(),
@@ -154,7 +158,37 @@ fn header_lines(job: &Job, cat: &Catalog) -> Vec<String> {
     ]
 }
 
+/// Wrap `line` at spaces to 78 columns; continuation lines get `indent`.
+fn wrapped(line: &str, indent: &str) -> String {
+    let lead: String = line.chars().take_while(|c| *c == ' ').collect();
+    let mut out = String::new();
+    let mut cur = lead.clone();
+    for word in line[lead.len()..].split(' ') {
+        if cur.len() > lead.len() && cur.chars().count() + 1 + word.chars().count() > 78 {
+            out.push_str(cur.trim_end());
+            out.push('\n');
+            cur = indent.to_string();
+        } else if cur.len() > lead.len() {
+            cur.push(' ');
+        }
+        cur.push_str(word);
+    }
+    out.push_str(&cur);
+    out
+}
+
 fn text(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+    let mut buf = Vec::new();
+    text_raw(&mut buf, job, cat, bays, top)?;
+    for line in String::from_utf8_lossy(&buf).split_inclusive('\n') {
+        let (body, nl) = line.strip_suffix('\n').map_or((line, ""), |b| (b, "\n"));
+        let indent: String = body.chars().take_while(|c| *c == ' ').collect::<String>() + "    ";
+        write!(w, "{}{nl}", wrapped(body, &indent))?;
+    }
+    Ok(())
+}
+
+fn text_raw(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
     writeln!(w, "PRECAST MEMBER SHORTLIST — PRELIMINARY")?;
     writeln!(w, "{}", "=".repeat(78))?;
     for l in header_lines(job, cat) {
@@ -188,7 +222,7 @@ fn text(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usi
             )?;
             writeln!(
                 w,
-                "     governs: {} {:.2}; phiMn/Mu {:.2}; Vu/phiVc {:.2}; class {}",
+                "     governs: {} {:.2}; φMn/Mu {:.2}; Vu/φVc {:.2}; class {}",
                 x.governing, x.ratio, x.phi_mn_over_mu, x.shear_ratio, x.class
             )?;
             writeln!(
