@@ -16,10 +16,24 @@ use plankwise::units::{Length, Stress, UnitWeight};
 
 /// Preliminary selection of precast prestressed floor and roof members.
 #[derive(Debug, Parser)]
-#[command(name = "plankwise", version, about, long_about = None)]
+#[command(
+    name = "plankwise",
+    version,
+    about,
+    long_about = "Preliminary selection of precast prestressed floor and roof members (hollow-core, double tee) to ACI 318-19.\n\nWith no command, opens the terminal UI on the built-in demo catalog and job, or on CATALOG and --job JOB. A preliminary selection only: the supplier's engineer and the engineer of record make the final design.",
+    args_conflicts_with_subcommands = true
+)]
 struct Args {
     #[command(subcommand)]
     command: Option<Command>,
+    /// Catalog file for the UI (default: the built-in demo catalog).
+    catalog: Option<PathBuf>,
+    /// Job file for the UI (default: the built-in demo job).
+    #[arg(long)]
+    job: Option<PathBuf>,
+    /// Print the catalog summary and section table instead of opening the UI.
+    #[arg(long)]
+    summary: bool,
 }
 
 #[derive(Debug, Subcommand)]
@@ -80,6 +94,7 @@ struct CheckArgs {
 
 mod bay;
 mod select;
+mod term;
 
 use bay::BayFlags;
 
@@ -100,7 +115,7 @@ pub fn run() -> i32 {
         }
     };
     let result = match args.command {
-        None => demo(),
+        None => ui_or_summary(args.catalog.as_ref(), args.job.as_ref(), args.summary),
         Some(Command::Validate { file }) => validate(&file),
         Some(Command::Sections {
             file,
@@ -169,10 +184,28 @@ pub(crate) fn print_warnings(cat: &Catalog) {
     }
 }
 
-fn demo() -> Result<i32, Failure> {
-    let (cat, name) = load(None)?;
+fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool) -> Result<i32, Failure> {
+    use std::io::IsTerminal;
+    if summary || !io::stdout().is_terminal() || !io::stdin().is_terminal() {
+        return demo(catalog);
+    }
+    let (cat, _) = load(catalog)?;
+    print_warnings(&cat);
+    let (job, path) = match job {
+        Some(j) if j.as_os_str() != "demo" => (plankwise::job::Job::load(j)?, Some(j.clone())),
+        _ => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
+    };
+    let problems = plankwise::select::cross_check(&cat, &job.bays);
+    if !problems.is_empty() {
+        return Err(Failure::Message(problems.join("\n")));
+    }
+    Ok(term::run(cat, job, path)?)
+}
+
+fn demo(catalog: Option<&PathBuf>) -> Result<i32, Failure> {
+    let (cat, name) = load(catalog)?;
     let mut out = io::stdout().lock();
-    writeln!(out, "plankwise {} — demo catalog (invented data)", env!("CARGO_PKG_VERSION"))?;
+    writeln!(out, "plankwise {}", env!("CARGO_PKG_VERSION"))?;
     writeln!(out)?;
     report::write_summary(&mut out, &cat, &name)?;
     writeln!(out)?;

@@ -26,4 +26,5 @@ pub mod report;
 pub mod section;
 pub mod select;
 pub mod strength;
+pub mod tui;
 pub mod units;

@@ -110,6 +110,8 @@ pub struct CheckJson {
     pub mu_kipft: f64,
     /// φMn at that station, kip-ft.
     pub phi_mn_kipft: f64,
+    /// Mn at that station (strain compatibility), kip-ft.
+    pub mn_kipft: f64,
     /// Mcr at that station, kip-ft.
     pub mcr_kipft: f64,
     /// Factored shear at the governing shear station, kip.
@@ -196,6 +198,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         transfer_length_in: ev.transfer_length_in,
         mu_kipft: kipft(mid.mu_lbin),
         phi_mn_kipft: kipft(mid.flexure.phi_mn_lbin),
+        mn_kipft: kipft(mid.flexure.mn_lbin),
         mcr_kipft: kipft(mid.flexure.mcr_lbin),
         vu_kip: shear.map_or(0.0, |c| c.demand),
         phi_vc_kip: shear.map_or(0.0, |c| c.capacity),

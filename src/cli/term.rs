@@ -1,0 +1,146 @@
+//! The terminal shell around the UI: a blocking event loop, the effects
+//! (files) that `update` asks for, and a terminal that is always restored —
+//! on quit, on panic (ratatui's hook), and on SIGTERM or SIGHUP.
+
+use std::io;
+use std::path::{Path, PathBuf};
+use std::sync::Arc;
+use std::sync::atomic::{AtomicBool, Ordering};
+use std::time::Duration;
+
+use ratatui::crossterm::event::{self, Event, KeyCode, KeyEventKind, KeyModifiers};
+use ratatui::widgets::TableState;
+
+use plankwise::catalog::Catalog;
+use plankwise::job::Job;
+use plankwise::report::shortlist::{self, BayList};
+use plankwise::select::{BayRanking, rank_bay};
+use plankwise::tui::keymap::{Key, Keymap};
+use plankwise::tui::{Action, App, Effect, report, ui, update};
+
+use super::select::write_atomic;
+
+fn key_of(ev: event::KeyEvent) -> Option<Key> {
+    Some(match ev.code {
+        KeyCode::Char(c) if ev.modifiers.contains(KeyModifiers::CONTROL) => Key::Ctrl(c),
+        KeyCode::Char(c) => Key::Char(c),
+        KeyCode::Up => Key::Up,
+        KeyCode::Down => Key::Down,
+        KeyCode::Left => Key::Left,
+        KeyCode::Right => Key::Right,
+        KeyCode::Tab => Key::Tab,
+        KeyCode::BackTab => Key::BackTab,
+        KeyCode::Enter => Key::Enter,
+        KeyCode::Esc => Key::Esc,
+        KeyCode::Backspace => Key::Backspace,
+        KeyCode::PageUp => Key::PageUp,
+        KeyCode::PageDown => Key::PageDown,
+        _ => return None,
+    })
+}
+
+/// The keys file in the user's config folder, if there is one.
+fn keys_file() -> Option<PathBuf> {
+    let base = std::env::var_os("XDG_CONFIG_HOME")
+        .map(PathBuf::from)
+        .or_else(|| std::env::var_os("HOME").map(|h| PathBuf::from(h).join(".config")))?;
+    Some(base.join("plankwise").join("keys.toml"))
+}
+
+fn write_shortlist(app: &App, path: &Path, format: shortlist::Format, force: bool) -> Result<String, String> {
+    if path.exists() && !force {
+        return Err("exists".into());
+    }
+    if path.is_dir() {
+        return Err(format!("'{}' is a folder", path.display()));
+    }
+    let mut rankings: Vec<BayRanking> = app.job.bays.iter().map(|b| rank_bay(&app.catalog, b, None)).collect();
+    for (i, r) in rankings.iter_mut().enumerate() {
+        let marked = app.marked_labels(i);
+        if !marked.is_empty() {
+            r.viable.retain(|x| marked.contains(&x.entry.label()));
+        }
+    }
+    let lists: Vec<BayList> = app
+        .job
+        .bays
+        .iter()
+        .zip(&rankings)
+        .map(|(bay, ranking)| BayList { bay, ranking })
+        .collect();
+    let mut buf = Vec::new();
+    shortlist::write(&mut buf, format, &app.job, &app.catalog, &lists, 3).map_err(|e| e.to_string())?;
+    write_atomic(path, &buf).map_err(|e| format!("cannot write '{}': {e}", path.display()))?;
+    Ok(format!("wrote {}", path.display()))
+}
+
+fn save_job(app: &App, path: &Path) -> Result<String, String> {
+    let text = app.job.to_toml();
+    let mut backup = String::new();
+    if path.exists() {
+        let bak = PathBuf::from(format!("{}.bak", path.display()));
+        std::fs::copy(path, &bak).map_err(|e| format!("cannot keep a backup '{}': {e}", bak.display()))?;
+        backup = format!(" (backup {})", bak.display());
+    }
+    write_atomic(path, text.as_bytes()).map_err(|e| format!("cannot write '{}': {e}", path.display()))?;
+    Ok(format!("saved {}{backup}", path.display()))
+}
+
+/// Run the UI until the user quits or a signal arrives; returns the exit code.
+pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<i32> {
+    let stop = Arc::new(AtomicBool::new(false));
+    for sig in [signal_hook::consts::SIGTERM, signal_hook::consts::SIGHUP] {
+        signal_hook::flag::register(sig, Arc::clone(&stop))?;
+    }
+    let mut app = App::new(catalog, job, job_path);
+    app.mono = std::env::var_os("NO_COLOR").is_some_and(|v| !v.is_empty()) || std::env::var("TERM").is_ok_and(|t| t == "dumb");
+    if let Some(f) = keys_file().filter(|f| f.is_file()) {
+        let (km, problems) = Keymap::with_overrides(&std::fs::read_to_string(&f).unwrap_or_default());
+        app.keymap = km;
+        if let Some(p) = problems.first() {
+            app.status = (format!("{} ({})", p, f.display()), true);
+        }
+    }
+    let mut terminal = ratatui::init();
+    let mut table = TableState::default();
+    let result = (|| -> io::Result<()> {
+        loop {
+            terminal.draw(|f| ui::draw(f, &app, &mut table))?;
+            // wake up now and then to notice a signal; otherwise block on input
+            let mut ev = None;
+            while ev.is_none() {
+                if stop.load(Ordering::Relaxed) {
+                    return Ok(());
+                }
+                if event::poll(Duration::from_millis(200))? {
+                    ev = Some(event::read()?);
+                }
+            }
+            let Some(Event::Key(k)) = ev else { continue };
+            if k.kind != KeyEventKind::Press {
+                continue;
+            }
+            let Some(key) = key_of(k) else { continue };
+            let Some(action) = app.action_for(key) else { continue };
+            match update(&mut app, action) {
+                Effect::None => {}
+                Effect::Quit => return Ok(()),
+                Effect::WriteShortlist { path, format, force } => match write_shortlist(&app, &path, format, force) {
+                    Err(e) if e == "exists" => {
+                        update(&mut app, Action::AskOverwrite);
+                    }
+                    r => report(&mut app, r),
+                },
+                Effect::SaveJob { path } => {
+                    let r = save_job(&app, &path);
+                    if r.is_ok() {
+                        app.job_path = Some(path);
+                    }
+                    report(&mut app, r);
+                }
+            }
+        }
+    })();
+    ratatui::restore();
+    result.map(|()| 0)
+}

@@ -1,0 +1,910 @@
+//! The terminal UI's state and logic: plain [`App`] state, an [`Action`]
+//! enum, and [`update`], which changes the state and does no I/O — effects
+//! (write a file, quit) are returned for the shell in the binary to carry out.
+//! Rendering, in [`ui`], reads the state only.
+
+pub mod keymap;
+pub mod theme;
+pub mod ui;
+
+use std::collections::BTreeSet;
+use std::path::PathBuf;
+
+use fuzzy_matcher::FuzzyMatcher;
+use fuzzy_matcher::skim::SkimMatcherV2;
+
+use crate::catalog::Catalog;
+use crate::checks::Evaluation;
+use crate::job::{Bay, Job};
+use crate::report::shortlist::Format;
+use crate::section::Family;
+use crate::select::envelope::{LoadLimit, max_live};
+use crate::select::{Entry, Metrics, case_for, failure_reason, rank_bay, topping_mix};
+use crate::units::{AreaLoad, Length};
+use keymap::{Key, Keymap};
+
+/// Everything the user can ask for.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Action {
+    /// Move up.
+    Up,
+    /// Move down.
+    Down,
+    /// Previous value or pane.
+    Left,
+    /// Next value or pane.
+    Right,
+    /// Next pane.
+    NextPane,
+    /// Previous pane.
+    PrevPane,
+    /// Span up a step.
+    SpanUp,
+    /// Span down a step.
+    SpanDown,
+    /// Span up a fine step.
+    SpanUpFine,
+    /// Span down a fine step.
+    SpanDownFine,
+    /// Live load up a step.
+    LiveUp,
+    /// Live load down a step.
+    LiveDown,
+    /// Live load up a fine step.
+    LiveUpFine,
+    /// Live load down a fine step.
+    LiveDownFine,
+    /// Edit the selected bay value.
+    Edit,
+    /// Start a search.
+    Search,
+    /// Next ranking objective.
+    CycleObjective,
+    /// Show or hide non-viable candidates.
+    ToggleFailing,
+    /// Detail or chart.
+    ToggleView,
+    /// Mark the selected candidate for the shortlist.
+    Mark,
+    /// Write the shortlist (asks for a path).
+    WriteShortlist,
+    /// Save the job (asks for a path when there is none).
+    Save,
+    /// US or SI display.
+    ToggleUnits,
+    /// Next bay.
+    NextBay,
+    /// Previous bay.
+    PrevBay,
+    /// Help overlay.
+    Help,
+    /// Quit (asks first when edits are unsaved).
+    Quit,
+    /// A key typed into a prompt, the search, an edit or a question.
+    Input(Key),
+    /// The shell reports that a file exists: ask before overwriting.
+    AskOverwrite,
+    /// The shell reports success.
+    Done,
+    /// The shell reports a failure.
+    Failed,
+}
+
+/// What the shell must do after an update.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Effect {
+    /// Nothing.
+    None,
+    /// Leave.
+    Quit,
+    /// Write the shortlist of the marked candidates (or the top ones).
+    WriteShortlist {
+        /// Where.
+        path: PathBuf,
+        /// Format.
+        format: Format,
+        /// Replace an existing file.
+        force: bool,
+    },
+    /// Save the job (atomically, keeping a backup).
+    SaveJob {
+        /// Where.
+        path: PathBuf,
+    },
+}
+
+/// Which pane has the keys.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Focus {
+    /// Bay criteria.
+    Bay,
+    /// Ranked candidates.
+    Candidates,
+    /// Detail or chart.
+    Detail,
+}
+
+/// What the lower pane shows.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum View {
+    /// Every check of the selected candidate.
+    Detail,
+    /// Its capacity envelope.
+    Chart,
+}
+
+/// Display units.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Units {
+    /// ft, in, psf.
+    Us,
+    /// m, mm, kPa.
+    Si,
+}
+
+/// A question waiting for an answer.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Question {
+    /// Quit with unsaved edits?
+    Quit,
+    /// Overwrite this shortlist file?
+    Overwrite(PathBuf, Format),
+}
+
+/// What a prompt asks for.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum PromptKind {
+    /// Shortlist path (format from the extension: .md, .csv, else text).
+    Shortlist,
+    /// Path to save the job to.
+    SaveJob,
+}
+
+/// Input mode.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Mode {
+    /// Keys go to the keymap.
+    Normal,
+    /// Typing a search query.
+    Search,
+    /// Editing a bay field.
+    Edit(String),
+    /// Typing a path.
+    Prompt(PromptKind, String),
+    /// A yes/no question.
+    Confirm(Question),
+    /// Help overlay.
+    Help,
+}
+
+/// The bay fields shown and edited in the criteria pane.
+pub const FIELDS: [&str; 10] = [
+    "Span",
+    "Dead (SDL)",
+    "Live",
+    "Roof live",
+    "Snow",
+    "Topping",
+    "Fire",
+    "Restraint",
+    "Class",
+    "Objective",
+];
+
+/// One ranked candidate, owned (no borrows into the catalog).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Row {
+    /// Section index in the catalog.
+    pub section: usize,
+    /// Pattern index in the section.
+    pub pattern: usize,
+    /// Topping.
+    pub topping: Option<Length>,
+    /// "section / pattern [+ topping]".
+    pub label: String,
+    /// Section and pattern designations.
+    pub designation: String,
+    /// Family.
+    pub family: Family,
+    /// Remarks.
+    pub remarks: String,
+    /// Figures.
+    pub metrics: Metrics,
+    /// Every check passes.
+    pub viable: bool,
+    /// Governing check title and ratio.
+    pub governing: (String, f64),
+    /// First failure in order of importance, with how much.
+    pub failure: Option<String>,
+}
+
+/// The UI state.
+pub struct App {
+    /// The catalog.
+    pub catalog: Catalog,
+    /// The job being worked on.
+    pub job: Job,
+    /// Where the job came from (None: the built-in demo or flags).
+    pub job_path: Option<PathBuf>,
+    /// Current bay index.
+    pub bay: usize,
+    /// Focus.
+    pub focus: Focus,
+    /// Input mode.
+    pub mode: Mode,
+    /// Lower-pane view.
+    pub view: View,
+    /// Display units.
+    pub units: Units,
+    /// Selected bay field.
+    pub field: usize,
+    /// Selected row in the visible list.
+    pub selected: usize,
+    /// Show non-viable candidates.
+    pub show_failing: bool,
+    /// Search query.
+    pub query: String,
+    /// Ranked rows of the current bay, viable first.
+    pub rows: Vec<Row>,
+    /// Visible rows: index into `rows` and the matched character positions of the label.
+    pub visible: Vec<(usize, Vec<usize>)>,
+    /// Marked candidates (labels) per bay index.
+    pub marked: BTreeSet<(usize, String)>,
+    /// Job edited since loading or saving.
+    pub dirty: bool,
+    /// Status line message and whether it is an error.
+    pub status: (String, bool),
+    /// Keymap.
+    pub keymap: Keymap,
+    /// Evaluation of the selected row (detail pane).
+    pub detail: Option<Evaluation>,
+    /// Envelopes for the chart: (label, limits), selected first.
+    pub chart: Vec<(String, Vec<LoadLimit>)>,
+    /// Monochrome display (NO_COLOR).
+    pub mono: bool,
+}
+
+impl App {
+    /// A new app on a catalog and a job.
+    pub fn new(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> App {
+        let mut app = App {
+            catalog,
+            job,
+            job_path,
+            bay: 0,
+            focus: Focus::Candidates,
+            mode: Mode::Normal,
+            view: View::Detail,
+            units: Units::Us,
+            field: 0,
+            selected: 0,
+            show_failing: true,
+            query: String::new(),
+            rows: Vec::new(),
+            visible: Vec::new(),
+            marked: BTreeSet::new(),
+            dirty: false,
+            status: ("? for help · + − span · ] [ live · / search · w shortlist · q quit".into(), false),
+            keymap: Keymap::default(),
+            detail: None,
+            chart: Vec::new(),
+            mono: false,
+        };
+        app.rerank();
+        app
+    }
+
+    /// The current bay.
+    pub fn current_bay(&self) -> &Bay {
+        &self.job.bays[self.bay]
+    }
+
+    /// What a key means now: prompts, edits, questions and the help
+    /// overlay take keys first; otherwise the keymap decides.
+    pub fn action_for(&self, key: Key) -> Option<Action> {
+        match self.mode {
+            Mode::Normal => self.keymap.action(key),
+            _ => Some(Action::Input(key)),
+        }
+    }
+
+    /// Recompute the ranking of the current bay (its inputs changed).
+    pub fn rerank(&mut self) {
+        let bay = self.job.bays[self.bay].clone();
+        let r = rank_bay(&self.catalog, &bay, None);
+        let to_row = |x: &crate::select::Ranked| {
+            let si = self
+                .catalog
+                .sections
+                .iter()
+                .position(|s| std::ptr::eq(s, x.entry.section))
+                .unwrap_or(0);
+            let pi = self.catalog.sections[si]
+                .patterns
+                .iter()
+                .position(|p| std::ptr::eq(p, x.entry.pattern))
+                .unwrap_or(0);
+            Row {
+                section: si,
+                pattern: pi,
+                topping: x.entry.topping,
+                label: x.entry.label(),
+                designation: format!("{} — {}", x.entry.section.designation, x.entry.pattern.designation),
+                family: x.entry.section.family,
+                remarks: format!("{} {}", x.entry.section.remarks, x.entry.pattern.remarks),
+                metrics: x.metrics,
+                viable: x.eval.viable,
+                governing: (x.eval.governing().title.to_string(), x.eval.governing().ratio),
+                failure: (!x.eval.viable).then(|| failure_reason(x)),
+            }
+        };
+        let rows: Vec<Row> = r.viable.iter().chain(r.failing.iter()).map(to_row).collect();
+        self.rows = rows;
+        self.refilter();
+    }
+
+    /// Recompute the visible rows (query or toggle changed).
+    pub fn refilter(&mut self) {
+        let matcher = SkimMatcherV2::default();
+        let q = self.query.trim();
+        self.visible = self
+            .rows
+            .iter()
+            .enumerate()
+            .filter(|(_, r)| self.show_failing || r.viable)
+            .filter_map(|(i, r)| {
+                if q.is_empty() {
+                    return Some((i, Vec::new()));
+                }
+                // the label's own match gives the highlight; designation,
+                // family and remarks can still let a row through
+                if let Some((_, idx)) = matcher.fuzzy_indices(&r.label, q) {
+                    return Some((i, idx));
+                }
+                let hay = format!("{} {} {}", r.designation, r.family.name(), r.remarks);
+                matcher.fuzzy_match(&hay, q).map(|_| (i, Vec::new()))
+            })
+            .collect();
+        if self.selected >= self.visible.len() {
+            self.selected = self.visible.len().saturating_sub(1);
+        }
+        self.refresh_detail();
+    }
+
+    /// The selected row.
+    pub fn selected_row(&self) -> Option<&Row> {
+        self.visible.get(self.selected).map(|(i, _)| &self.rows[*i])
+    }
+
+    fn entry_of(&self, r: &Row) -> Entry<'_> {
+        let s = &self.catalog.sections[r.section];
+        Entry {
+            section: s,
+            pattern: &s.patterns[r.pattern],
+            mix: s.mix(&self.catalog),
+            topping: r.topping,
+        }
+    }
+
+    /// Recompute the detail (and the chart when it shows).
+    pub fn refresh_detail(&mut self) {
+        let Some(r) = self.selected_row().cloned() else {
+            self.detail = None;
+            self.chart.clear();
+            return;
+        };
+        let bay = self.current_bay().clone();
+        let e = self.entry_of(&r);
+        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        self.detail = Some(crate::checks::evaluate(&e.candidate(), &case));
+        self.chart.clear();
+        if self.view == View::Chart {
+            self.refresh_chart();
+        }
+    }
+
+    /// The capacity envelopes of the selected and the next two viable candidates.
+    pub fn refresh_chart(&mut self) {
+        let bay = self.current_bay().clone();
+        let span = bay.case.span.get() / 12.0;
+        let spans: Vec<f64> = (0..9).map(|k| (span * (0.6 + 0.1 * k as f64)).max(4.0)).collect();
+        let mut picks: Vec<Row> = self.selected_row().cloned().into_iter().collect();
+        for r in self.rows.iter().filter(|r| r.viable) {
+            if picks.len() >= 3 {
+                break;
+            }
+            if !picks.iter().any(|p| p.label == r.label) {
+                picks.push(r.clone());
+            }
+        }
+        self.chart = picks
+            .iter()
+            .map(|r| {
+                let e = self.entry_of(r);
+                let base = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+                let lims = spans
+                    .iter()
+                    .map(|&s| {
+                        let mut c = base.clone();
+                        c.span = Length::from_unit(s, "ft");
+                        max_live(&e, &c)
+                    })
+                    .collect();
+                (r.label.clone(), lims)
+            })
+            .collect();
+    }
+
+    /// A length as the display units show it.
+    pub fn show_len(&self, l: Length) -> String {
+        match self.units {
+            Units::Us => format!("{:.2} ft", l.in_unit("ft")),
+            Units::Si => format!("{:.2} m", l.in_unit("m")),
+        }
+    }
+
+    /// An area load as the display units show it.
+    pub fn show_load(&self, q: AreaLoad) -> String {
+        match self.units {
+            Units::Us => format!("{:.0} psf", q.in_unit("psf")),
+            Units::Si => format!("{:.2} kPa", q.in_unit("kPa")),
+        }
+    }
+
+    /// The value of bay field `i` as text.
+    pub fn field_text(&self, i: usize) -> String {
+        let b = self.current_bay();
+        let c = &b.case;
+        match i {
+            0 => self.show_len(c.span),
+            1 => self.show_load(c.sdl),
+            2 => self.show_load(c.live),
+            3 => self.show_load(c.roof_live),
+            4 => self.show_load(c.snow),
+            5 => b
+                .toppings
+                .iter()
+                .map(|t| {
+                    t.map_or("none".into(), |t| match self.units {
+                        Units::Us => format!("{} in", crate::section::family::fmt(t.get())),
+                        Units::Si => format!("{:.0} mm", t.in_unit("mm")),
+                    })
+                })
+                .collect::<Vec<_>>()
+                .join(", "),
+            6 => c
+                .fire_rating
+                .map_or("none".into(), |h| format!("{} h", crate::checks::fire::fmt_h(h))),
+            7 => if c.restrained { "restrained" } else { "unrestrained" }.into(),
+            8 => format!("{} allowed", c.class_allowed.name()),
+            _ => b.objective.name().into(),
+        }
+    }
+
+    fn say(&mut self, msg: impl Into<String>, error: bool) {
+        self.status = (msg.into(), error);
+    }
+
+    fn changed(&mut self) {
+        self.dirty = true;
+        self.rerank();
+    }
+
+    fn step_span(&mut self, ft: f64) {
+        let step = match self.units {
+            Units::Us => Length::from_unit(ft, "ft"),
+            Units::Si => Length::from_unit(ft * 0.25, "m"),
+        };
+        let c = &mut self.job.bays[self.bay].case;
+        let new = (c.span.get() + step.get()).clamp(48.0, 2400.0);
+        c.line_loads.retain(|l| l.at.get() <= new);
+        c.span = Length::new(new);
+        let s = self.show_len(Length::new(new));
+        self.changed();
+        self.say(format!("span {s}"), false);
+    }
+
+    fn step_live(&mut self, psf: f64) {
+        let step = match self.units {
+            Units::Us => AreaLoad::from_unit(psf, "psf"),
+            Units::Si => AreaLoad::from_unit(psf * 0.05, "kPa"),
+        };
+        let c = &mut self.job.bays[self.bay].case;
+        c.live = AreaLoad::new((c.live.get() + step.get()).clamp(0.0, AreaLoad::from_unit(2000.0, "psf").get()));
+        let live = c.live;
+        let s = self.show_load(live);
+        self.changed();
+        self.say(format!("live load {s}"), false);
+    }
+
+    /// Cycle an enumerated field forward (`dir` = 1) or back (−1).
+    fn cycle_field(&mut self, dir: i32) {
+        let b = &mut self.job.bays[self.bay];
+        match self.field {
+            6 => {
+                let opts = [None, Some(1.0), Some(1.5), Some(2.0), Some(3.0), Some(4.0)];
+                let i = opts.iter().position(|o| *o == b.case.fire_rating).unwrap_or(0) as i32;
+                b.case.fire_rating = opts[(i + dir).rem_euclid(opts.len() as i32) as usize];
+            }
+            7 => b.case.restrained = !b.case.restrained,
+            8 => {
+                use crate::case::ServiceClass::*;
+                let opts = [U, T, C];
+                let i = opts.iter().position(|o| *o == b.case.class_allowed).unwrap_or(0) as i32;
+                b.case.class_allowed = opts[(i + dir).rem_euclid(3) as usize];
+            }
+            9 => {
+                b.objective = if dir > 0 {
+                    b.objective.next()
+                } else {
+                    let all = crate::job::Objective::ALL;
+                    let i = all.iter().position(|o| *o == b.objective).unwrap_or(0);
+                    all[(i + all.len() - 1) % all.len()]
+                }
+            }
+            _ => return,
+        }
+        let t = self.field_text(self.field);
+        self.changed();
+        self.say(format!("{}: {t}", FIELDS[self.field]), false);
+    }
+
+    fn apply_edit(&mut self, text: &str) {
+        let b = &mut self.job.bays[self.bay];
+        let res: Result<(), String> = match self.field {
+            0 => Length::parse(text).map_err(|e| e.to_string()).and_then(|l| {
+                if (48.0..=2400.0).contains(&l.get()) {
+                    b.case.span = l;
+                    Ok(())
+                } else {
+                    Err(format!("'{text}' must lie between 4 ft and 200 ft"))
+                }
+            }),
+            1..=4 => AreaLoad::parse(text).map_err(|e| e.to_string()).and_then(|q| {
+                if !(0.0..=2000.0).contains(&q.in_unit("psf")) {
+                    return Err(format!("'{text}' must lie between 0 and 2000 psf"));
+                }
+                match self.field {
+                    1 => b.case.sdl = q,
+                    2 => b.case.live = q,
+                    3 => b.case.roof_live = q,
+                    _ => b.case.snow = q,
+                }
+                Ok(())
+            }),
+            5 => {
+                let mut v = Vec::new();
+                let mut err = None;
+                for part in text.split(',').map(str::trim).filter(|p| !p.is_empty()) {
+                    if part == "none" {
+                        v.push(None);
+                    } else {
+                        match Length::parse(part) {
+                            Ok(l) if (0.5..=12.0).contains(&l.get()) => v.push(Some(l)),
+                            Ok(_) => err = Some(format!("'{part}' must lie between 0.5 and 12 in")),
+                            Err(e) => err = Some(e.to_string()),
+                        }
+                    }
+                }
+                match err {
+                    Some(e) => Err(e),
+                    None if v.is_empty() => Err("give 'none' or thicknesses such as '2 in', separated by commas".into()),
+                    None => {
+                        b.toppings = v;
+                        Ok(())
+                    }
+                }
+            }
+            _ => Ok(()),
+        };
+        match res {
+            Ok(()) => {
+                let t = self.field_text(self.field);
+                self.changed();
+                self.say(format!("{}: {t}", FIELDS[self.field]), false);
+            }
+            Err(e) => self.say(format!("{}: {e}", FIELDS[self.field]), true),
+        }
+    }
+
+    fn switch_bay(&mut self, dir: i32) {
+        let n = self.job.bays.len() as i32;
+        self.bay = (self.bay as i32 + dir).rem_euclid(n) as usize;
+        self.selected = 0;
+        self.rerank();
+        let name = self.current_bay().name.clone();
+        self.say(format!("bay {}/{}: {name}", self.bay + 1, n), false);
+    }
+
+    /// The marked rows of every bay, or the top three viable of each when none is marked.
+    pub fn marked_labels(&self, bay: usize) -> Vec<String> {
+        self.marked.iter().filter(|(b, _)| *b == bay).map(|(_, l)| l.clone()).collect()
+    }
+}
+
+fn format_for(path: &str) -> Format {
+    if path.ends_with(".md") {
+        Format::Markdown
+    } else if path.ends_with(".csv") {
+        Format::Csv
+    } else {
+        Format::Text
+    }
+}
+
+/// Apply one action. No I/O: the returned effect is for the shell.
+pub fn update(app: &mut App, action: Action) -> Effect {
+    if let Action::Input(key) = action {
+        return input(app, key);
+    }
+    match action {
+        Action::Up | Action::Down => {
+            let down = action == Action::Down;
+            match app.focus {
+                Focus::Bay => {
+                    app.field = if down {
+                        (app.field + 1).min(FIELDS.len() - 1)
+                    } else {
+                        app.field.saturating_sub(1)
+                    };
+                }
+                Focus::Candidates | Focus::Detail => {
+                    let n = app.visible.len();
+                    if n > 0 {
+                        app.selected = if down {
+                            (app.selected + 1).min(n - 1)
+                        } else {
+                            app.selected.saturating_sub(1)
+                        };
+                        app.refresh_detail();
+                    }
+                }
+            }
+        }
+        Action::Left | Action::Right => {
+            let dir = if action == Action::Right { 1 } else { -1 };
+            if app.focus == Focus::Bay && app.field >= 6 {
+                app.cycle_field(dir);
+            } else {
+                return update(app, if dir > 0 { Action::NextPane } else { Action::PrevPane });
+            }
+        }
+        Action::NextPane | Action::PrevPane => {
+            let order = [Focus::Bay, Focus::Candidates, Focus::Detail];
+            let i = order.iter().position(|f| *f == app.focus).unwrap_or(0);
+            let j = if action == Action::NextPane { (i + 1) % 3 } else { (i + 2) % 3 };
+            app.focus = order[j];
+        }
+        Action::SpanUp => app.step_span(1.0),
+        Action::SpanDown => app.step_span(-1.0),
+        Action::SpanUpFine => app.step_span(1.0 / 12.0),
+        Action::SpanDownFine => app.step_span(-1.0 / 12.0),
+        Action::LiveUp => app.step_live(10.0),
+        Action::LiveDown => app.step_live(-10.0),
+        Action::LiveUpFine => app.step_live(1.0),
+        Action::LiveDownFine => app.step_live(-1.0),
+        Action::Edit => match app.focus {
+            Focus::Bay if app.field >= 6 => app.cycle_field(1),
+            Focus::Bay => {
+                let t = app.field_text(app.field);
+                app.mode = Mode::Edit(t);
+            }
+            _ => {
+                app.view = View::Detail;
+                app.focus = Focus::Detail;
+            }
+        },
+        Action::Search => {
+            app.mode = Mode::Search;
+            app.say("search: type to narrow, enter to keep, esc to clear", false);
+        }
+        Action::CycleObjective => {
+            let b = &mut app.job.bays[app.bay];
+            b.objective = b.objective.next();
+            let n = b.objective.name();
+            app.changed();
+            app.say(format!("objective: {n}"), false);
+        }
+        Action::ToggleFailing => {
+            app.show_failing = !app.show_failing;
+            app.refilter();
+            app.say(
+                if app.show_failing {
+                    "showing non-viable candidates"
+                } else {
+                    "hiding non-viable candidates"
+                },
+                false,
+            );
+        }
+        Action::ToggleView => {
+            app.view = if app.view == View::Detail { View::Chart } else { View::Detail };
+            if app.view == View::Chart {
+                app.refresh_chart();
+            }
+        }
+        Action::Mark => {
+            if let Some(r) = app.selected_row() {
+                if !r.viable {
+                    app.say("only viable candidates go on the shortlist", true);
+                } else {
+                    let key = (app.bay, r.label.clone());
+                    let label = r.label.clone();
+                    if !app.marked.remove(&key) {
+                        app.marked.insert(key);
+                        app.say(format!("marked {label}"), false);
+                    } else {
+                        app.say(format!("unmarked {label}"), false);
+                    }
+                }
+            }
+        }
+        Action::WriteShortlist => app.mode = Mode::Prompt(PromptKind::Shortlist, "shortlist.txt".into()),
+        Action::Save => {
+            return match &app.job_path {
+                Some(p) => Effect::SaveJob { path: p.clone() },
+                None => {
+                    app.mode = Mode::Prompt(PromptKind::SaveJob, "job.toml".into());
+                    Effect::None
+                }
+            };
+        }
+        Action::ToggleUnits => {
+            app.units = if app.units == Units::Us { Units::Si } else { Units::Us };
+            app.say(
+                if app.units == Units::Us {
+                    "US customary display"
+                } else {
+                    "SI display"
+                },
+                false,
+            );
+        }
+        Action::NextBay => app.switch_bay(1),
+        Action::PrevBay => app.switch_bay(-1),
+        Action::Help => app.mode = Mode::Help,
+        Action::Quit => {
+            if app.dirty {
+                app.mode = Mode::Confirm(Question::Quit);
+            } else {
+                return Effect::Quit;
+            }
+        }
+        Action::AskOverwrite => {
+            if let Mode::Prompt(PromptKind::Shortlist, p) | Mode::Edit(p) = &app.mode {
+                let p = PathBuf::from(p.clone());
+                let f = format_for(&p.to_string_lossy());
+                app.mode = Mode::Confirm(Question::Overwrite(p, f));
+            }
+        }
+        Action::Done | Action::Failed | Action::Input(_) => {}
+    }
+    Effect::None
+}
+
+fn input(app: &mut App, key: Key) -> Effect {
+    match app.mode.clone() {
+        Mode::Normal => Effect::None,
+        Mode::Help => {
+            app.mode = Mode::Normal;
+            Effect::None
+        }
+        Mode::Search => {
+            match key {
+                Key::Esc => {
+                    app.query.clear();
+                    app.mode = Mode::Normal;
+                }
+                Key::Enter => app.mode = Mode::Normal,
+                Key::Backspace => {
+                    app.query.pop();
+                }
+                Key::Char(c) => app.query.push(c),
+                Key::Up | Key::Down => {
+                    return {
+                        let mode = std::mem::replace(&mut app.mode, Mode::Normal);
+                        let e = update(app, if key == Key::Up { Action::Up } else { Action::Down });
+                        app.mode = mode;
+                        e
+                    };
+                }
+                _ => return Effect::None,
+            }
+            app.selected = 0;
+            app.refilter();
+            Effect::None
+        }
+        Mode::Edit(mut buf) => {
+            match key {
+                Key::Esc => app.mode = Mode::Normal,
+                Key::Enter => {
+                    app.mode = Mode::Normal;
+                    app.apply_edit(&buf);
+                }
+                Key::Backspace => {
+                    buf.pop();
+                    app.mode = Mode::Edit(buf);
+                }
+                Key::Char(c) => {
+                    buf.push(c);
+                    app.mode = Mode::Edit(buf);
+                }
+                _ => {}
+            }
+            Effect::None
+        }
+        Mode::Prompt(kind, mut buf) => match key {
+            Key::Esc => {
+                app.mode = Mode::Normal;
+                app.say("cancelled", false);
+                Effect::None
+            }
+            Key::Enter => {
+                let path = PathBuf::from(buf.trim());
+                if buf.trim().is_empty() {
+                    app.say("give a file name", true);
+                    return Effect::None;
+                }
+                match kind {
+                    PromptKind::Shortlist => {
+                        let format = format_for(buf.trim());
+                        // stays in the prompt until the shell answers
+                        Effect::WriteShortlist {
+                            path,
+                            format,
+                            force: false,
+                        }
+                    }
+                    PromptKind::SaveJob => {
+                        app.mode = Mode::Normal;
+                        Effect::SaveJob { path }
+                    }
+                }
+            }
+            Key::Backspace => {
+                buf.pop();
+                app.mode = Mode::Prompt(kind, buf);
+                Effect::None
+            }
+            Key::Char(c) => {
+                buf.push(c);
+                app.mode = Mode::Prompt(kind, buf);
+                Effect::None
+            }
+            _ => Effect::None,
+        },
+        Mode::Confirm(q) => match key {
+            Key::Char('y') | Key::Char('Y') => {
+                app.mode = Mode::Normal;
+                match q {
+                    Question::Quit => Effect::Quit,
+                    Question::Overwrite(path, format) => Effect::WriteShortlist { path, format, force: true },
+                }
+            }
+            _ => {
+                app.mode = Mode::Normal;
+                app.say("not done", false);
+                Effect::None
+            }
+        },
+    }
+}
+
+/// After the shell has carried out an effect: report it.
+pub fn report(app: &mut App, result: Result<String, String>) {
+    if matches!(app.mode, Mode::Prompt(PromptKind::Shortlist, _)) {
+        app.mode = Mode::Normal;
+    }
+    match result {
+        Ok(m) => {
+            if m.starts_with("saved") {
+                app.dirty = false;
+            }
+            app.say(m, false);
+        }
+        Err(e) => app.say(e, true),
+    }
+}
+
+#[cfg(test)]
+mod tests;

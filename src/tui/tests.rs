@@ -1,0 +1,325 @@
+//! Update tests (state + action → state) and screen tests on ratatui's TestBackend.
+
+use super::keymap::Key;
+use super::*;
+use crate::catalog::DEMO_US;
+use crate::job::DEMO_JOB;
+use ratatui::Terminal;
+use ratatui::backend::TestBackend;
+use ratatui::widgets::TableState;
+
+fn app() -> App {
+    App::new(
+        Catalog::from_str(DEMO_US, "demo-us.toml").unwrap(),
+        Job::from_str(DEMO_JOB, "demo-job.toml").unwrap(),
+        None,
+    )
+}
+
+fn screen(app: &App, w: u16, h: u16) -> String {
+    let mut term = Terminal::new(TestBackend::new(w, h)).unwrap();
+    let mut state = TableState::default();
+    term.draw(|f| ui::draw(f, app, &mut state)).unwrap();
+    let buf = term.backend().buffer().clone();
+    let mut s = String::new();
+    for y in 0..h {
+        for x in 0..w {
+            s.push_str(buf[(x, y)].symbol());
+        }
+        s.push('\n');
+    }
+    s
+}
+
+fn press(app: &mut App, keys: &[Key]) -> Vec<Effect> {
+    let mut out = Vec::new();
+    for &k in keys {
+        if let Some(a) = app.action_for(k) {
+            out.push(update(app, a));
+        }
+    }
+    out
+}
+
+#[test]
+fn span_keys_rerank_at_once() {
+    let mut a = app();
+    let before = a.current_bay().case.span.get();
+    let first = a.rows[0].label.clone();
+    update(&mut a, Action::SpanUp);
+    assert_eq!(a.current_bay().case.span.get(), before + 12.0);
+    assert!(a.dirty);
+    for _ in 0..6 {
+        update(&mut a, Action::SpanUp);
+    }
+    assert_ne!(a.rows[0].label, first, "a longer span changes the winner");
+    update(&mut a, Action::SpanDownFine);
+    assert!((a.current_bay().case.span.get() - (before + 7.0 * 12.0 - 1.0)).abs() < 1e-9);
+    update(&mut a, Action::SpanDown);
+    update(&mut a, Action::SpanUpFine);
+    assert!((a.current_bay().case.span.get() - (before + 6.0 * 12.0)).abs() < 1e-9);
+}
+
+#[test]
+fn live_keys_and_si_steps() {
+    let mut a = app();
+    let q = a.current_bay().case.live.in_unit("psf");
+    update(&mut a, Action::LiveUp);
+    update(&mut a, Action::LiveUpFine);
+    update(&mut a, Action::LiveDownFine);
+    assert!((a.current_bay().case.live.in_unit("psf") - (q + 10.0)).abs() < 1e-9);
+    update(&mut a, Action::LiveDown);
+    update(&mut a, Action::ToggleUnits);
+    assert_eq!(a.units, Units::Si);
+    update(&mut a, Action::SpanUp);
+    let s0 = a.current_bay().case.span.in_unit("m");
+    update(&mut a, Action::SpanUp);
+    assert!(
+        (a.current_bay().case.span.in_unit("m") - s0 - 0.25).abs() < 1e-9,
+        "0.25 m steps in SI"
+    );
+    assert!(a.field_text(0).ends_with(" m"));
+}
+
+#[test]
+fn moving_and_panes() {
+    let mut a = app();
+    update(&mut a, Action::Down);
+    assert_eq!(a.selected, 1);
+    update(&mut a, Action::Up);
+    update(&mut a, Action::Up);
+    assert_eq!(a.selected, 0);
+    update(&mut a, Action::NextPane);
+    assert_eq!(a.focus, Focus::Detail);
+    update(&mut a, Action::NextPane);
+    assert_eq!(a.focus, Focus::Bay);
+    update(&mut a, Action::PrevPane);
+    assert_eq!(a.focus, Focus::Detail);
+    a.focus = Focus::Bay;
+    update(&mut a, Action::Down);
+    assert_eq!(a.field, 1);
+    update(&mut a, Action::Right); // not an enumerated field: moves pane
+    assert_eq!(a.focus, Focus::Candidates);
+    update(&mut a, Action::Left);
+    assert_eq!(a.focus, Focus::Bay);
+}
+
+#[test]
+fn editing_fields_with_units_and_errors() {
+    let mut a = app();
+    a.focus = Focus::Bay;
+    a.field = 0;
+    update(&mut a, Action::Edit);
+    assert!(matches!(a.mode, Mode::Edit(_)));
+    for _ in 0..12 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"31 ft 6 in".chars().map(Key::Char).collect::<Vec<_>>());
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.current_bay().case.span.get(), 378.0);
+    // a wrong unit is an error in the status line, the value stays
+    update(&mut a, Action::Edit);
+    for _ in 0..20 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"40 psf".chars().map(Key::Char).collect::<Vec<_>>());
+    press(&mut a, &[Key::Enter]);
+    assert!(
+        a.status.1 && a.status.0.contains("is an area load, but a length is needed"),
+        "{:?}",
+        a.status
+    );
+    assert_eq!(a.current_bay().case.span.get(), 378.0);
+    // 9.6 m in SI
+    update(&mut a, Action::Edit);
+    for _ in 0..20 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"9.6 m".chars().map(Key::Char).collect::<Vec<_>>());
+    press(&mut a, &[Key::Esc]);
+    assert_eq!(a.current_bay().case.span.get(), 378.0, "esc cancels");
+    // enumerated fields cycle
+    a.field = 6;
+    let f0 = a.current_bay().case.fire_rating;
+    update(&mut a, Action::Edit);
+    assert_ne!(a.current_bay().case.fire_rating, f0);
+    a.field = 7;
+    update(&mut a, Action::Right);
+    a.field = 8;
+    update(&mut a, Action::Right);
+    assert_eq!(a.current_bay().case.class_allowed, crate::case::ServiceClass::T);
+    a.field = 5;
+    update(&mut a, Action::Edit);
+    for _ in 0..10 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"none, 2 in".chars().map(Key::Char).collect::<Vec<_>>());
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.current_bay().toppings.len(), 2);
+}
+
+#[test]
+fn search_narrows_and_highlights() {
+    let mut a = app();
+    let all = a.visible.len();
+    update(&mut a, Action::Search);
+    press(&mut a, &"8in".chars().map(Key::Char).collect::<Vec<_>>());
+    assert!(a.visible.len() < all);
+    assert!(a.rows[a.visible[0].0].label.contains("8in"), "the best match first");
+    let eights = a
+        .rows
+        .iter()
+        .filter(|r| r.label.contains("8in") && (a.show_failing || r.viable))
+        .count();
+    assert!(a.visible.iter().filter(|(i, _)| a.rows[*i].label.contains("8in")).count() == eights);
+    assert!(
+        a.visible.iter().any(|v| !v.1.is_empty()),
+        "matched characters recorded for highlighting"
+    );
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.mode, Mode::Normal);
+    assert_eq!(a.query, "8in");
+    update(&mut a, Action::Search);
+    press(&mut a, &[Key::Esc]);
+    assert!(a.query.is_empty());
+    assert_eq!(a.visible.len(), all);
+}
+
+#[test]
+fn toggles_objective_bays_and_help() {
+    let mut a = app();
+    let o = a.current_bay().objective;
+    update(&mut a, Action::CycleObjective);
+    assert_eq!(a.current_bay().objective, o.next());
+    let n = a.visible.len();
+    update(&mut a, Action::ToggleFailing);
+    assert!(a.visible.len() < n);
+    assert!(a.visible.iter().all(|(i, _)| a.rows[*i].viable));
+    update(&mut a, Action::ToggleFailing);
+    update(&mut a, Action::NextBay);
+    assert_eq!(a.bay, 1);
+    update(&mut a, Action::PrevBay);
+    update(&mut a, Action::PrevBay);
+    assert_eq!(a.bay, a.job.bays.len() - 1);
+    update(&mut a, Action::Help);
+    assert_eq!(a.mode, Mode::Help);
+    press(&mut a, &[Key::Char('z')]);
+    assert_eq!(a.mode, Mode::Normal);
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Chart);
+    assert!(!a.chart.is_empty());
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Detail);
+}
+
+#[test]
+fn marking_and_writing_the_shortlist_asks_before_overwriting() {
+    let mut a = app();
+    update(&mut a, Action::Mark);
+    assert_eq!(a.marked_labels(0).len(), 1);
+    update(&mut a, Action::Mark);
+    assert!(a.marked_labels(0).is_empty());
+    update(&mut a, Action::Mark);
+    update(&mut a, Action::WriteShortlist);
+    assert!(matches!(a.mode, Mode::Prompt(PromptKind::Shortlist, _)));
+    for _ in 0..20 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"out.md".chars().map(Key::Char).collect::<Vec<_>>());
+    let e = press(&mut a, &[Key::Enter]);
+    assert_eq!(
+        e,
+        vec![Effect::WriteShortlist {
+            path: "out.md".into(),
+            format: Format::Markdown,
+            force: false
+        }]
+    );
+    // the shell finds the file exists
+    update(&mut a, Action::AskOverwrite);
+    assert!(matches!(a.mode, Mode::Confirm(Question::Overwrite(_, Format::Markdown))));
+    let e = press(&mut a, &[Key::Char('y')]);
+    assert_eq!(
+        e,
+        vec![Effect::WriteShortlist {
+            path: "out.md".into(),
+            format: Format::Markdown,
+            force: true
+        }]
+    );
+    report(&mut a, Ok("wrote out.md".into()));
+    assert_eq!(a.status.0, "wrote out.md");
+}
+
+#[test]
+fn quitting_with_edits_asks_and_saving_clears() {
+    let mut a = app();
+    assert_eq!(update(&mut a, Action::Quit), Effect::Quit);
+    update(&mut a, Action::SpanUp);
+    assert_eq!(update(&mut a, Action::Quit), Effect::None);
+    assert_eq!(a.mode, Mode::Confirm(Question::Quit));
+    press(&mut a, &[Key::Char('n')]);
+    assert_eq!(a.mode, Mode::Normal);
+    assert_eq!(update(&mut a, Action::Save), Effect::None, "no job path: asks for one");
+    let e = press(&mut a, &[Key::Enter]);
+    assert_eq!(e, vec![Effect::SaveJob { path: "job.toml".into() }]);
+    report(&mut a, Ok("saved job.toml (backup job.toml.bak)".into()));
+    assert!(!a.dirty);
+    a.job_path = Some("j.toml".into());
+    assert_eq!(update(&mut a, Action::Save), Effect::SaveJob { path: "j.toml".into() });
+    update(&mut a, Action::SpanUp);
+    update(&mut a, Action::Quit);
+    assert_eq!(press(&mut a, &[Key::Char('y')]), vec![Effect::Quit]);
+}
+
+#[test]
+fn non_viable_rows_cannot_be_marked() {
+    let mut a = app();
+    a.bay = a.job.bays.len() - 1; // the bay no member satisfies
+    a.rerank();
+    update(&mut a, Action::Mark);
+    assert!(a.status.1 && a.marked.is_empty());
+}
+
+#[test]
+fn screen_80x24_shows_every_pane() {
+    let a = app();
+    let s = screen(&a, 80, 24);
+    for frag in [
+        "plankwise",
+        "Bay criteria",
+        "Candidates",
+        "Detail",
+        "Span",
+        "Objective",
+        "? help",
+        "q quit",
+    ] {
+        assert!(s.contains(frag), "missing '{frag}' in\n{s}");
+    }
+    insta::assert_snapshot!("screen_80x24", s);
+}
+
+#[test]
+fn screen_120x40_uses_the_room() {
+    let mut a = app();
+    update(&mut a, Action::NextBay);
+    let s = screen(&a, 120, 40);
+    assert!(s.contains("governs / first"), "{s}");
+    assert!(s.contains("ACI 318-19"), "clauses shown when wide");
+    insta::assert_snapshot!("screen_120x40", s);
+}
+
+#[test]
+fn monochrome_chart_and_help_render() {
+    let mut a = app();
+    a.mono = true;
+    update(&mut a, Action::ToggleView);
+    let s = screen(&a, 80, 24);
+    assert!(s.contains("Capacity") && s.contains("live psf"));
+    update(&mut a, Action::Help);
+    let s = screen(&a, 80, 24);
+    assert!(s.contains("Keys (any key closes)") && s.contains("span + 1 ft"));
+    // tiny terminals do not panic
+    let _ = screen(&a, 20, 5);
+}

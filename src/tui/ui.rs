@@ -1,0 +1,392 @@
+//! Rendering: reads the [`App`] only (the candidate table's scroll state is
+//! the one thing it touches).
+
+use ratatui::Frame;
+use ratatui::buffer::Buffer;
+use ratatui::layout::{Constraint, Layout, Rect};
+use ratatui::style::Style;
+use ratatui::symbols::Marker;
+use ratatui::text::{Line, Span};
+use ratatui::widgets::{
+    Axis, Block, Borders, Cell, Chart, Clear, Dataset, GraphType, Paragraph, Row as TRow, StatefulWidget, Table, TableState, Widget,
+};
+
+use super::theme::Theme;
+use super::{Action, App, FIELDS, Focus, Mode, PromptKind, Question, Units, View};
+
+/// Draw the whole screen into a frame.
+pub fn draw(frame: &mut Frame, app: &App, table: &mut TableState) {
+    render(app, frame.area(), frame.buffer_mut(), table);
+}
+
+fn theme(app: &App) -> Theme {
+    if app.mono { Theme::mono() } else { Theme::color() }
+}
+
+fn block<'a>(title: String, focused: bool, t: &Theme) -> Block<'a> {
+    Block::default()
+        .borders(Borders::ALL)
+        .border_style(if focused { t.focus } else { t.border })
+        .title(Span::styled(title, if focused { t.focus } else { Style::new() }))
+}
+
+/// Render the screen into a buffer.
+pub fn render(app: &App, area: Rect, buf: &mut Buffer, table: &mut TableState) {
+    let t = theme(app);
+    let avail = area.height.saturating_sub(3);
+    let main_h = (avail * 55 / 100).max(12.min(avail));
+    let [title, main, lower, status, footer] = Layout::vertical([
+        Constraint::Length(1),
+        Constraint::Length(main_h),
+        Constraint::Min(3),
+        Constraint::Length(1),
+        Constraint::Length(1),
+    ])
+    .areas(area);
+    title_bar(app, title, buf, &t);
+    let bay_w = if area.width >= 110 { 30 } else { 27 };
+    let [bay, cands] = Layout::horizontal([Constraint::Length(bay_w), Constraint::Min(20)]).areas(main);
+    bay_pane(app, bay, buf, &t);
+    candidates(app, cands, buf, &t, table);
+    match app.view {
+        View::Detail => detail(app, lower, buf, &t),
+        View::Chart => chart(app, lower, buf, &t),
+    }
+    status_line(app, status, buf, &t);
+    footer_line(app, footer, buf, &t);
+    if app.mode == Mode::Help {
+        help(app, area, buf, &t);
+    }
+}
+
+fn title_bar(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let b = app.current_bay();
+    let text = format!(
+        " plankwise · {} · bay {}/{}: {} · {}{} ",
+        app.job.project,
+        app.bay + 1,
+        app.job.bays.len(),
+        b.name,
+        if app.units == Units::Us { "US" } else { "SI" },
+        if app.dirty { " · edited" } else { "" }
+    );
+    Paragraph::new(text).style(t.title).render(area, buf);
+}
+
+fn bay_pane(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let focused = app.focus == Focus::Bay;
+    let lines: Vec<Line> = FIELDS
+        .iter()
+        .enumerate()
+        .map(|(i, name)| {
+            let value = match (&app.mode, i == app.field) {
+                (Mode::Edit(buf), true) => format!("{buf}▏"),
+                _ => app.field_text(i),
+            };
+            let style = if focused && i == app.field { t.selected } else { Style::new() };
+            Line::from(vec![Span::styled(format!("{name:<11}"), t.muted), Span::styled(value, style)])
+        })
+        .collect();
+    Paragraph::new(lines)
+        .block(block(" Bay criteria ".into(), focused, t))
+        .render(area, buf);
+}
+
+fn bar(ratio: f64, width: usize, mono: bool) -> String {
+    let filled = ((ratio.clamp(0.0, 1.0) * width as f64).round() as usize).min(width);
+    let (f, e) = if mono { ('#', '.') } else { ('█', '░') };
+    let mut s: String = std::iter::repeat_n(f, filled)
+        .chain(std::iter::repeat_n(e, width - filled))
+        .collect();
+    if ratio > 1.0 {
+        s.pop();
+        s.push('!');
+    }
+    s
+}
+
+fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut TableState) {
+    let focused = app.focus == Focus::Candidates;
+    let viable = app.rows.iter().filter(|r| r.viable).count();
+    let mut title = format!(
+        " Candidates {viable} viable of {} · {} ",
+        app.rows.len(),
+        app.current_bay().objective.name()
+    );
+    if app.mode == Mode::Search || !app.query.is_empty() {
+        title.push_str(&format!("· /{}{} ", app.query, if app.mode == Mode::Search { "▏" } else { "" }));
+    }
+    if !app.show_failing {
+        title.push_str("· non-viable hidden ");
+    }
+    let wide = area.width >= 70;
+    let rows: Vec<TRow> = app
+        .visible
+        .iter()
+        .map(|(i, hits)| {
+            let r = &app.rows[*i];
+            let marked = app.marked.contains(&(app.bay, r.label.clone()));
+            let label: Vec<Span> = r
+                .label
+                .chars()
+                .enumerate()
+                .map(|(k, c)| Span::styled(c.to_string(), if hits.contains(&k) { t.matched } else { Style::new() }))
+                .collect();
+            let ratio = if r.viable {
+                r.governing.1
+            } else {
+                r.failure.as_ref().map_or(r.governing.1, |_| r.governing.1.max(1.0))
+            };
+            let style = if r.viable { t.viable } else { t.failing };
+            let mut cells = vec![
+                Cell::from(if marked { "*" } else { " " }),
+                Cell::from(Line::from(label)),
+                Cell::from(format!("{:>5.1}", r.metrics.weight_psf)),
+            ];
+            if wide {
+                cells.push(Cell::from(format!("{:>5.1}", r.metrics.depth_in)));
+            }
+            cells.push(Cell::from(Span::styled(
+                bar(ratio, 8, app.mono),
+                if ratio > 1.0 { t.bar_over } else { t.bar_ok },
+            )));
+            cells.push(Cell::from(format!("{ratio:>5.2}")));
+            if wide {
+                cells.push(Cell::from(if r.viable {
+                    r.governing.0.clone()
+                } else {
+                    format!("✗ {}", r.failure.clone().unwrap_or_default())
+                }));
+            } else {
+                cells.push(Cell::from(if r.viable { "ok" } else { "✗" }));
+            }
+            TRow::new(cells).style(style)
+        })
+        .collect();
+    let mut widths = vec![
+        Constraint::Length(1),
+        Constraint::Min(if wide { 32 } else { 18 }),
+        Constraint::Length(5),
+    ];
+    let mut header = vec!["", "entry", "  psf"];
+    if wide {
+        widths.push(Constraint::Length(5));
+        header.push(" h in");
+    }
+    widths.extend([Constraint::Length(8), Constraint::Length(5)]);
+    header.extend(["capacity", "ratio"]);
+    if wide {
+        widths.push(Constraint::Fill(1));
+        header.push("governs / first failure");
+    } else {
+        widths.push(Constraint::Length(2));
+        header.push("");
+    }
+    let table = Table::new(rows, widths)
+        .header(TRow::new(header).style(t.muted))
+        .row_highlight_style(t.selected)
+        .block(block(title, focused, t));
+    state.select(if app.visible.is_empty() { None } else { Some(app.selected) });
+    StatefulWidget::render(table, area, buf, state);
+    if app.visible.is_empty() {
+        let inner = Rect {
+            x: area.x + 2,
+            y: area.y + 2,
+            width: area.width.saturating_sub(4),
+            height: 1,
+        };
+        Paragraph::new("no candidate matches").style(t.muted).render(inner, buf);
+    }
+}
+
+fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let focused = app.focus == Focus::Detail;
+    let (Some(r), Some(ev)) = (app.selected_row(), app.detail.as_ref()) else {
+        Paragraph::new("no candidate selected")
+            .block(block(" Detail ".into(), focused, t))
+            .render(area, buf);
+        return;
+    };
+    let h = &ev.history;
+    let c = &ev.camber;
+    let wide = area.width >= 110;
+    let mut lines = vec![
+        Line::from(format!(
+            "fse {:.1} ksi · losses {:.1} ksi (ES {:.1} CR {:.1} SH {:.1} RE {:.1}) · class {}",
+            h.fse_psi / 1000.0,
+            h.losses.total_psi / 1000.0,
+            h.losses.es_psi / 1000.0,
+            h.losses.cr_psi / 1000.0,
+            h.losses.sh_psi / 1000.0,
+            h.losses.re_psi / 1000.0,
+            ev.service_class.name()
+        )),
+        Line::from(format!(
+            "camber {:+.2} / {:+.2} / {:+.2} in (release/erection/final) · live {:.2} in · fire {} · {:.1} Hz",
+            c.camber_release_in,
+            c.camber_erection_in,
+            c.camber_final_in,
+            c.defl_live_in,
+            ev.fire
+                .rating_h
+                .map_or("not rated".into(), |x| format!("{} h", crate::checks::fire::fmt_h(x))),
+            ev.frequency_hz
+        ))
+        .style(t.muted),
+    ];
+    // failures first, then the highest ratios: the ones that matter show first
+    let mut checks: Vec<&crate::checks::CheckResult> = ev.checks.iter().collect();
+    checks.sort_by(|a, b| a.pass.cmp(&b.pass).then(b.ratio.total_cmp(&a.ratio)));
+    for ch in checks {
+        let mut spans = vec![
+            Span::styled(
+                format!("{:<5}", if ch.pass { "ok" } else { "FAIL" }),
+                if ch.pass { t.bar_ok } else { t.error },
+            ),
+            Span::raw(format!(
+                "{:<34.34} {:>9.2} / {:>9.2} {:<6} {:>5.2}",
+                ch.title, ch.demand, ch.capacity, ch.unit, ch.ratio
+            )),
+        ];
+        if wide {
+            spans.push(Span::styled(format!("  {}", ch.clause), t.muted));
+        }
+        lines.push(Line::from(spans));
+    }
+    Paragraph::new(lines)
+        .block(block(format!(" Detail: {} ", r.designation), focused, t))
+        .render(area, buf);
+}
+
+fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let focused = app.focus == Focus::Detail;
+    let bay = app.current_bay();
+    let to_load = |psf: f64| if app.units == Units::Us { psf } else { psf * 0.04788026 };
+    let to_span = |ft: f64| if app.units == Units::Us { ft } else { ft * 0.3048 };
+    let data: Vec<Vec<(f64, f64)>> = app
+        .chart
+        .iter()
+        .map(|(_, lims)| {
+            lims.iter()
+                .filter_map(|l| l.live_psf.map(|q| (to_span(l.span_ft), to_load(q.min(500.0)))))
+                .collect()
+        })
+        .collect();
+    let point = vec![(to_span(bay.case.span.get() / 12.0), to_load(bay.case.live.in_unit("psf")))];
+    let colors = [t.focus, t.status, t.muted];
+    let mut sets: Vec<Dataset> = app
+        .chart
+        .iter()
+        .zip(&data)
+        .enumerate()
+        .map(|(i, ((label, _), d))| {
+            Dataset::default()
+                .name(label.clone())
+                .marker(if app.mono { Marker::Dot } else { Marker::Braille })
+                .graph_type(GraphType::Line)
+                .style(colors[i.min(2)])
+                .data(d)
+        })
+        .collect();
+    sets.push(
+        Dataset::default()
+            .name("design point")
+            .marker(Marker::Block)
+            .graph_type(GraphType::Scatter)
+            .style(t.error)
+            .data(&point),
+    );
+    let xs: Vec<f64> = data.iter().flatten().map(|p| p.0).chain([point[0].0]).collect();
+    let ys: Vec<f64> = data.iter().flatten().map(|p| p.1).chain([point[0].1]).collect();
+    let (x0, x1) = (
+        xs.iter().copied().fold(f64::INFINITY, f64::min),
+        xs.iter().copied().fold(f64::NEG_INFINITY, f64::max),
+    );
+    let y1 = ys.iter().copied().fold(0.0, f64::max).max(1.0) * 1.1;
+    let (xu, yu) = if app.units == Units::Us {
+        ("span ft", "live psf")
+    } else {
+        ("span m", "live kPa")
+    };
+    let chart = Chart::new(sets)
+        .block(block(" Capacity: largest live load by span ".into(), focused, t))
+        .x_axis(
+            Axis::default()
+                .title(xu)
+                .bounds([x0, x1.max(x0 + 1e-6)])
+                .labels([format!("{x0:.1}"), format!("{x1:.1}")]),
+        )
+        .y_axis(
+            Axis::default()
+                .title(yu)
+                .bounds([0.0, y1])
+                .labels(["0".to_string(), format!("{y1:.0}")]),
+        );
+    chart.render(area, buf);
+}
+
+fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let (text, style) = match &app.mode {
+        Mode::Prompt(PromptKind::Shortlist, p) => (
+            format!("shortlist file (.txt, .md or .csv): {p}▏  enter to write, esc to cancel"),
+            t.status,
+        ),
+        Mode::Prompt(PromptKind::SaveJob, p) => (format!("save the job as: {p}▏  enter to save, esc to cancel"), t.status),
+        Mode::Edit(_) => (
+            format!(
+                "edit {}: type a value with its unit (e.g. 31 ft 6 in, 9.6 m, 2.4 kPa); enter to apply, esc to cancel",
+                FIELDS[app.field]
+            ),
+            t.status,
+        ),
+        Mode::Confirm(Question::Quit) => ("the job has unsaved edits — quit anyway? y / n".into(), t.error),
+        Mode::Confirm(Question::Overwrite(p, _)) => (format!("'{}' exists — replace it? y / n", p.display()), t.error),
+        _ => (app.status.0.clone(), if app.status.1 { t.error } else { t.status }),
+    };
+    Paragraph::new(text).style(style).render(area, buf);
+}
+
+fn footer_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let items = [
+        (Action::Help, "help"),
+        (Action::SpanUp, "span+"),
+        (Action::SpanDown, "span−"),
+        (Action::LiveUp, "live+"),
+        (Action::LiveDown, "live−"),
+        (Action::Search, "search"),
+        (Action::Mark, "mark"),
+        (Action::WriteShortlist, "shortlist"),
+        (Action::NextBay, "bay"),
+        (Action::ToggleView, "chart"),
+        (Action::Quit, "quit"),
+    ];
+    let text: Vec<String> = items
+        .iter()
+        .filter_map(|(a, n)| app.keymap.key_of(*a).map(|k| format!("{k} {n}")))
+        .collect();
+    Paragraph::new(text.join(" · ")).style(t.muted).render(area, buf);
+}
+
+fn help(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let w = area.width.min(64);
+    let h = area.height.min(app.keymap.bindings.len() as u16 + 4);
+    let r = Rect {
+        x: area.x + (area.width - w) / 2,
+        y: area.y + (area.height - h) / 2,
+        width: w,
+        height: h,
+    };
+    Clear.render(r, buf);
+    let lines: Vec<Line> = app
+        .keymap
+        .bindings
+        .iter()
+        .map(|b| {
+            let keys: Vec<String> = b.keys.iter().map(|k| k.to_string()).collect();
+            Line::from(vec![Span::styled(format!("{:<18}", keys.join(" ")), t.focus), Span::raw(b.help)])
+        })
+        .collect();
+    Paragraph::new(lines)
+        .block(block(" Keys (any key closes) ".into(), true, t))
+        .render(r, buf);
+}

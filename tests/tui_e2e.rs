@@ -1,0 +1,139 @@
+//! The real binary in a pseudo-terminal (tmux): keys typed, screen read.
+//! Skipped where tmux is missing, except under CI (`CI` set), where
+//! `.ci/run` installs it and a missing tmux is a failure.
+
+use std::process::Command;
+use std::thread::sleep;
+use std::time::{Duration, Instant};
+
+fn tmux(args: &[&str]) -> String {
+    let out = Command::new("tmux").args(args).output().expect("tmux runs");
+    String::from_utf8_lossy(&out.stdout).into_owned()
+}
+
+fn have_tmux() -> bool {
+    let ok = Command::new("tmux").arg("-V").output().is_ok_and(|o| o.status.success());
+    if !ok && std::env::var_os("CI").is_some() {
+        panic!("tmux is needed for the terminal tests under CI");
+    }
+    ok
+}
+
+struct Session {
+    name: String,
+    socket: String,
+}
+
+impl Session {
+    fn start(tag: &str, cmd: &str) -> Session {
+        let name = format!("pw-{tag}-{}", std::process::id());
+        let socket = format!("plankwise-test-{}", std::process::id());
+        tmux(&["-L", &socket, "new-session", "-d", "-s", &name, "-x", "100", "-y", "30", cmd]);
+        Session { name, socket }
+    }
+    fn keys(&self, keys: &[&str]) {
+        for k in keys {
+            tmux(&["-L", &self.socket, "send-keys", "-t", &self.name, k]);
+            sleep(Duration::from_millis(60));
+        }
+    }
+    fn screen(&self) -> String {
+        tmux(&["-L", &self.socket, "capture-pane", "-p", "-t", &self.name])
+    }
+    fn wait_for(&self, what: &str) -> String {
+        let start = Instant::now();
+        loop {
+            let s = self.screen();
+            if s.contains(what) {
+                return s;
+            }
+            assert!(
+                start.elapsed() < Duration::from_secs(20),
+                "timed out waiting for '{what}'; screen:\n{s}"
+            );
+            sleep(Duration::from_millis(100));
+        }
+    }
+}
+
+impl Drop for Session {
+    fn drop(&mut self) {
+        tmux(&["-L", &self.socket, "kill-session", "-t", &self.name]);
+    }
+}
+
+fn command(dir: &std::path::Path) -> String {
+    format!(
+        "cd {} && TERM=xterm-256color {}; echo EXITED $?; stty -a | grep -o -- '-icanon' ; sleep 30",
+        dir.display(),
+        env!("CARGO_BIN_EXE_plankwise")
+    )
+}
+
+#[test]
+fn typing_reranks_searches_writes_and_quits_cleanly() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = std::env::temp_dir().join(format!("plankwise-e2e-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    let s = Session::start("ui", &command(&dir));
+    let first = s.wait_for("Candidates 12 viable of 18");
+    assert!(first.contains("plank-6in-4ft / 5x1/2"));
+    // a longer span re-ranks at once
+    s.keys(&["+", "+", "+", "+", "+", "+"]);
+    let after = s.wait_for("30.00 ft");
+    assert!(after.contains("Candidates 10 viable of 18"), "{after}");
+    // the search narrows the list
+    s.keys(&["/", "1", "0", "i", "n"]);
+    let found = s.wait_for("/10in");
+    assert!(!found.contains("plank-8in-4ft / 6x1/2"), "{found}");
+    s.keys(&["Enter", "Escape"]);
+    // mark, write the shortlist to a path typed at the prompt
+    s.keys(&["Space", "w"]);
+    s.wait_for("shortlist file");
+    for _ in 0..13 {
+        s.keys(&["BSpace"]);
+    }
+    s.keys(&["m", "i", "n", "e", ".", "m", "d", "Enter"]);
+    s.wait_for("wrote mine.md");
+    let text = std::fs::read_to_string(dir.join("mine.md")).unwrap();
+    assert!(text.starts_with("# Precast member shortlist"));
+    // quitting with edits asks first, then leaves a sane terminal
+    s.keys(&["q"]);
+    s.wait_for("quit anyway? y / n");
+    s.keys(&["y"]);
+    let end = s.wait_for("EXITED 0");
+    assert!(!end.contains("-icanon"), "the terminal was left in raw mode:\n{end}");
+    std::fs::remove_dir_all(&dir).unwrap();
+}
+
+fn signal_leaves_terminal_sane(sig: &str) {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = std::env::temp_dir();
+    let s = Session::start(&sig.to_lowercase(), &command(&dir));
+    s.wait_for("Candidates");
+    // the pane's shell is the parent of this session's plankwise
+    let shell = tmux(&["-L", &s.socket, "display-message", "-p", "-t", &s.name, "#{pane_pid}"]);
+    let pid = Command::new("pgrep").args(["-P", shell.trim()]).output().unwrap();
+    let pid = String::from_utf8_lossy(&pid.stdout).lines().next().unwrap_or("").trim().to_string();
+    assert!(!pid.is_empty(), "no child of the pane shell {shell}");
+    Command::new("kill").args([&format!("-{sig}"), &pid]).status().unwrap();
+    let end = s.wait_for("EXITED");
+    assert!(!end.contains("-icanon"), "raw mode left after {sig}:\n{end}");
+    assert!(!end.contains("Candidates"), "alternate screen left after {sig}:\n{end}");
+}
+
+#[test]
+fn sigterm_restores_the_terminal() {
+    signal_leaves_terminal_sane("TERM");
+}
+
+#[test]
+fn sighup_restores_the_terminal() {
+    signal_leaves_terminal_sane("HUP");
+}
