@@ -158,3 +158,42 @@ fn a_folder_a_missing_file_and_a_dangling_link_are_refused() {
     }
     fs::remove_dir_all(&dir).unwrap();
 }
+
+#[test]
+fn every_broken_job_is_refused_with_its_message() {
+    let root = Path::new(env!("CARGO_MANIFEST_DIR"));
+    let dir = root.join("tests/bad/job");
+    let mut n = 0;
+    for entry in fs::read_dir(&dir).unwrap() {
+        let path = entry.unwrap().path();
+        if path.extension().and_then(|e| e.to_str()) != Some("toml") {
+            continue;
+        }
+        let text = fs::read_to_string(&path).unwrap();
+        let expect = text.lines().next().and_then(|l| l.strip_prefix("# expect: ")).unwrap();
+        let catalog = text
+            .lines()
+            .find_map(|l| l.strip_prefix("# catalog: "))
+            .unwrap_or("catalog/demo-us.toml");
+        let name = path.file_name().unwrap().to_str().unwrap();
+        let scratch = std::env::temp_dir().join(format!("plankwise-badjob-{}-{name}", std::process::id()));
+        let _ = fs::remove_dir_all(&scratch);
+        fs::create_dir_all(&scratch).unwrap();
+        fs::write(scratch.join(name), &text).unwrap();
+        let before = snapshot(&scratch);
+        let out = Command::new(bin())
+            .args(["rank", root.join(catalog).to_str().unwrap(), "--job", name])
+            .current_dir(&scratch)
+            .output()
+            .unwrap();
+        let stderr = String::from_utf8_lossy(&out.stderr);
+        assert_eq!(out.status.code(), Some(2), "{name}: {stderr}");
+        assert!(stderr.contains(expect), "{name}: expected '{expect}' in:\n{stderr}");
+        assert!(!stderr.contains("panicked"), "{name}");
+        assert!(out.stdout.is_empty(), "{name}: nothing on stdout");
+        assert_eq!(before, snapshot(&scratch), "{name}: files created or changed");
+        fs::remove_dir_all(&scratch).unwrap();
+        n += 1;
+    }
+    assert!(n >= 20, "{n}");
+}

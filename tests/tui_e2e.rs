@@ -63,8 +63,12 @@ impl Drop for Session {
 }
 
 fn command(dir: &std::path::Path) -> String {
+    command_with(dir, "")
+}
+
+fn command_with(dir: &std::path::Path, env: &str) -> String {
     format!(
-        "cd {} && TERM=xterm-256color {}; echo EXITED $?; stty -a | grep -o -- '-icanon' ; sleep 30",
+        "cd {} && TERM=xterm-256color {env} {}; echo EXITED $?; stty -a | grep -o -- '-icanon' ; sleep 30",
         dir.display(),
         env!("CARGO_BIN_EXE_plankwise")
     )
@@ -136,4 +140,22 @@ fn sigterm_restores_the_terminal() {
 #[test]
 fn sighup_restores_the_terminal() {
     signal_leaves_terminal_sane("HUP");
+}
+
+#[test]
+fn a_panic_restores_the_terminal() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let s = Session::start("panic", &command_with(&std::env::temp_dir(), "PLANKWISE_TEST_PANIC_KEY=P"));
+    s.wait_for("Candidates");
+    s.keys(&["P"]);
+    let end = s.wait_for("EXITED 101");
+    assert!(
+        end.contains("test panic requested"),
+        "the panic message is shown on the normal screen:\n{end}"
+    );
+    assert!(!end.contains("-icanon"), "raw mode left after a panic:\n{end}");
+    assert!(!end.contains("Bay criteria"), "alternate screen left after a panic:\n{end}");
 }

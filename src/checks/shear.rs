@@ -125,7 +125,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
 /// Untopped hollow-core deeper than 12.5 in: Vu ≤ 0.5φVcw (§7.6.3.1).
 pub fn run_deep(an: &Analysis) -> Option<CheckResult> {
     let m = &an.member;
-    if m.section.family != Family::HollowCore || m.comp.is_some() || m.bare.depth_in <= 12.5 {
+    if m.section.family != Family::HollowCore || m.comp.is_some() || m.bare.depth_in <= 12.5 * (1.0 + 1e-9) {
         return None;
     }
     let (s, v) = an

@@ -101,6 +101,9 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
             app.status = (format!("{} ({})", p, f.display()), true);
         }
     }
+    // a test hook: this key panics inside the loop, to prove the terminal
+    // is restored on a panic (tests/tui_e2e.rs)
+    let panic_key = std::env::var("PLANKWISE_TEST_PANIC_KEY").ok().and_then(|k| k.chars().next());
     let mut terminal = ratatui::init();
     let mut table = TableState::default();
     let result = (|| -> io::Result<()> {
@@ -121,6 +124,9 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
                 continue;
             }
             let Some(key) = key_of(k) else { continue };
+            if panic_key.is_some_and(|p| key == Key::Char(p)) {
+                panic!("test panic requested with PLANKWISE_TEST_PANIC_KEY");
+            }
             let Some(action) = app.action_for(key) else { continue };
             match update(&mut app, action) {
                 Effect::None => {}

@@ -1,0 +1,113 @@
+//! Benchmarks with their targets (medians on the project's 2-core machine):
+//! evaluate one candidate ≤ 5 µs; rank 10 000 candidates ≤ 16 ms; envelope
+//! of 1 000 candidates × 100 spans ≤ 200 ms; load and validate a 10 000-entry
+//! catalog ≤ 100 ms; key press to drawn frame ≤ 16 ms (demo) and ≤ 50 ms
+//! (10 000 entries). Run: `cargo bench`. Results are recorded in DEVELOPERS.md.
+
+use plankwise::catalog::{Catalog, DEMO_US};
+use plankwise::checks::{Candidate, evaluate};
+use plankwise::job::{DEMO_JOB, Job};
+use plankwise::select::{Entry, case_for, rank_bay, topping_mix};
+use plankwise::tui::{Action, App, update};
+
+#[path = "../tests/support/synthetic.rs"]
+mod synthetic;
+
+fn main() {
+    divan::main();
+}
+
+fn demo() -> (Catalog, Job) {
+    (
+        Catalog::from_str(DEMO_US, "demo-us.toml").unwrap(),
+        Job::from_str(DEMO_JOB, "demo-job.toml").unwrap(),
+    )
+}
+
+#[divan::bench]
+fn evaluate_one_candidate(b: divan::Bencher) {
+    let (cat, job) = demo();
+    let s = cat.section("plank-8in-4ft").unwrap();
+    let cand = Candidate {
+        section: s,
+        pattern: &s.patterns[1],
+        mix: s.mix(&cat),
+    };
+    let case = case_for(&job.bays[0], None, &topping_mix(&cat, &job.bays[0]));
+    b.bench(|| evaluate(divan::black_box(&cand), divan::black_box(&case)));
+}
+
+#[divan::bench]
+fn rank_demo_bay(b: divan::Bencher) {
+    let (cat, job) = demo();
+    b.bench(|| rank_bay(&cat, divan::black_box(&job.bays[1]), None));
+}
+
+#[divan::bench(sample_count = 10)]
+fn rank_10000_candidates(b: divan::Bencher) {
+    let cat = Catalog::from_str(&synthetic::catalog(2000, 5), "synthetic.toml").unwrap();
+    assert_eq!(cat.entry_count(), 10_000);
+    let (_, job) = demo();
+    b.bench(|| rank_bay(&cat, divan::black_box(&job.bays[0]), None));
+}
+
+#[divan::bench(sample_count = 3)]
+fn envelope_1000_candidates_by_100_spans(b: divan::Bencher) {
+    let cat = Catalog::from_str(&synthetic::catalog(200, 5), "synthetic.toml").unwrap();
+    let (_, job) = demo();
+    let bay = &job.bays[0];
+    let spans: Vec<f64> = (0..100).map(|k| 12.0 + 0.3 * k as f64).collect();
+    b.bench(|| {
+        let mut n = 0;
+        for s in &cat.sections {
+            for p in &s.patterns {
+                let e = Entry {
+                    section: s,
+                    pattern: p,
+                    mix: s.mix(&cat),
+                    topping: None,
+                };
+                n += plankwise::select::envelope::bay_envelope(&cat, bay, &e, &spans).len();
+            }
+        }
+        n
+    });
+}
+
+#[divan::bench(sample_count = 10)]
+fn load_10000_entry_catalog(b: divan::Bencher) {
+    let text = synthetic::catalog(2000, 5);
+    b.bench(|| Catalog::from_str(divan::black_box(&text), "synthetic.toml").unwrap());
+}
+
+fn key_to_frame(
+    app: &mut App,
+    term: &mut ratatui::Terminal<ratatui::backend::TestBackend>,
+    state: &mut ratatui::widgets::TableState,
+    up: &mut bool,
+) {
+    update(app, if *up { Action::SpanUp } else { Action::SpanDown });
+    *up = !*up;
+    term.draw(|f| plankwise::tui::ui::draw(f, app, state)).unwrap();
+}
+
+#[divan::bench]
+fn key_to_frame_demo(b: divan::Bencher) {
+    let (cat, job) = demo();
+    let mut app = App::new(cat, job, None);
+    let mut term = ratatui::Terminal::new(ratatui::backend::TestBackend::new(120, 40)).unwrap();
+    let mut state = ratatui::widgets::TableState::default();
+    let mut up = true;
+    b.bench_local(|| key_to_frame(&mut app, &mut term, &mut state, &mut up));
+}
+
+#[divan::bench(sample_count = 5)]
+fn key_to_frame_10000(b: divan::Bencher) {
+    let cat = Catalog::from_str(&synthetic::catalog(2000, 5), "synthetic.toml").unwrap();
+    let (_, job) = demo();
+    let mut app = App::new(cat, job, None);
+    let mut term = ratatui::Terminal::new(ratatui::backend::TestBackend::new(120, 40)).unwrap();
+    let mut state = ratatui::widgets::TableState::default();
+    let mut up = true;
+    b.bench_local(|| key_to_frame(&mut app, &mut term, &mut state, &mut up));
+}

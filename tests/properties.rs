@@ -1,0 +1,227 @@
+//! Invariants as property tests (proptest), and a bounded fuzz of the
+//! loaders and of the evaluation. The case counts are small so `cargo test`
+//! stays quick; `PROPTEST_CASES=100000 cargo test --release --test properties`
+//! runs them longer (see DEVELOPERS.md for recorded runs).
+
+use plankwise::case::{DesignCase, ServiceClass, Topping};
+use plankwise::catalog::{Catalog, DEMO_US};
+use plankwise::checks::{Candidate, evaluate};
+use plankwise::job::{DEMO_JOB, Job};
+use plankwise::units::{AreaLoad, Length};
+use proptest::prelude::*;
+
+fn demo() -> Catalog {
+    Catalog::from_str(DEMO_US, "demo-us.toml").unwrap()
+}
+
+fn all_finite(ev: &plankwise::checks::Evaluation) -> Result<(), String> {
+    for c in &ev.checks {
+        for (what, v) in [("demand", c.demand), ("capacity", c.capacity), ("ratio", c.ratio)] {
+            if !v.is_finite() {
+                return Err(format!("{} {what} = {v}", c.id));
+            }
+        }
+    }
+    for s in &ev.stations {
+        let vals = [
+            s.mu_lbin,
+            s.vu_lbf,
+            s.flexure.phi_mn_lbin,
+            s.flexure.mcr_lbin,
+            s.release_psi.0,
+            s.release_psi.1,
+            s.service.bottom_total_psi,
+            s.service.top_total_psi,
+        ];
+        if vals.iter().any(|v| !v.is_finite()) || s.shear.is_some_and(|v| !v.phi_vc_lbf.is_finite()) {
+            return Err(format!("station {} not finite", s.x_in));
+        }
+    }
+    let c = &ev.camber;
+    for v in [
+        c.camber_release_in,
+        c.camber_erection_in,
+        c.camber_final_in,
+        c.defl_live_in,
+        c.defl_after_attach_in,
+        ev.frequency_hz,
+        ev.history.fse_psi,
+    ] {
+        if !v.is_finite() {
+            return Err("camber or prestress not finite".into());
+        }
+    }
+    Ok(())
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 48, .. ProptestConfig::default() })]
+
+    /// No NaN or infinity reaches any output, for any entry and any case
+    /// inside the validated ranges.
+    #[test]
+    fn no_nan_or_infinity_anywhere(
+        entry in 0usize..33,
+        span in 6.0f64..90.0,
+        sdl in 0.0f64..150.0,
+        live in 0.0f64..400.0,
+        snow in 0.0f64..80.0,
+        topped in any::<bool>(),
+        class in 0usize..3,
+        fire in proptest::option::of(0usize..5),
+        line in proptest::option::of((0.0f64..3.0, 0.0f64..1.0)),
+    ) {
+        let cat = demo();
+        let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
+        let mut k = DesignCase::new(Length::from_unit(span, "ft"));
+        k.sdl = AreaLoad::from_unit(sdl, "psf");
+        k.live = AreaLoad::from_unit(live, "psf");
+        k.snow = AreaLoad::from_unit(snow, "psf");
+        k.class_allowed = [ServiceClass::U, ServiceClass::T, ServiceClass::C][class];
+        k.fire_rating = fire.map(|i| plankwise::fire::RATINGS[i]);
+        if topped {
+            k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() });
+        }
+        if let Some((w, at)) = line {
+            k.line_loads.push(plankwise::case::LineLoadSpec {
+                w: plankwise::units::LineLoad::from_unit(w, "klf"),
+                at: Length::from_unit(span * at, "ft"),
+                kind: plankwise::case::LoadKind::Dead,
+            });
+        }
+        let ev = evaluate(&Candidate { section: s, pattern: p, mix: s.mix(&cat) }, &k);
+        prop_assert!(all_finite(&ev).is_ok(), "{:?}", all_finite(&ev));
+        let json = plankwise::report::check::to_json(&Candidate { section: s, pattern: p, mix: s.mix(&cat) }, &k, &ev);
+        let text = serde_json::to_string(&json).unwrap();
+        prop_assert!(!text.contains("null,\"ratio\"") && !text.contains("NaN"));
+    }
+
+    /// The loaders never panic on a damaged catalog or job: every result is
+    /// a catalog or a list of located problems.
+    #[test]
+    fn damaged_files_never_panic(
+        cut in 0usize..12000,
+        len in 0usize..40,
+        junk in "[ -~\\n\\[\\]\"=]{0,12}",
+        which in 0usize..2,
+    ) {
+        let base = if which == 0 { DEMO_US } else { DEMO_JOB };
+        let mut text: String = base.chars().collect();
+        let n = text.chars().count();
+        let at = cut % n;
+        let start = text.char_indices().nth(at).map_or(text.len(), |(i, _)| i);
+        let end = text.char_indices().nth((at + len).min(n)).map_or(text.len(), |(i, _)| i);
+        text.replace_range(start..end, &junk);
+        let lines = text.lines().count() + 1;
+        let problems = if which == 0 {
+            Catalog::from_str(&text, "f.toml").err().map(|p| p.0)
+        } else {
+            Job::from_str(&text, "f.toml").err().map(|p| p.0)
+        };
+        if let Some(ps) = problems {
+            prop_assert!(!ps.is_empty());
+            for p in ps {
+                prop_assert!(p.line <= lines, "line {} beyond the file", p.line);
+                prop_assert!(!p.message.is_empty());
+            }
+        }
+    }
+}
+
+/// The same member entered in US customary and in SI units gives the same
+/// results, to a relative 1e-9.
+#[test]
+fn us_and_si_entries_agree() {
+    let mm = |inch: f64| format!("{:.12} mm", inch * 25.4);
+    let mpa = |psi: f64| format!("{:.12} MPa", psi * 0.006_894_757_293_168_361);
+    let us = r#"[catalog]
+name = "us"
+[[mix]]
+id = "m"
+fc = "6000 psi"
+fci = "4000 psi"
+unit_weight = "150 pcf"
+aggregate = "carbonate"
+[[section]]
+id = "s"
+mix = "m"
+[section.hollow_core]
+width = "48 in"
+depth = "10 in"
+cores = { shape = "stadium", count = 6, width = "5.75 in", height = "7 in", spacing = "7.5 in" }
+[[section.pattern]]
+id = "p"
+strand = "1/2 in"
+row = [{ count = 7, height = "1.75 in" }]
+"#;
+    let si = format!(
+        r#"[catalog]
+name = "si"
+[[mix]]
+id = "m"
+fc = "{}"
+fci = "{}"
+unit_weight = "{:.12} kg/m3"
+aggregate = "carbonate"
+[[section]]
+id = "s"
+mix = "m"
+[section.hollow_core]
+width = "{}"
+depth = "{}"
+cores = {{ shape = "stadium", count = 6, width = "{}", height = "{}", spacing = "{}" }}
+[[section.pattern]]
+id = "p"
+strand = "12.7 mm"
+row = [{{ count = 7, height = "{}" }}]
+"#,
+        mpa(6000.0),
+        mpa(4000.0),
+        150.0 * 0.453_592_37 / 0.3048f64.powi(3),
+        mm(48.0),
+        mm(10.0),
+        mm(5.75),
+        mm(7.0),
+        mm(7.5),
+        mm(1.75)
+    );
+    let a = Catalog::from_str(us, "us.toml").unwrap();
+    let b = Catalog::from_str(&si, "si.toml").unwrap();
+    let case_us = {
+        let mut k = DesignCase::new(Length::parse("30 ft").unwrap());
+        k.sdl = AreaLoad::parse("15 psf").unwrap();
+        k.live = AreaLoad::parse("80 psf").unwrap();
+        k
+    };
+    let case_si = {
+        let mut k = DesignCase::new(Length::parse(&format!("{:.12} m", 30.0 * 0.3048)).unwrap());
+        k.sdl = AreaLoad::parse(&format!("{:.12} kPa", 15.0 * 0.047_880_258_980_335_84)).unwrap();
+        k.live = AreaLoad::parse(&format!("{:.12} kPa", 80.0 * 0.047_880_258_980_335_84)).unwrap();
+        k.bearing = Length::parse(&format!("{:.12} mm", 4.0 * 25.4)).unwrap();
+        k
+    };
+    let ea = evaluate(
+        &Candidate {
+            section: &a.sections[0],
+            pattern: &a.sections[0].patterns[0],
+            mix: &a.mixes[0],
+        },
+        &case_us,
+    );
+    let eb = evaluate(
+        &Candidate {
+            section: &b.sections[0],
+            pattern: &b.sections[0].patterns[0],
+            mix: &b.mixes[0],
+        },
+        &case_si,
+    );
+    assert_eq!(ea.checks.len(), eb.checks.len());
+    for (x, y) in ea.checks.iter().zip(&eb.checks) {
+        assert_eq!(x.id, y.id);
+        for (u, v) in [(x.demand, y.demand), (x.capacity, y.capacity), (x.ratio, y.ratio)] {
+            assert!((u - v).abs() <= 1e-9 * u.abs().max(v.abs()) + 1e-12, "{}: {u} vs {v}", x.id);
+        }
+    }
+    assert!((ea.camber.camber_final_in - eb.camber.camber_final_in).abs() <= 1e-9 * ea.camber.camber_final_in.abs());
+}
