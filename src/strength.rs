@@ -20,6 +20,29 @@ pub struct Concrete<'a> {
     pub topping: Option<(f64, f64, f64)>,
     /// β1 of the concrete at the compression face.
     pub beta1: f64,
+    /// Depth below the precast top over which the precast section is a
+    /// plain rectangle of this width: (width, depth); (0, 0) when not. A
+    /// shortcut for the common stress block inside the top flange.
+    pub top_band: (f64, f64),
+}
+
+/// The rectangle at the top of a precast geometry, if its top flange is one:
+/// (width, depth), found by sampling the chord over the flange.
+pub fn top_band(g: &Geometry) -> (f64, f64) {
+    let (h, tf) = (g.depth, g.top_flange);
+    if tf <= 0.0 {
+        return (0.0, 0.0);
+    }
+    let voids_top = g.voids.iter().map(|v| v.y_range().1).fold(f64::NEG_INFINITY, f64::max);
+    if voids_top > h - tf + 1e-9 {
+        return (0.0, 0.0);
+    }
+    let b = g.outline.chord(h - 1e-9);
+    let same = (0..=16).all(|k| {
+        let y = h - tf + tf * k as f64 / 16.0;
+        (g.outline.chord(y.min(h - 1e-9)) - b).abs() <= 1e-9 * b
+    });
+    if same { (b, tf) } else { (0.0, 0.0) }
 }
 
 /// How a steel layer responds to strain.
@@ -100,7 +123,12 @@ impl Concrete<'_> {
             moment += f * at / 2.0;
             into_precast = a - t;
         }
-        if into_precast > 0.0 {
+        if into_precast > 0.0 && into_precast <= self.top_band.1 {
+            // inside a rectangular top flange: no clipping needed
+            let f = 0.85 * self.fc * self.top_band.0 * into_precast;
+            force += f;
+            moment += f * (self.depth() - h + into_precast / 2.0);
+        } else if into_precast > 0.0 {
             let m = self.geometry.moments_between(h - into_precast, h);
             if m.area > 0.0 {
                 let f = 0.85 * self.fc * m.area;
@@ -249,6 +277,7 @@ mod tests {
             fc: 5000.0,
             topping: None,
             beta1: 0.80,
+            top_band: (0.0, 0.0),
         };
         let fps = fps_approx(0.918, 270_000.0, 243_000.0, 48.0, 6.75, 5000.0, 0.80);
         assert_relative_eq!(fps, 255_540.0, max_relative = 1e-4);
@@ -267,6 +296,7 @@ mod tests {
             fc: 5000.0,
             topping: None,
             beta1: 0.80,
+            top_band: (0.0, 0.0),
         };
         let s = builtin_strand("1/2 in").unwrap();
         let ec = 57_000.0 * 5000f64.sqrt();
@@ -306,6 +336,7 @@ mod tests {
             fc: 5000.0,
             topping: Some((2.0, 48.0, 4000.0)),
             beta1: 0.85,
+            top_band: top_band(&g),
         };
         let (f, y) = conc.compression(1.0);
         assert_relative_eq!(f, 0.85 * 4000.0 * 48.0);

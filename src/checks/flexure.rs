@@ -74,6 +74,7 @@ fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
         fc: m.mix.fc.get(),
         topping,
         beta1: b1,
+        top_band: crate::strength::top_band(&m.section.geometry),
     }
 }
 
@@ -168,10 +169,36 @@ pub fn mcr(m: &Member, d: f64) -> f64 {
     }
 }
 
+/// Strain-compatibility results already found for a given set of steel
+/// layers: stations in the developed region of straight strand share them.
+#[derive(Debug, Default)]
+pub struct Memo {
+    entries: Vec<(Vec<[u64; 3]>, crate::strength::Flexure)>,
+}
+
+fn key(layers: &[SteelLayer]) -> Vec<[u64; 3]> {
+    layers
+        .iter()
+        .map(|l| match l.steel {
+            Steel::Strand { prestrain, cap, .. } => [l.depth.to_bits(), prestrain.to_bits(), cap.to_bits()],
+            Steel::Bar { fy, .. } => [l.depth.to_bits(), fy.to_bits(), 0],
+        })
+        .collect()
+}
+
 /// Flexure at distance `d` from the nearer end.
-pub fn at(m: &Member, d: f64, full: &[f64]) -> AtStation {
+pub fn at(m: &Member, d: f64, full: &[f64], memo: &mut Memo) -> AtStation {
     let conc = concrete(m);
-    let f = strain_compatibility(&conc, &layers(m, d, Some(full)));
+    let ls = layers(m, d, Some(full));
+    let k = key(&ls);
+    let f = match memo.entries.iter().find(|(x, _)| *x == k) {
+        Some((_, f)) => f.clone(),
+        None => {
+            let f = strain_compatibility(&conc, &ls);
+            memo.entries.push((k, f.clone()));
+            f
+        }
+    };
     let (phi_dev, developed) = phi_development(m, d, full);
     let phi = f.phi.min(phi_dev);
     AtStation {
