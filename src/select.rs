@@ -218,8 +218,11 @@ pub fn compare(o: Objective, a: &Ranked, b: &Ranked) -> Ordering {
 /// Evaluate one entry for a bay.
 pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> {
     let case = case_for(bay, e.topping, &topping_mix(cat, bay));
-    let eval = evaluate(&e.candidate(), &case);
+    let mut eval = evaluate(&e.candidate(), &case);
     let metrics = metrics(&e, &case, &eval);
+    // a ranking keeps the checks, not the station-by-station state: that is
+    // most of an evaluation's memory, and the detail view re-evaluates
+    eval.stations = Vec::new();
     Ranked { entry: e, eval, metrics }
 }
 

@@ -10,6 +10,20 @@ use plankwise::job::{DEMO_JOB, Job};
 use plankwise::units::{AreaLoad, Length};
 use proptest::prelude::*;
 
+/// The fuzz seeds: (is a job, text).
+fn seeds() -> Vec<(bool, String)> {
+    let mut v = vec![(false, DEMO_US.to_string()), (true, DEMO_JOB.to_string())];
+    let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("tests/bad");
+    for (dir, job) in [("catalog", false), ("job", true)] {
+        let mut files: Vec<_> = std::fs::read_dir(root.join(dir)).unwrap().map(|e| e.unwrap().path()).collect();
+        files.sort();
+        for f in files.into_iter().filter(|f| f.extension().is_some_and(|e| e == "toml")) {
+            v.push((job, std::fs::read_to_string(f).unwrap()));
+        }
+    }
+    v
+}
+
 fn demo() -> Catalog {
     Catalog::from_str(DEMO_US, "demo-us.toml").unwrap()
 }
@@ -97,15 +111,19 @@ proptest! {
     }
 
     /// The loaders never panic on a damaged catalog or job: every result is
-    /// a catalog or a list of located problems.
+    /// a catalog or a list of located problems. Seeds: the demo files and
+    /// every file of the broken-input corpus.
     #[test]
     fn damaged_files_never_panic(
         cut in 0usize..12000,
         len in 0usize..40,
         junk in "[ -~\\n\\[\\]\"=]{0,12}",
-        which in 0usize..2,
+        pick in 0usize..1000,
     ) {
-        let base = if which == 0 { DEMO_US } else { DEMO_JOB };
+        let seeds = seeds();
+        let (is_job, base) = &seeds[pick % seeds.len()];
+        let which = if *is_job { 1 } else { 0 };
+        let base = base.as_str();
         let mut text: String = base.chars().collect();
         let n = text.chars().count();
         let at = cut % n;
