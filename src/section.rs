@@ -174,7 +174,7 @@ impl Geometry {
             return (self.width_at(self.depth / 2.0), self.depth / 2.0);
         }
         // coarse scan, then golden refinement around the best sample
-        let n = 400;
+        let n = 160;
         let mut best = (f64::INFINITY, lo);
         for k in 0..=n {
             let y = lo + (hi - lo) * (k as f64 + 0.5) / (n as f64 + 1.0);

@@ -229,7 +229,7 @@ impl HollowCore {
             if i != 0 && i + 1 != g.voids.len() {
                 continue;
             }
-            let pts = s.boundary_points(180);
+            let pts = s.boundary_points(96);
             let inside = pts.iter().all(|&(x, y)| g.outline.contains(x, y));
             let clear = pts
                 .iter()
@@ -384,7 +384,7 @@ impl Generic {
             ));
         }
         for (i, v) in g.voids.iter().enumerate() {
-            let pts = v.boundary_points(180);
+            let pts = v.boundary_points(96);
             if !pts
                 .iter()
                 .all(|&(x, y)| g.outline.contains(x, y) && g.outline.distance_to_edge(x, y) > 1e-9)
@@ -393,7 +393,7 @@ impl Generic {
             }
             for (j, w) in g.voids.iter().enumerate().skip(i + 1) {
                 if pts.iter().any(|&(x, y)| w.signed_distance(x, y) < 0.0)
-                    || w.boundary_points(180).iter().any(|&(x, y)| v.signed_distance(x, y) < 0.0)
+                    || w.boundary_points(96).iter().any(|&(x, y)| v.signed_distance(x, y) < 0.0)
                 {
                     out.push(format!("voids {} and {} overlap", i + 1, j + 1));
                 }

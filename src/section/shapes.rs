@@ -154,16 +154,20 @@ impl Polygon {
     }
 
     /// Total width of the polygon cut by the horizontal line at `y`, in.
+    /// For a simple polygon the inside runs from each downward crossing to
+    /// the next upward one (counter-clockwise order), so the width is the sum
+    /// of upward crossings less the downward ones — no sorting needed.
     pub fn chord(&self, y: f64) -> f64 {
-        let mut xs: Vec<f64> = Vec::new();
+        let sign = if self.signed_area() < 0.0 { -1.0 } else { 1.0 };
+        let mut w = 0.0;
         for ((x0, y0), (x1, y1)) in self.edges() {
             // half-open rule so shared vertices count once
             if (y0 <= y && y < y1) || (y1 <= y && y < y0) {
-                xs.push(x0 + (y - y0) * (x1 - x0) / (y1 - y0));
+                let x = x0 + (y - y0) * (x1 - x0) / (y1 - y0);
+                w += if y1 > y0 { x } else { -x };
             }
         }
-        xs.sort_by(f64::total_cmp);
-        xs.chunks(2).map(|p| if p.len() == 2 { p[1] - p[0] } else { 0.0 }).sum()
+        (sign * w).max(0.0)
     }
 
     /// Whether (x, y) lies inside (even-odd rule).
@@ -349,20 +353,27 @@ impl Polygon {
 }
 
 impl Shape {
-    /// Horizontal bands that make up the shape (curved shapes only).
-    fn pieces(&self) -> Vec<Piece> {
+    /// Horizontal bands that make up the shape (curved shapes only), in a
+    /// fixed array (no allocation on this hot path) with the count used.
+    fn pieces(&self) -> ([Piece; 5], usize) {
+        let none = Piece::Rect { b: 0.0, y0: 0.0, y1: 0.0 };
+        let pad = |v: &[Piece]| {
+            let mut a = [none; 5];
+            a[..v.len()].copy_from_slice(v);
+            (a, v.len())
+        };
         match *self {
-            Shape::Polygon(_) => Vec::new(),
-            Shape::Circle { cy, r, .. } => vec![Piece::Circle {
+            Shape::Polygon(_) => pad(&[]),
+            Shape::Circle { cy, r, .. } => pad(&[Piece::Circle {
                 r,
                 yc: cy,
                 lo: cy - r,
                 hi: cy + r,
-            }],
+            }]),
             Shape::Stadium { cy, w, h, .. } => {
                 if h >= w {
                     let (r, s) = (w / 2.0, (h - w) / 2.0);
-                    vec![
+                    pad(&[
                         Piece::Rect {
                             b: w,
                             y0: cy - s,
@@ -380,10 +391,10 @@ impl Shape {
                             lo: cy - s - r,
                             hi: cy - s,
                         },
-                    ]
+                    ])
                 } else {
                     let r = h / 2.0;
-                    vec![
+                    pad(&[
                         Piece::Rect {
                             b: w - h,
                             y0: cy - r,
@@ -395,12 +406,12 @@ impl Shape {
                             lo: cy - r,
                             hi: cy + r,
                         },
-                    ]
+                    ])
                 }
             }
             Shape::RoundedRect { cy, w, h, r, .. } => {
                 let s = h / 2.0 - r;
-                vec![
+                pad(&[
                     Piece::Rect {
                         b: w,
                         y0: cy - s,
@@ -428,7 +439,7 @@ impl Shape {
                         lo: cy - s - r,
                         hi: cy - s,
                     },
-                ]
+                ])
             }
         }
     }
@@ -437,7 +448,10 @@ impl Shape {
     pub fn moments_between(&self, lo: f64, hi: f64) -> Moments {
         match self {
             Shape::Polygon(p) => p.moments_between(lo, hi),
-            _ => self.pieces().iter().fold(Moments::default(), |m, p| m.plus(p.between(lo, hi))),
+            _ => {
+                let (p, n) = self.pieces();
+                p[..n].iter().fold(Moments::default(), |m, p| m.plus(p.between(lo, hi)))
+            }
         }
     }
 
@@ -463,7 +477,10 @@ impl Shape {
     pub fn chord(&self, y: f64) -> f64 {
         match self {
             Shape::Polygon(p) => p.chord(y),
-            _ => self.pieces().iter().map(|p| p.chord(y)).sum(),
+            _ => {
+                let (p, n) = self.pieces();
+                p[..n].iter().map(|p| p.chord(y)).sum()
+            }
         }
     }
 
@@ -528,6 +545,12 @@ impl Shape {
                     })
                     .collect()
             }
+            Shape::Circle { cx, cy, r } => (0..n)
+                .map(|k| {
+                    let t = 2.0 * PI * k as f64 / n as f64;
+                    (cx + r * t.cos(), cy + r * t.sin())
+                })
+                .collect(),
             _ => {
                 // march around by angle and project onto the boundary by the
                 // signed distance along the ray from the centre
@@ -541,7 +564,7 @@ impl Shape {
                         let (dx, dy) = (t.cos(), t.sin());
                         // bisection on the ray for the zero of the signed distance
                         let (mut lo, mut hi) = (0.0, reach);
-                        for _ in 0..60 {
+                        for _ in 0..44 {
                             let mid = (lo + hi) / 2.0;
                             if self.signed_distance(cx + mid * dx, cy + mid * dy) < 0.0 {
                                 lo = mid;
