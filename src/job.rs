@@ -4,10 +4,9 @@
 
 use serde::Deserialize;
 use toml::Spanned;
-use toml::de::DeTable;
 
 use crate::case::{Attachment, DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Use};
-use crate::catalog::diag::{Reporter, suggestion};
+use crate::catalog::diag::suggestion;
 use crate::catalog::validate::{Ctx, de, join, span, tables};
 use crate::catalog::{Problems, content_hash, raw::S};
 use crate::fire::Exposure;
@@ -479,16 +478,7 @@ impl Job {
 
     /// Validate job text; `file` names it in messages.
     pub fn from_str(text: &str, file: &str) -> Result<Job, Problems> {
-        let mut cx = Ctx {
-            rep: Reporter::new(file, text),
-        };
-        let (root, errors) = DeTable::parse_recoverable(text);
-        if !errors.is_empty() {
-            for e in &errors {
-                cx.rep.error(e.span(), "", format!("TOML syntax: {}", e.message()));
-            }
-            return Err(Problems(cx.rep.finish()));
-        }
+        let (mut cx, root) = crate::catalog::validate::parse(text, file)?;
         let root_span = root.span();
         let root = root.into_inner();
         let mut meta = None;

@@ -324,11 +324,23 @@ fn camber_by_hand_for_the_eight_inch_plank() {
     assert_relative_eq!(ev.check("defl_live").unwrap().capacity, 300.0 / 360.0, max_relative = 1e-12);
     let mut k2 = k.clone();
     k2.attachment = plankwise::case::Attachment::Sensitive;
-    assert_relative_eq!(evaluate(&c, &k2).check("defl_after_attach").unwrap().capacity, 300.0 / 480.0, max_relative = 1e-12);
+    assert_relative_eq!(
+        evaluate(&c, &k2).check("defl_after_attach").unwrap().capacity,
+        300.0 / 480.0,
+        max_relative = 1e-12
+    );
     k2.attachment = plankwise::case::Attachment::Tolerant;
-    assert_relative_eq!(evaluate(&c, &k2).check("defl_after_attach").unwrap().capacity, 300.0 / 240.0, max_relative = 1e-12);
+    assert_relative_eq!(
+        evaluate(&c, &k2).check("defl_after_attach").unwrap().capacity,
+        300.0 / 240.0,
+        max_relative = 1e-12
+    );
     k2.member_use = plankwise::case::Use::Roof;
-    assert_relative_eq!(evaluate(&c, &k2).check("defl_live").unwrap().capacity, 300.0 / 180.0, max_relative = 1e-12);
+    assert_relative_eq!(
+        evaluate(&c, &k2).check("defl_live").unwrap().capacity,
+        300.0 / 180.0,
+        max_relative = 1e-12
+    );
 }
 
 #[test]

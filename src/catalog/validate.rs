@@ -312,8 +312,9 @@ pub(crate) fn tables<'v, 'a>(rep: &mut Reporter, v: &'v Spanned<DeValue<'a>>, ke
     }
 }
 
-/// Validate catalog text.
-pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
+/// Parse TOML text into its spanned tree and a context for its problems;
+/// every syntax error at once when it does not parse.
+pub(crate) fn parse<'t>(text: &'t str, file: &str) -> Result<(Ctx<'t>, Spanned<DeTable<'t>>), Problems> {
     let mut cx = Ctx {
         rep: Reporter::new(file, text),
     };
@@ -324,6 +325,12 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         }
         return Err(Problems(cx.rep.finish()));
     }
+    Ok((cx, root))
+}
+
+/// Validate catalog text.
+pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
+    let (mut cx, root) = parse(text, file)?;
     let root_span = root.span();
     let root = root.into_inner();
 
