@@ -368,8 +368,12 @@ fn footer_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
 }
 
 fn help(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
-    let w = area.width.min(64);
-    let h = area.height.min(app.keymap.bindings.len() as u16 + 4);
+    let n = app.keymap.bindings.len() as u16;
+    // one column when it fits, two side by side on short terminals
+    let cols: u16 = if n + 2 <= area.height { 1 } else { 2 };
+    let w = area.width.min(if cols == 1 { 64 } else { 80 });
+    let rows = n.div_ceil(cols);
+    let h = area.height.min(rows + 2);
     let r = Rect {
         x: area.x + (area.width - w) / 2,
         y: area.y + (area.height - h) / 2,
@@ -377,13 +381,25 @@ fn help(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         height: h,
     };
     Clear.render(r, buf);
-    let lines: Vec<Line> = app
-        .keymap
-        .bindings
-        .iter()
-        .map(|b| {
-            let keys: Vec<String> = b.keys.iter().map(|k| k.to_string()).collect();
-            Line::from(vec![Span::styled(format!("{:<18}", keys.join(" ")), t.focus), Span::raw(b.help)])
+    let cell = |b: &super::keymap::Binding, width: usize| -> Vec<Span<'static>> {
+        let keys: Vec<String> = b.keys.iter().map(|k| k.to_string()).collect();
+        let k = format!("{:<14}", keys.join(" "));
+        let text: String = b.help.chars().take(width.saturating_sub(15)).collect();
+        vec![
+            Span::styled(k, t.focus),
+            Span::raw(format!("{text:<w$}", w = width.saturating_sub(14))),
+        ]
+    };
+    let colw = ((w - 2) / cols) as usize;
+    let lines: Vec<Line> = (0..rows as usize)
+        .map(|i| {
+            let mut spans = Vec::new();
+            for c in 0..cols as usize {
+                if let Some(b) = app.keymap.bindings.get(c * rows as usize + i) {
+                    spans.extend(cell(b, colw));
+                }
+            }
+            Line::from(spans)
         })
         .collect();
     Paragraph::new(lines)
