@@ -343,7 +343,7 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
     let member = Member::new(cand.section, cand.pattern, cand.mix, case);
     let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
     let full = flexure::full_development(&member);
-    let mut memo = flexure::Memo::default();
+    let mut memo = flexure::Memo::new(&member);
     let stations = stations(&member, x_shear)
         .into_iter()
         .map(|x| {

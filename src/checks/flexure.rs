@@ -170,10 +170,22 @@ pub fn mcr(m: &Member, d: f64) -> f64 {
 }
 
 /// Strain-compatibility results already found for a given set of steel
-/// layers: stations in the developed region of straight strand share them.
-#[derive(Debug, Default)]
-pub struct Memo {
+/// layers — stations in the developed region of straight strand share them —
+/// and the member's concrete, built once.
+#[derive(Debug)]
+pub struct Memo<'m> {
     entries: Vec<(Vec<[u64; 3]>, crate::strength::Flexure)>,
+    conc: Concrete<'m>,
+}
+
+impl<'m> Memo<'m> {
+    /// An empty memo for a member.
+    pub fn new(m: &'m Member) -> Memo<'m> {
+        Memo {
+            entries: Vec::new(),
+            conc: concrete(m),
+        }
+    }
 }
 
 fn key(layers: &[SteelLayer]) -> Vec<[u64; 3]> {
@@ -188,13 +200,12 @@ fn key(layers: &[SteelLayer]) -> Vec<[u64; 3]> {
 
 /// Flexure at distance `d` from the nearer end.
 pub fn at(m: &Member, d: f64, full: &[f64], memo: &mut Memo) -> AtStation {
-    let conc = concrete(m);
     let ls = layers(m, d, Some(full));
     let k = key(&ls);
     let f = match memo.entries.iter().find(|(x, _)| *x == k) {
         Some((_, f)) => f.clone(),
         None => {
-            let f = strain_compatibility(&conc, &ls);
+            let f = strain_compatibility(&memo.conc, &ls);
             memo.entries.push((k, f.clone()));
             f
         }
