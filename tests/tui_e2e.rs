@@ -159,3 +159,33 @@ fn a_panic_restores_the_terminal() {
     assert!(!end.contains("-icanon"), "raw mode left after a panic:\n{end}");
     assert!(!end.contains("Bay criteria"), "alternate screen left after a panic:\n{end}");
 }
+
+/// Regression: a UI whose terminal vanished (the tmux pane closed, like a
+/// dropped SSH link) kept spinning on the dead descriptor instead of leaving.
+#[test]
+fn a_vanished_terminal_ends_the_ui() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let s = Session::start("gone", &command(&std::env::temp_dir()));
+    s.wait_for("Candidates");
+    let shell = tmux(&["-L", &s.socket, "display-message", "-p", "-t", &s.name, "#{pane_pid}"]);
+    let pid = Command::new("pgrep").args(["-P", shell.trim()]).output().unwrap();
+    let pid = String::from_utf8_lossy(&pid.stdout).lines().next().unwrap_or("").trim().to_string();
+    assert!(!pid.is_empty());
+    tmux(&["-L", &s.socket, "kill-session", "-t", &s.name]);
+    let start = Instant::now();
+    while std::path::Path::new(&format!("/proc/{pid}")).exists() {
+        if let Ok(st) = std::fs::read_to_string(format!("/proc/{pid}/stat")) {
+            if st.split_whitespace().nth(2) == Some("Z") {
+                break;
+            }
+        }
+        if start.elapsed() > Duration::from_secs(5) {
+            let _ = Command::new("kill").args(["-9", &pid]).status();
+            panic!("plankwise {pid} still running 5 s after its terminal closed");
+        }
+        sleep(Duration::from_millis(100));
+    }
+}

@@ -86,6 +86,12 @@ fn save_job(app: &App, path: &Path) -> Result<String, String> {
     Ok(format!("saved {}{backup}", path.display()))
 }
 
+/// Whether the terminal has gone away under us (its device deleted, as when a
+/// tmux pane or an SSH session closes without a SIGHUP reaching us).
+fn terminal_gone() -> bool {
+    std::fs::read_link("/proc/self/fd/0").is_ok_and(|p| p.to_string_lossy().ends_with(" (deleted)"))
+}
+
 /// Run the UI until the user quits or a signal arrives; returns the exit code.
 pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<i32> {
     let stop = Arc::new(AtomicBool::new(false));
@@ -104,6 +110,17 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
     // a test hook: this key panics inside the loop, to prove the terminal
     // is restored on a panic (tests/tui_e2e.rs)
     let panic_key = std::env::var("PLANKWISE_TEST_PANIC_KEY").ok().and_then(|k| k.chars().next());
+    // crossterm's reader loops for ever on a terminal that has gone away
+    // (end of file on the tty), so a watchdog ends the process then: there
+    // is no terminal left to restore
+    std::thread::spawn(|| {
+        loop {
+            std::thread::sleep(Duration::from_millis(300));
+            if terminal_gone() {
+                std::process::exit(0);
+            }
+        }
+    });
     let mut terminal = ratatui::init();
     let mut table = TableState::default();
     let result = (|| -> io::Result<()> {
