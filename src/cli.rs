@@ -215,7 +215,7 @@ fn demo(catalog: Option<&PathBuf>) -> Result<i32, Failure> {
     writeln!(out)?;
     writeln!(
         out,
-        "Try: plankwise sections catalog/demo-si.toml   ·   plankwise validate FILE   ·   plankwise --help"
+        "In a terminal plankwise opens its UI here. Try: plankwise rank --job demo   ·   plankwise shortlist --job demo -o list.txt   ·   plankwise --help"
     )?;
     Ok(OK)
 }
