@@ -226,13 +226,31 @@ pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> 
     Ranked { entry: e, eval, metrics }
 }
 
+/// Evaluate entries on every core (scoped threads; evaluation is pure), in
+/// their original order.
+fn evaluate_all<'c>(cat: &Catalog, bay: &Bay, list: Vec<Entry<'c>>) -> Vec<Ranked<'c>> {
+    let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
+    if threads < 2 || list.len() < 64 {
+        return list.into_iter().map(|e| evaluate_entry(cat, bay, e)).collect();
+    }
+    let chunk = list.len().div_ceil(threads);
+    std::thread::scope(|s| {
+        let handles: Vec<_> = list
+            .chunks(chunk)
+            .map(|part| s.spawn(move || part.iter().map(|&e| evaluate_entry(cat, bay, e)).collect::<Vec<_>>()))
+            .collect();
+        handles
+            .into_iter()
+            .flat_map(|h| h.join().expect("an evaluation thread panicked"))
+            .collect()
+    })
+}
+
 /// Rank every entry for a bay with its own objective (or `objective`).
 pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -> BayRanking<'c> {
     let o = objective.unwrap_or(bay.objective);
-    let (mut viable, mut failing): (Vec<Ranked>, Vec<Ranked>) = entries(cat, bay)
-        .into_iter()
-        .map(|e| evaluate_entry(cat, bay, e))
-        .partition(|r| r.eval.viable);
+    let (mut viable, mut failing): (Vec<Ranked>, Vec<Ranked>) =
+        evaluate_all(cat, bay, entries(cat, bay)).into_iter().partition(|r| r.eval.viable);
     viable.sort_by(|a, b| compare(o, a, b));
     failing.sort_by(|a, b| {
         let (fa, fb) = (a.eval.first_failure(), b.eval.first_failure());
