@@ -9,10 +9,9 @@ use serde::Serialize;
 use plankwise::catalog::diag::suggestion;
 use plankwise::catalog::{Catalog, DEMO_US, Problems, SectionSummary, Severity};
 use plankwise::checks::{Candidate, evaluate};
-use plankwise::material::{Aggregate, Mix, Modulus};
 use plankwise::report;
 use plankwise::section::Composite;
-use plankwise::units::{Length, Stress, UnitWeight};
+use plankwise::units::Length;
 
 /// Preliminary selection of precast prestressed floor and roof members.
 #[derive(Debug, Parser)]
@@ -258,18 +257,6 @@ struct CompositeJson {
     depth_in: f64,
 }
 
-fn default_topping() -> Mix {
-    // Common practice, no source: cast-in-place topping of 4000 psi normalweight concrete.
-    Mix {
-        id: "topping (default)".into(),
-        fc: Stress::new(4000.0),
-        fci: Stress::new(4000.0),
-        unit_weight: UnitWeight::from_unit(150.0, "pcf"),
-        aggregate: Aggregate::Carbonate,
-        modulus: Modulus::UnitWeight,
-    }
-}
-
 fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mix: Option<&str>) -> Result<i32, Failure> {
     let (cat, _) = load(file.as_ref())?;
     print_warnings(&cat);
@@ -281,7 +268,7 @@ fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mi
                 return Err(Failure::Message(format!("--topping: '{t}' must be more than 0 and at most 12 in")));
             }
             let mix = match topping_mix {
-                None => default_topping(),
+                None => plankwise::select::default_topping_mix(),
                 Some(id) => cat.mixes.iter().find(|m| m.id == id).cloned().ok_or_else(|| {
                     let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
                     Failure::Message(format!("--topping-mix: no mix '{id}' in the catalog; it has: {}", ids.join(", ")))

@@ -155,6 +155,15 @@ impl Ctx<'_> {
         }
     }
 
+    /// The designation, or the id when none is given.
+    pub(crate) fn designation(&mut self, d: &Option<S>, id: &str, path: &str) -> String {
+        if d.is_some() {
+            self.text(d, path, "designation")
+        } else {
+            id.to_string()
+        }
+    }
+
     pub(crate) fn id(&mut self, s: &S, path: &str) -> String {
         let id = s.get_ref();
         if id.trim().is_empty() {
@@ -552,11 +561,7 @@ fn section(
 ) -> Option<Section> {
     let r = s.get_ref();
     let id = cx.id(&r.id, path);
-    let designation = if r.designation.is_some() {
-        cx.text(&r.designation, path, "designation")
-    } else {
-        id.clone()
-    };
+    let designation = cx.designation(&r.designation, &id, path);
     let remarks = cx.text(&r.remarks, path, "remarks");
     let mix = refs.mixes.iter().position(|m| &m.id == r.mix.get_ref());
     if mix.is_none() && !refs.broken_mixes.contains(r.mix.get_ref()) {

@@ -113,11 +113,7 @@ pub(super) fn pattern(
 ) -> Option<Pattern> {
     let r = p.get_ref();
     let id = cx.id(&r.id, path);
-    let designation = if r.designation.is_some() {
-        cx.text(&r.designation, path, "designation")
-    } else {
-        id.clone()
-    };
+    let designation = cx.designation(&r.designation, &id, path);
     let remarks = cx.text(&r.remarks, path, "remarks");
     let strand = builtin_strand(r.strand.get_ref()).or_else(|| refs.strands.iter().find(|s| &s.id == r.strand.get_ref()).cloned());
     if strand.is_none() && !refs.broken_strands.contains(r.strand.get_ref()) {
