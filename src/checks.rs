@@ -342,7 +342,6 @@ fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
 pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
     let member = Member::new(cand.section, cand.pattern, cand.mix, case);
     let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
-    let full = flexure::full_development(&member);
     let mut memo = flexure::Memo::new(&member);
     let stations = stations(&member, x_shear)
         .into_iter()
@@ -350,7 +349,7 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
             let d = member.end_distance(x);
             let eff = member.effects(x);
             let (mu, mu_combo, vu, vu_combo) = factored(&eff);
-            let flex = flexure::at(&member, d, &full, &mut memo);
+            let flex = flexure::at(&member, d, &mut memo);
             let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(&member, d, &eff, mu, vu));
             Station {
                 x_in: x,

@@ -118,6 +118,9 @@ pub struct Properties {
     pub web_width_min_in: f64,
     /// Height at which that least width occurs, in.
     pub web_width_min_at_in: f64,
+    /// The plain rectangle at the top, (width, depth) in, or (0, 0): see
+    /// [`Geometry::top_band`].
+    pub top_band: (f64, f64),
 }
 
 impl Geometry {
@@ -199,6 +202,26 @@ impl Geometry {
         (b, if self.width_at(y) <= best.0 { y } else { best.1 })
     }
 
+    /// The rectangle at the top of a precast geometry, if its top flange is one:
+    /// (width, depth), found by sampling the chord over the flange.
+    pub fn top_band(&self) -> (f64, f64) {
+        let g = self;
+        let (h, tf) = (g.depth, g.top_flange);
+        if tf <= 0.0 {
+            return (0.0, 0.0);
+        }
+        let voids_top = g.voids.iter().map(|v| v.y_range().1).fold(f64::NEG_INFINITY, f64::max);
+        if voids_top > h - tf + 1e-9 {
+            return (0.0, 0.0);
+        }
+        let b = g.outline.chord(h - 1e-9);
+        let same = (0..=16).all(|k| {
+            let y = h - tf + tf * k as f64 / 16.0;
+            (g.outline.chord(y.min(h - 1e-9)) - b).abs() <= 1e-9 * b
+        });
+        if same { (b, tf) } else { (0.0, 0.0) }
+    }
+
     /// Exact properties of the net section.
     pub fn properties(&self) -> Properties {
         let m = self.moments();
@@ -225,6 +248,7 @@ impl Geometry {
             bottom_flange_in: self.bottom_flange,
             web_width_min_in: bw,
             web_width_min_at_in: bw_at,
+            top_band: self.top_band(),
         }
     }
 

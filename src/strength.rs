@@ -26,25 +26,6 @@ pub struct Concrete<'a> {
     pub top_band: (f64, f64),
 }
 
-/// The rectangle at the top of a precast geometry, if its top flange is one:
-/// (width, depth), found by sampling the chord over the flange.
-pub fn top_band(g: &Geometry) -> (f64, f64) {
-    let (h, tf) = (g.depth, g.top_flange);
-    if tf <= 0.0 {
-        return (0.0, 0.0);
-    }
-    let voids_top = g.voids.iter().map(|v| v.y_range().1).fold(f64::NEG_INFINITY, f64::max);
-    if voids_top > h - tf + 1e-9 {
-        return (0.0, 0.0);
-    }
-    let b = g.outline.chord(h - 1e-9);
-    let same = (0..=16).all(|k| {
-        let y = h - tf + tf * k as f64 / 16.0;
-        (g.outline.chord(y.min(h - 1e-9)) - b).abs() <= 1e-9 * b
-    });
-    if same { (b, tf) } else { (0.0, 0.0) }
-}
-
 /// How a steel layer responds to strain.
 #[derive(Debug, Clone, Copy)]
 pub enum Steel<'a> {
@@ -149,9 +130,124 @@ fn steel_stress(layer: &SteelLayer, c: f64) -> f64 {
     }
 }
 
+impl Concrete<'_> {
+    /// The stress-block depth a whose compression force is `t` (lbf), in:
+    /// closed form inside the topping and the rectangular top band, else the
+    /// Illinois variant of regula falsi on the monotone force (the overall
+    /// depth when `t` exceeds the whole section).
+    pub fn block_depth(&self, t: f64) -> f64 {
+        if t <= 0.0 {
+            return 0.0;
+        }
+        let mut into = 0.0;
+        let mut rest = t;
+        if let Some((th, b, fc)) = self.topping {
+            let full = 0.85 * fc * b * th;
+            if rest <= full {
+                return rest / (0.85 * fc * b);
+            }
+            rest -= full;
+            into = th;
+        }
+        let (bb, db) = self.top_band;
+        if bb > 0.0 && rest <= 0.85 * self.fc * bb * db {
+            return into + rest / (0.85 * self.fc * bb);
+        }
+        let h = self.depth();
+        let f = |a: f64| self.compression(a).0 - t;
+        let (mut lo, mut hi) = (into + if bb > 0.0 { db } else { 0.0 }, h);
+        let (mut flo, mut fhi) = (f(lo), f(hi));
+        if fhi <= 0.0 {
+            return h;
+        }
+        let mut side = 0i8;
+        let mut a = hi;
+        for _ in 0..100 {
+            a = (lo * fhi - hi * flo) / (fhi - flo);
+            let r = f(a);
+            if r.abs() <= 1e-12 * t || (hi - lo) < 1e-12 * h {
+                break;
+            }
+            if r < 0.0 {
+                lo = a;
+                flo = r;
+                if side == 1 {
+                    fhi /= 2.0;
+                }
+                side = 1;
+            } else {
+                hi = a;
+                fhi = r;
+                if side == -1 {
+                    flo /= 2.0;
+                }
+                side = -1;
+            }
+        }
+        a
+    }
+}
+
+/// The strain-compatibility answer when every strand is held at its cap
+/// (strand not yet developed, §25.4.8.3) and every bar yields: the tension
+/// is then known, the block follows from it directly, and the answer is
+/// exact if the strains at that neutral axis do put each layer at or past
+/// its cap. None when they do not (the full iteration is needed).
+fn capped(conc: &Concrete, layers: &[SteelLayer]) -> Option<Flexure> {
+    let t: f64 = layers
+        .iter()
+        .map(|l| {
+            l.area
+                * match l.steel {
+                    Steel::Strand { cap, .. } => cap,
+                    Steel::Bar { fy, .. } => fy,
+                }
+        })
+        .sum();
+    if t <= 0.0 {
+        return None;
+    }
+    let h = conc.depth();
+    let a = conc.block_depth(t);
+    let c = a / conc.beta1;
+    if !(c > 0.0 && c < h) {
+        return None;
+    }
+    let at_cap = layers.iter().all(|l| {
+        let eps = 0.003 * (l.depth - c) / c;
+        match l.steel {
+            Steel::Strand { kind, prestrain, cap } => kind.stress(prestrain + eps) >= cap,
+            Steel::Bar { fy, es } => es * eps >= fy,
+        }
+    });
+    at_cap.then(|| finish(conc, layers, c, true))
+}
+
+/// The flexural answer at neutral-axis depth `c`.
+fn finish(conc: &Concrete, layers: &[SteelLayer], c: f64, converged: bool) -> Flexure {
+    let stresses: Vec<f64> = layers.iter().map(|l| steel_stress(l, c)).collect();
+    let (cf, cy) = conc.compression(conc.beta1 * c);
+    let mn = layers.iter().zip(&stresses).map(|(l, f)| l.area * f * l.depth).sum::<f64>() - cf * cy;
+    let dt = layers.iter().map(|l| l.depth).fold(0.0, f64::max);
+    let eps_t = 0.003 * (dt - c) / c;
+    Flexure {
+        c,
+        a: conc.beta1 * c,
+        mn,
+        eps_t,
+        phi: phi_flexure(eps_t),
+        stresses,
+        converged,
+    }
+}
+
 /// Strain compatibility: find c where steel tension equals concrete
-/// compression, by the Illinois variant of regula falsi on c.
+/// compression — directly when every layer sits at its cap, else by the
+/// Illinois variant of regula falsi on c.
 pub fn strain_compatibility(conc: &Concrete, layers: &[SteelLayer]) -> Flexure {
+    if let Some(f) = capped(conc, layers) {
+        return f;
+    }
     let h = conc.depth();
     let residual = |c: f64| {
         let t: f64 = layers.iter().map(|l| l.area * steel_stress(l, c)).sum();
@@ -189,20 +285,7 @@ pub fn strain_compatibility(conc: &Concrete, layers: &[SteelLayer]) -> Flexure {
         c = lo;
         converged = false;
     }
-    let stresses: Vec<f64> = layers.iter().map(|l| steel_stress(l, c)).collect();
-    let (cf, cy) = conc.compression(conc.beta1 * c);
-    let mn = layers.iter().zip(&stresses).map(|(l, f)| l.area * f * l.depth).sum::<f64>() - cf * cy;
-    let dt = layers.iter().map(|l| l.depth).fold(0.0, f64::max);
-    let eps_t = 0.003 * (dt - c) / c;
-    Flexure {
-        c,
-        a: conc.beta1 * c,
-        mn,
-        eps_t,
-        phi: phi_flexure(eps_t),
-        stresses,
-        converged,
-    }
+    finish(conc, layers, c, converged)
 }
 
 /// γp of ACI 318-19 Table 20.3.2.3.1 by fpy/fpu: 0.28 (≥ 0.90), 0.40
@@ -229,16 +312,7 @@ pub fn fps_approx(aps: f64, fpu: f64, fpy: f64, b: f64, dp: f64, fc: f64, beta1:
 /// block found over the real section (so flanges and cores are exact).
 pub fn mn_fixed_stress(conc: &Concrete, aps: f64, fps: f64, dp: f64) -> (f64, f64) {
     let t = aps * fps;
-    let (mut lo, mut hi) = (0.0, conc.depth());
-    for _ in 0..80 {
-        let mid = (lo + hi) / 2.0;
-        if conc.compression(mid).0 < t {
-            lo = mid;
-        } else {
-            hi = mid;
-        }
-    }
-    let a = (lo + hi) / 2.0;
+    let a = conc.block_depth(t);
     let (cf, cy) = conc.compression(a);
     (t * dp - cf * cy, a)
 }
@@ -336,7 +410,7 @@ mod tests {
             fc: 5000.0,
             topping: Some((2.0, 48.0, 4000.0)),
             beta1: 0.85,
-            top_band: top_band(&g),
+            top_band: g.top_band(),
         };
         let (f, y) = conc.compression(1.0);
         assert_relative_eq!(f, 0.85 * 4000.0 * 48.0);

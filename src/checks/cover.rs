@@ -30,8 +30,8 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     for l in &m.layers {
         for &x in &l.x {
             for y in [l.y_mid, l.y_end] {
-                let (bottom, side, _) = g.covers(x, y, db);
-                least = least.min(bottom);
+                // clear cover to the soffit
+                least = least.min(y - db / 2.0);
                 if m.section.family == Family::DoubleTee {
                     // the stem's own faces: half the stem width at that height less the offset
                     let n = g.stems.len().max(1) as f64;
@@ -42,7 +42,6 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
                         .fold(f64::NEG_INFINITY, f64::max);
                     least = least.min(stem_side);
                 }
-                let _ = side;
             }
         }
     }

@@ -50,18 +50,6 @@ pub struct AtStation {
     pub mcr_lbin: f64,
 }
 
-/// Per-layer strand stress with full development at midspan, psi.
-pub fn full_development(m: &Member) -> Vec<f64> {
-    let mid = m.lm / 2.0;
-    let layers = layers(m, mid, None);
-    let conc = concrete(m);
-    strain_compatibility(&conc, &layers)
-        .stresses
-        .into_iter()
-        .take(m.layers.len())
-        .collect()
-}
-
 fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
     let topping = m
         .case
@@ -74,7 +62,7 @@ fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
         fc: m.mix.fc.get(),
         topping,
         beta1: b1,
-        top_band: crate::strength::top_band(&m.section.geometry),
+        top_band: m.bare.top_band,
     }
 }
 
@@ -171,19 +159,35 @@ pub fn mcr(m: &Member, d: f64) -> f64 {
 
 /// Strain-compatibility results already found for a given set of steel
 /// layers — stations in the developed region of straight strand share them —
-/// and the member's concrete, built once.
+/// the member's concrete, built once, and the per-layer strand stress with
+/// full development at midspan (psi), which sets ℓd.
 #[derive(Debug)]
 pub struct Memo<'m> {
     entries: Vec<(Vec<[u64; 3]>, crate::strength::Flexure)>,
     conc: Concrete<'m>,
+    /// Per-layer strand stress with full development at midspan, psi.
+    pub full: Vec<f64>,
 }
 
 impl<'m> Memo<'m> {
-    /// An empty memo for a member.
+    /// The memo of a member, holding its midspan answer.
     pub fn new(m: &'m Member) -> Memo<'m> {
+        let conc = concrete(m);
+        let ls = layers(m, m.lm / 2.0, None);
+        let f = strain_compatibility(&conc, &ls);
+        let full: Vec<f64> = f.stresses.iter().copied().take(m.layers.len()).collect();
+        // the same answer holds with each strand capped at its own stress,
+        // which is how the developed stations see it
+        let mut capped = ls;
+        for (l, &fi) in capped.iter_mut().zip(&full) {
+            if let Steel::Strand { cap, .. } = &mut l.steel {
+                *cap = fi;
+            }
+        }
         Memo {
-            entries: Vec::new(),
-            conc: concrete(m),
+            full,
+            entries: vec![(key(&capped), f)],
+            conc,
         }
     }
 }
@@ -199,8 +203,8 @@ fn key(layers: &[SteelLayer]) -> Vec<[u64; 3]> {
 }
 
 /// Flexure at distance `d` from the nearer end.
-pub fn at(m: &Member, d: f64, full: &[f64], memo: &mut Memo) -> AtStation {
-    let ls = layers(m, d, Some(full));
+pub fn at(m: &Member, d: f64, memo: &mut Memo) -> AtStation {
+    let ls = layers(m, d, Some(&memo.full));
     let k = key(&ls);
     let f = match memo.entries.iter().find(|(x, _)| *x == k) {
         Some((_, f)) => f.clone(),
@@ -210,7 +214,7 @@ pub fn at(m: &Member, d: f64, full: &[f64], memo: &mut Memo) -> AtStation {
             f
         }
     };
-    let (phi_dev, developed) = phi_development(m, d, full);
+    let (phi_dev, developed) = phi_development(m, d, &memo.full);
     let phi = f.phi.min(phi_dev);
     AtStation {
         mn_lbin: f.mn,

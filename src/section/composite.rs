@@ -109,6 +109,7 @@ mod tests {
             bottom_flange_in: 8.0,
             web_width_min_in: 48.0,
             web_width_min_at_in: 4.0,
+            top_band: (48.0, 8.0),
         };
         let c = Composite::new(&p, 2.0, 48.0, 0.8);
         let at = 76.8;
