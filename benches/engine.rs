@@ -5,7 +5,7 @@
 //! (10 000 entries). Run: `cargo bench`. Results are recorded in DEVELOPERS.md.
 
 use plankwise::catalog::{Catalog, DEMO_US};
-use plankwise::checks::{Candidate, evaluate};
+use plankwise::checks::{Candidate, evaluate, evaluate_brief};
 use plankwise::job::{DEMO_JOB, Job};
 use plankwise::select::{Entry, case_for, rank_bay, topping_mix};
 use plankwise::tui::{Action, App, update};
@@ -35,6 +35,19 @@ fn evaluate_one_candidate(b: divan::Bencher) {
     };
     let case = case_for(&job.bays[0], None, &topping_mix(&cat, &job.bays[0]));
     b.bench(|| evaluate(divan::black_box(&cand), divan::black_box(&case)));
+}
+
+#[divan::bench]
+fn evaluate_one_candidate_brief(b: divan::Bencher) {
+    let (cat, job) = demo();
+    let s = cat.section("plank-8in-4ft").unwrap();
+    let cand = Candidate {
+        section: s,
+        pattern: &s.patterns[1],
+        mix: s.mix(&cat),
+    };
+    let case = case_for(&job.bays[0], None, &topping_mix(&cat, &job.bays[0]));
+    b.bench(|| evaluate_brief(divan::black_box(&cand), divan::black_box(&case)));
 }
 
 #[divan::bench]

@@ -253,6 +253,15 @@ pub struct Analysis<'a> {
     pub fire: fire::Fire,
     /// Natural frequency, Hz.
     pub frequency_hz: f64,
+    /// Whether the checks skip their notes (ranking needs only the numbers).
+    pub brief: bool,
+}
+
+impl Analysis<'_> {
+    /// A check's note, or nothing in a brief evaluation.
+    pub fn note(&self, text: std::fmt::Arguments) -> String {
+        if self.brief { String::new() } else { text.to_string() }
+    }
 }
 
 /// The full evaluation of one candidate.
@@ -383,12 +392,29 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
         camber,
         fire,
         frequency_hz,
+        brief: false,
     }
 }
 
 /// Evaluate every check for one candidate under one case.
 pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    let an = analyse(cand, case);
+    finish(analyse(cand, case))
+}
+
+/// The same numbers as [`evaluate`] without the checks' notes and the
+/// stations: what ranking and the envelope need, in less time and memory.
+pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
+    let mut an = analyse(cand, case);
+    an.brief = true;
+    let mut ev = finish(an);
+    ev.stations = Vec::new();
+    for c in &mut ev.checks {
+        c.note = String::new();
+    }
+    ev
+}
+
+fn finish(an: Analysis) -> Evaluation {
     let checks: Vec<CheckResult> = REGISTRY.iter().filter_map(|c| (c.run)(&an)).collect();
     // jacking and spacing are properties of the pattern, not of the bay:
     // they pass or fail, but do not govern

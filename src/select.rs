@@ -10,7 +10,7 @@ use serde::Serialize;
 
 use crate::case::{DesignCase, Topping};
 use crate::catalog::{Catalog, Pattern, Section};
-use crate::checks::{Candidate, Evaluation, evaluate};
+use crate::checks::{Candidate, Evaluation, evaluate_brief};
 use crate::job::{Bay, Objective};
 use crate::material::{Aggregate, Mix, Modulus};
 use crate::units::{Length, Stress, UnitWeight};
@@ -218,11 +218,10 @@ pub fn compare(o: Objective, a: &Ranked, b: &Ranked) -> Ordering {
 /// Evaluate one entry for a bay.
 pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> {
     let case = case_for(bay, e.topping, &topping_mix(cat, bay));
-    let mut eval = evaluate(&e.candidate(), &case);
+    // a ranking keeps the checks' numbers, not their notes nor the
+    // station-by-station state: the detail view re-evaluates
+    let eval = evaluate_brief(&e.candidate(), &case);
     let metrics = metrics(&e, &case, &eval);
-    // a ranking keeps the checks, not the station-by-station state: that is
-    // most of an evaluation's memory, and the detail view re-evaluates
-    eval.stations = Vec::new();
     Ranked { entry: e, eval, metrics }
 }
 

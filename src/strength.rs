@@ -220,12 +220,20 @@ fn capped(conc: &Concrete, layers: &[SteelLayer]) -> Option<Flexure> {
             Steel::Bar { fy, es } => es * eps >= fy,
         }
     });
-    at_cap.then(|| finish(conc, layers, c, true))
+    let caps = || {
+        layers
+            .iter()
+            .map(|l| match l.steel {
+                Steel::Strand { cap, .. } => cap,
+                Steel::Bar { fy, .. } => fy,
+            })
+            .collect()
+    };
+    at_cap.then(|| finish(conc, layers, c, true, caps()))
 }
 
-/// The flexural answer at neutral-axis depth `c`.
-fn finish(conc: &Concrete, layers: &[SteelLayer], c: f64, converged: bool) -> Flexure {
-    let stresses: Vec<f64> = layers.iter().map(|l| steel_stress(l, c)).collect();
+/// The flexural answer at neutral-axis depth `c` with the layers' stresses there.
+fn finish(conc: &Concrete, layers: &[SteelLayer], c: f64, converged: bool, stresses: Vec<f64>) -> Flexure {
     let (cf, cy) = conc.compression(conc.beta1 * c);
     let mn = layers.iter().zip(&stresses).map(|(l, f)| l.area * f * l.depth).sum::<f64>() - cf * cy;
     let dt = layers.iter().map(|l| l.depth).fold(0.0, f64::max);
@@ -285,7 +293,8 @@ pub fn strain_compatibility(conc: &Concrete, layers: &[SteelLayer]) -> Flexure {
         c = lo;
         converged = false;
     }
-    finish(conc, layers, c, converged)
+    let stresses = layers.iter().map(|l| steel_stress(l, c)).collect();
+    finish(conc, layers, c, converged, stresses)
 }
 
 /// γp of ACI 318-19 Table 20.3.2.3.1 by fpy/fpu: 0.28 (≥ 0.90), 0.40

@@ -52,10 +52,18 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     };
     let need = fire.map_or(dur, |f| f.max(dur));
     let why = match fire {
-        Some(f) if f > dur => format!("fire {f:.3} in governs over durability {dur:.3} in"),
-        _ => format!("durability {dur:.3} in ({:?} exposure)", m.case.exposure).to_lowercase(),
+        Some(f) if f > dur => an.note(format_args!("fire {f:.3} in governs over durability {dur:.3} in")),
+        _ => an
+            .note(format_args!("durability {dur:.3} in ({:?} exposure)", m.case.exposure))
+            .to_lowercase(),
     };
-    let mut r = CheckResult::new(&INFO, need, least, None, format!("least clear cover {least:.2} in; {why}"));
+    let mut r = CheckResult::new(
+        &INFO,
+        need,
+        least,
+        None,
+        an.note(format_args!("least clear cover {least:.2} in; {why}")),
+    );
     // the check passes when the least cover is at least the required one
     r.ratio = if least > 0.0 {
         (need / least).min(super::RATIO_NONE)

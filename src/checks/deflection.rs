@@ -43,14 +43,14 @@ pub fn run_live(an: &Analysis) -> Option<CheckResult> {
         c.defl_live_in,
         m.l / div,
         Some(m.l / 2.0),
-        format!(
+        an.note(format_args!(
             "{what}: l/{div:.0}{}",
             if c.cracked {
                 "; class T/C: bilinear cracked stiffness"
             } else {
                 "; gross section (class U)"
             }
-        ),
+        )),
     ))
 }
 
@@ -68,10 +68,10 @@ pub fn run_after(an: &Analysis) -> Option<CheckResult> {
         c.defl_after_attach_in,
         m.l / div,
         Some(m.l / 2.0),
-        format!(
+        an.note(format_args!(
             "l/{div:.0}; long-term change after erection {:.2} in + live {:.2} in",
             (c.camber_erection_in - c.camber_final_in).max(0.0),
             c.defl_live_in
-        ),
+        )),
     ))
 }

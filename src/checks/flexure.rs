@@ -163,7 +163,7 @@ pub fn mcr(m: &Member, d: f64) -> f64 {
 /// full development at midspan (psi), which sets ℓd.
 #[derive(Debug)]
 pub struct Memo<'m> {
-    entries: Vec<(Vec<[u64; 3]>, crate::strength::Flexure)>,
+    entries: Vec<(Vec<SteelLayer<'m>>, crate::strength::Flexure)>,
     conc: Concrete<'m>,
     /// Per-layer strand stress with full development at midspan, psi.
     pub full: Vec<f64>,
@@ -186,34 +186,40 @@ impl<'m> Memo<'m> {
         }
         Memo {
             full,
-            entries: vec![(key(&capped), f)],
+            entries: vec![(capped, f)],
             conc,
         }
     }
 }
 
-fn key(layers: &[SteelLayer]) -> Vec<[u64; 3]> {
-    layers
-        .iter()
-        .map(|l| match l.steel {
-            Steel::Strand { prestrain, cap, .. } => [l.depth.to_bits(), prestrain.to_bits(), cap.to_bits()],
-            Steel::Bar { fy, .. } => [l.depth.to_bits(), fy.to_bits(), 0],
+/// Whether two sets of steel layers are the same to the bit (same answer).
+fn same(a: &[SteelLayer], b: &[SteelLayer]) -> bool {
+    a.len() == b.len()
+        && a.iter().zip(b).all(|(x, y)| {
+            x.area.to_bits() == y.area.to_bits()
+                && x.depth.to_bits() == y.depth.to_bits()
+                && match (x.steel, y.steel) {
+                    (Steel::Strand { prestrain: p, cap: c, .. }, Steel::Strand { prestrain: q, cap: d, .. }) => {
+                        p.to_bits() == q.to_bits() && c.to_bits() == d.to_bits()
+                    }
+                    (Steel::Bar { fy: f, .. }, Steel::Bar { fy: g, .. }) => f.to_bits() == g.to_bits(),
+                    _ => false,
+                }
         })
-        .collect()
 }
 
 /// Flexure at distance `d` from the nearer end.
-pub fn at(m: &Member, d: f64, memo: &mut Memo) -> AtStation {
+pub fn at<'m>(m: &'m Member, d: f64, memo: &mut Memo<'m>) -> AtStation {
     let ls = layers(m, d, Some(&memo.full));
-    let k = key(&ls);
-    let f = match memo.entries.iter().find(|(x, _)| *x == k) {
-        Some((_, f)) => f.clone(),
+    let i = match memo.entries.iter().position(|(x, _)| same(x, &ls)) {
+        Some(i) => i,
         None => {
             let f = strain_compatibility(&memo.conc, &ls);
-            memo.entries.push((k, f.clone()));
-            f
+            memo.entries.push((ls, f));
+            memo.entries.len() - 1
         }
     };
+    let f = &memo.entries[i].1;
     let (phi_dev, developed) = phi_development(m, d, &memo.full);
     let phi = f.phi.min(phi_dev);
     AtStation {
@@ -243,9 +249,9 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         .iter()
         .filter(|s| s.mu_lbin > 0.0)
         .max_by(|a, b| (a.mu_lbin / a.flexure.phi_mn_lbin).total_cmp(&(b.mu_lbin / b.flexure.phi_mn_lbin)))?;
-    let (mn_aci, fps_aci) = approximate_mn(&an.member);
+    let (mn_aci, fps_aci) = if an.brief { (0.0, 0.0) } else { approximate_mn(&an.member) };
     let f = &s.flexure;
-    let note = format!(
+    let note = an.note(format_args!(
         "{}; φ = {:.2}, εt = {:.4}{}; c = {:.2} in; Mn by ACI Eq. 20.3.2.3.1 at midspan {:.1} kip-ft (fps {:.1} ksi)",
         s.mu_combo,
         f.phi,
@@ -254,6 +260,6 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         f.c_in,
         kipft(mn_aci),
         fps_aci / 1000.0
-    );
+    ));
     Some(CheckResult::new(&INFO, kipft(s.mu_lbin), kipft(f.phi_mn_lbin), Some(s.x_in), note))
 }

@@ -36,6 +36,6 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         kip(s.vu_lbf),
         kip(cap),
         Some(s.x_in),
-        format!("bv = {bv:.1} in, d = {d:.2} in"),
+        an.note(format_args!("bv = {bv:.1} in, d = {d:.2} in")),
     ))
 }

@@ -29,6 +29,6 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         an.member.history.fpj_psi / 1000.0,
         limit / 1000.0,
         None,
-        format!("{} fpu jacking; limit {which}", an.member.pattern.jacking),
+        an.note(format_args!("{} fpu jacking; limit {which}", an.member.pattern.jacking)),
     ))
 }

@@ -39,7 +39,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         kipft(1.2 * f.mcr_lbin),
         kipft(f.phi_mn_lbin),
         Some(s.x_in),
-        format!("Mcr = {:.1} kip-ft at the section of greatest Mu", kipft(f.mcr_lbin)),
+        an.note(format_args!("Mcr = {:.1} kip-ft at the section of greatest Mu", kipft(f.mcr_lbin))),
     );
     if !r.pass && two_m && two_v {
         // waived: the ratio becomes that of the waiver's own condition, so
@@ -52,9 +52,9 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
             .fold(0.0, f64::max);
         r.ratio = (2.0 * s.mu_lbin / f.phi_mn_lbin).max(shear);
         r.pass = true;
-        r.note.push_str(&format!(
+        r.note.push_str(&an.note(format_args!(
             "; waived by {clause}.2: φMn ≥ 2Mu and φVn ≥ 2Vu (ratio shown is the larger of 2Mu/φMn and 2Vu/φVc)"
-        ));
+        )));
     }
     Some(r)
 }

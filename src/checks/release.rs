@@ -69,7 +69,7 @@ pub fn run_compression(an: &Analysis) -> Option<CheckResult> {
         f,
         lim,
         Some(s.x_in),
-        format!("{fibre} fibre; {zone}; f'ci = {fci:.0} psi"),
+        an.note(format_args!("{fibre} fibre; {zone}; f'ci = {fci:.0} psi")),
     ))
 }
 
@@ -92,6 +92,6 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
         f,
         lim,
         Some(s.x_in),
-        format!("{fibre} fibre tension; {zone}"),
+        an.note(format_args!("{fibre} fibre tension; {zone}")),
     ))
 }

@@ -138,7 +138,7 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
         ft,
         limit,
         Some(s.x_in),
-        format!("precast bottom fibre, class {} reached; {what}", class.name()),
+        an.note(format_args!("precast bottom fibre, class {} reached; {what}", class.name())),
     );
     if allowed == ServiceClass::C {
         r.ratio = r.ratio.min(1.0);
@@ -159,7 +159,7 @@ fn compression(an: &Analysis, info: &CheckInfo, k: f64, pick: fn(&AtStation) -> 
         f,
         k * fc,
         Some(s.x_in),
-        format!("{fibre}; f'c = {fc:.0} psi"),
+        an.note(format_args!("{fibre}; f'c = {fc:.0} psi")),
     ))
 }
 
@@ -199,7 +199,7 @@ pub fn run_topping(an: &Analysis) -> Option<CheckResult> {
             sus.1,
             0.45 * fc,
             Some(sus.0.x_in),
-            format!("sustained load, 0.45 f'c of the topping ({fc:.0} psi)"),
+            an.note(format_args!("sustained load, 0.45 f'c of the topping ({fc:.0} psi)")),
         )
     } else {
         CheckResult::new(
@@ -207,7 +207,7 @@ pub fn run_topping(an: &Analysis) -> Option<CheckResult> {
             tot.1,
             0.60 * fc,
             Some(tot.0.x_in),
-            format!("total load, 0.60 f'c of the topping ({fc:.0} psi)"),
+            an.note(format_args!("total load, 0.60 f'c of the topping ({fc:.0} psi)")),
         )
     };
     Some(r)

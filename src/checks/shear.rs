@@ -104,7 +104,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     } else {
         "Vcw (web-shear)"
     };
-    let mut note = format!("{governs} governs; {}", s.vu_combo);
+    let mut note = an.note(format_args!("{governs} governs; {}", s.vu_combo));
     if an.member.section.family == Family::DoubleTee {
         let need: Vec<f64> = shear
             .iter()
@@ -112,9 +112,9 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
             .map(|(s, _)| s.x_in / 12.0)
             .collect();
         if let (Some(a), Some(b)) = (need.first(), need.last()) {
-            note.push_str(&format!(
+            note.push_str(&an.note(format_args!(
                 "; stems need Av,min (9.6.3.1, Vu > 0.5φVc) over {a:.1}–{b:.1} ft; designed stirrups beyond φVc are not checked"
-            ));
+            )));
         } else {
             note.push_str("; Vu ≤ 0.5φVc throughout: no web reinforcement required (9.6.3.1)");
         }
@@ -138,6 +138,9 @@ pub fn run_deep(an: &Analysis) -> Option<CheckResult> {
         kip(v.vu_lbf),
         kip(0.5 * PHI * v.vcw_lbf),
         Some(s.x_in),
-        format!("untopped depth {:.1} in > 12.5 in; no stirrups in hollow-core", m.bare.depth_in),
+        an.note(format_args!(
+            "untopped depth {:.1} in > 12.5 in; no stirrups in hollow-core",
+            m.bare.depth_in
+        )),
     ))
 }

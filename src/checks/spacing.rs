@@ -50,7 +50,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         required,
         least,
         None,
-        format!("least centre-to-centre spacing {least:.2} in"),
+        an.note(format_args!("least centre-to-centre spacing {least:.2} in")),
     );
     if least < 1e-9 {
         r.ratio = super::RATIO_NONE;

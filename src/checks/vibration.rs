@@ -39,7 +39,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         min,
         f,
         None,
-        format!("f = {f:.2} Hz (dead + 10 % live); about 3–4 Hz is commonly sought"),
+        an.note(format_args!("f = {f:.2} Hz (dead + 10 % live); about 3–4 Hz is commonly sought")),
     ))
 }
 

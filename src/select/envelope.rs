@@ -13,7 +13,7 @@ use serde::Serialize;
 use super::{Entry, case_for, evaluate_entry, rank_bay, topping_mix};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
-use crate::checks::{Evaluation, evaluate};
+use crate::checks::{Evaluation, evaluate_brief};
 use crate::job::{Bay, Objective};
 use crate::units::{AreaLoad, Length};
 
@@ -56,7 +56,7 @@ fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f
 pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     let cand = entry.candidate();
     let span_ft = base.span.get() / 12.0;
-    let e0 = evaluate(&cand, &with_live(base, 0.0));
+    let e0 = evaluate_brief(&cand, &with_live(base, 0.0));
     if let Some(f) = e0.first_failure() {
         return LoadLimit {
             span_ft,
@@ -65,7 +65,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: f.ratio,
         };
     }
-    let e1 = evaluate(&cand, &with_live(base, PROBE_PSF));
+    let e1 = evaluate_brief(&cand, &with_live(base, PROBE_PSF));
     // checks whose ratio rises with load; the rest cannot limit it
     let mut driven: Vec<&'static str> = Vec::new();
     let mut best = (MAX_LIVE_PSF, "none");
@@ -88,7 +88,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
         };
     }
     let worst = |q: f64| -> (f64, &'static str) {
-        let ev = evaluate(&cand, &with_live(base, q));
+        let ev = evaluate_brief(&cand, &with_live(base, q));
         load_ratios(&ev, &driven)
             .into_iter()
             .fold((f64::NEG_INFINITY, ""), |a, (id, r)| if r > a.0 { (r, id) } else { a })
@@ -159,7 +159,7 @@ pub fn longest_span(entry: &Entry, base: &DesignCase, max_ft: f64) -> Option<f64
     let ok = |s: f64| {
         let mut c = base.clone();
         c.span = Length::from_unit(s, "ft");
-        evaluate(&cand, &c).viable
+        evaluate_brief(&cand, &c).viable
     };
     let mut s = max_ft.floor();
     if ok(max_ft) {
