@@ -415,7 +415,8 @@ pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
 }
 
 fn finish(an: Analysis) -> Evaluation {
-    let checks: Vec<CheckResult> = REGISTRY.iter().filter_map(|c| (c.run)(&an)).collect();
+    let mut checks: Vec<CheckResult> = Vec::with_capacity(REGISTRY.len());
+    checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(&an)));
     // jacking and spacing are properties of the pattern, not of the bay:
     // they pass or fail, but do not govern
     let governing = checks

@@ -91,7 +91,7 @@ impl Mix {
     fn modulus_at(&self, f: Stress) -> Stress {
         let wc_pcf = self.unit_weight.in_unit("pcf");
         match self.modulus {
-            Modulus::UnitWeight => Stress::new(wc_pcf.powf(1.5) * 33.0 * f.get().sqrt()),
+            Modulus::UnitWeight => Stress::new(wc_pcf * wc_pcf.sqrt() * 33.0 * f.get().sqrt()),
             Modulus::Normalweight => Stress::new(57_000.0 * f.get().sqrt()),
             Modulus::Given(e) => Stress::new(e.get() * (f.get() / self.fc.get()).sqrt()),
         }

@@ -323,3 +323,39 @@ fn monochrome_chart_and_help_render() {
     // tiny terminals do not panic
     let _ = screen(&a, 20, 5);
 }
+
+#[test]
+fn the_list_window_follows_the_selection() {
+    // only the rows that fit are drawn: moving past the bottom scrolls by
+    // one row, and moving back up keeps the window until the top is passed
+    let mut a = app();
+    let mut term = Terminal::new(TestBackend::new(120, 24)).unwrap();
+    let mut state = TableState::default();
+    let n = a.visible.len();
+    assert!(n > 12, "the demo bay lists {n} rows");
+    let label = |a: &App| a.selected_row().unwrap().label.clone();
+    let shown = |term: &Terminal<TestBackend>, text: &str| {
+        let buf = term.backend().buffer();
+        (0..buf.area.height).any(|y| {
+            let line: String = (0..buf.area.width).map(|x| buf[(x, y)].symbol()).collect();
+            line.contains(text)
+        })
+    };
+    for _ in 0..n - 1 {
+        update(&mut a, Action::Down);
+        term.draw(|f| ui::draw(f, &a, &mut state)).unwrap();
+        assert!(shown(&term, &label(&a)), "selected '{}' is drawn", label(&a));
+    }
+    assert_eq!(a.selected, n - 1);
+    let bottom_start = state.offset();
+    assert!(bottom_start > 0);
+    update(&mut a, Action::Up);
+    term.draw(|f| ui::draw(f, &a, &mut state)).unwrap();
+    assert_eq!(state.offset(), bottom_start, "moving up inside the window does not scroll");
+    for _ in 0..n {
+        update(&mut a, Action::Up);
+    }
+    term.draw(|f| ui::draw(f, &a, &mut state)).unwrap();
+    assert_eq!((a.selected, state.offset()), (0, 0));
+    assert!(shown(&term, &label(&a)));
+}

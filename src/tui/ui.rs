@@ -120,8 +120,18 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
         title.push_str("· non-viable hidden ");
     }
     let wide = area.width >= 70;
-    let rows: Vec<TRow> = app
-        .visible
+    // only the rows that fit are built (a ranking can hold 10 000): the
+    // window starts where the last frame's did and moves as little as
+    // needed to keep the selection in sight; the state keeps its start
+    let height = (area.height as usize).saturating_sub(3).max(1);
+    let mut start = state.offset().min(app.visible.len().saturating_sub(height));
+    if app.selected < start {
+        start = app.selected;
+    } else if app.selected >= start + height {
+        start = app.selected + 1 - height;
+    }
+    let window = &app.visible[start.min(app.visible.len())..(start + height).min(app.visible.len())];
+    let rows: Vec<TRow> = window
         .iter()
         .map(|(i, hits)| {
             let r = &app.rows[*i];
@@ -186,8 +196,11 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
         .header(TRow::new(header).style(t.muted))
         .row_highlight_style(t.selected)
         .block(block(title, focused, t));
-    state.select(if app.visible.is_empty() { None } else { Some(app.selected) });
-    StatefulWidget::render(table, area, buf, state);
+    let mut local = TableState::default().with_selected(if app.visible.is_empty() { None } else { Some(app.selected - start) });
+    StatefulWidget::render(table, area, buf, &mut local);
+    *state = TableState::default()
+        .with_offset(start)
+        .with_selected(if app.visible.is_empty() { None } else { Some(app.selected) });
     if app.visible.is_empty() {
         let inner = Rect {
             x: area.x + 2,
