@@ -349,6 +349,11 @@ fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
 
 /// Build the analysis: the member and the state at every station.
 pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
+    analyse_with(cand, case, false)
+}
+
+/// [`analyse`], brief (no notes) when asked.
+fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> Analysis<'a> {
     let member = Member::new(cand.section, cand.pattern, cand.mix, case);
     let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
     let mut memo = flexure::Memo::new(&member);
@@ -383,7 +388,7 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
     let f_live = worst.effects.m_live.max(worst.effects.m_roof) / s_live;
     let class = service::class_of(ft_total, member.mix.fc.get());
     let camber = crate::camber::camber(&member, class, ft_total, f_live);
-    let fire = fire::assess(&member);
+    let fire = fire::assess(&member, brief);
     let frequency_hz = vibration::frequency(&member);
     Analysis {
         member,
@@ -392,7 +397,7 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
         camber,
         fire,
         frequency_hz,
-        brief: false,
+        brief,
     }
 }
 
@@ -404,9 +409,7 @@ pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
 /// The same numbers as [`evaluate`] without the checks' notes and the
 /// stations: what ranking and the envelope need, in less time and memory.
 pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    let mut an = analyse(cand, case);
-    an.brief = true;
-    let mut ev = finish(an);
+    let mut ev = finish(analyse_with(cand, case, true));
     ev.stations = Vec::new();
     for c in &mut ev.checks {
         c.note = String::new();

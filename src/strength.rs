@@ -188,30 +188,33 @@ impl Concrete<'_> {
     }
 }
 
+/// The total tension with every layer at its cap (strand) or yield (bar), lbf.
+fn capped_tension(layers: &[SteelLayer]) -> f64 {
+    layers.iter().map(|l| l.area * cap_of(l)).sum()
+}
+
+fn cap_of(l: &SteelLayer) -> f64 {
+    match l.steel {
+        Steel::Strand { cap, .. } => cap,
+        Steel::Bar { fy, .. } => fy,
+    }
+}
+
 /// The strain-compatibility answer when every strand is held at its cap
 /// (strand not yet developed, §25.4.8.3) and every bar yields: the tension
 /// is then known, the block follows from it directly, and the answer is
 /// exact if the strains at that neutral axis do put each layer at or past
-/// its cap. None when they do not (the full iteration is needed).
-fn capped(conc: &Concrete, layers: &[SteelLayer]) -> Option<Flexure> {
-    let t: f64 = layers
-        .iter()
-        .map(|l| {
-            l.area
-                * match l.steel {
-                    Steel::Strand { cap, .. } => cap,
-                    Steel::Bar { fy, .. } => fy,
-                }
-        })
-        .sum();
+/// its cap. Otherwise Err with that neutral-axis depth, which bounds the
+/// true one from above (less tension, a shallower block), when it lies
+/// inside the section.
+fn capped(conc: &Concrete, layers: &[SteelLayer]) -> Result<Flexure, Option<f64>> {
+    let t = capped_tension(layers);
     if t <= 0.0 {
-        return None;
+        return Err(None);
     }
-    let h = conc.depth();
-    let a = conc.block_depth(t);
-    let c = a / conc.beta1;
-    if !(c > 0.0 && c < h) {
-        return None;
+    let c = conc.block_depth(t) / conc.beta1;
+    if !(c > 0.0 && c < conc.depth()) {
+        return Err(None);
     }
     let at_cap = layers.iter().all(|l| {
         let eps = 0.003 * (l.depth - c) / c;
@@ -220,16 +223,11 @@ fn capped(conc: &Concrete, layers: &[SteelLayer]) -> Option<Flexure> {
             Steel::Bar { fy, es } => es * eps >= fy,
         }
     });
-    let caps = || {
-        layers
-            .iter()
-            .map(|l| match l.steel {
-                Steel::Strand { cap, .. } => cap,
-                Steel::Bar { fy, .. } => fy,
-            })
-            .collect()
-    };
-    at_cap.then(|| finish(conc, layers, c, true, caps()))
+    if at_cap {
+        Ok(finish(conc, layers, c, true, layers.iter().map(cap_of).collect()))
+    } else {
+        Err(Some(c))
+    }
 }
 
 /// The flexural answer at neutral-axis depth `c` with the layers' stresses there.
@@ -253,24 +251,40 @@ fn finish(conc: &Concrete, layers: &[SteelLayer], c: f64, converged: bool, stres
 /// compression — directly when every layer sits at its cap, else by the
 /// Illinois variant of regula falsi on c.
 pub fn strain_compatibility(conc: &Concrete, layers: &[SteelLayer]) -> Flexure {
-    if let Some(f) = capped(conc, layers) {
-        return f;
-    }
-    let h = conc.depth();
-    let residual = |c: f64| {
-        let t: f64 = layers.iter().map(|l| l.area * steel_stress(l, c)).sum();
-        t - conc.compression(conc.beta1 * c).0
+    let upper = match capped(conc, layers) {
+        Ok(f) => return f,
+        Err(c) => c,
     };
-    let (mut lo, mut hi) = (1e-6 * h, h);
-    let (mut rlo, mut rhi) = (residual(lo), residual(hi));
-    let mut converged = rlo > 0.0 && rhi < 0.0;
+    let h = conc.depth();
+    let tension = |c: f64| layers.iter().map(|l| l.area * steel_stress(l, c)).sum::<f64>();
+    let residual = |c: f64| tension(c) - conc.compression(conc.beta1 * c).0;
+    let scale = 1.0 + capped_tension(layers).abs();
+    // tension falls and compression grows with c, so the capped depth bounds
+    // the root from above and the block that balances the tension found
+    // there bounds it from below: a tight bracket to start from
+    let (mut lo, mut hi, mut rlo, mut rhi) = match upper {
+        Some(cu) => {
+            let tu = tension(cu);
+            let cl = (conc.block_depth(tu) / conc.beta1).clamp(1e-6 * h, cu);
+            (cl, cu, residual(cl), tu - conc.compression(conc.beta1 * cu).0)
+        }
+        None => (1e-6 * h, h, residual(1e-6 * h), residual(h)),
+    };
+    if rlo < 0.0 || rhi > 0.0 {
+        // the bracket did not hold (rounding at its ends): the whole depth
+        (lo, hi) = (1e-6 * h, h);
+        (rlo, rhi) = (residual(lo), residual(hi));
+    }
+    let mut converged = rlo >= 0.0 && rhi <= 0.0;
     let mut c = hi;
-    if converged {
+    if converged && rlo == 0.0 {
+        c = lo;
+    } else if converged && rhi < 0.0 {
         let mut side = 0i8;
         for _ in 0..100 {
             c = (lo * rhi - hi * rlo) / (rhi - rlo);
             let r = residual(c);
-            if r.abs() <= 1e-9 * (1.0 + rlo.abs()) || (hi - lo) < 1e-10 * h {
+            if r.abs() <= 1e-9 * scale || (hi - lo) < 1e-10 * h {
                 break;
             }
             if r > 0.0 {

@@ -81,7 +81,9 @@ fn stem_average_cover(m: &Member, xc: f64, half_width: impl Fn(f64) -> f64) -> O
 }
 
 /// Assess the member.
-pub fn assess(m: &Member) -> Fire {
+pub fn assess(m: &Member, brief: bool) -> Fire {
+    // a brief evaluation (ranking) skips the note
+    let say = |a: std::fmt::Arguments| if brief { String::new() } else { a.to_string() };
     let agg = m.mix.aggregate;
     let same = m.case.topping.as_ref().is_some_and(|t| t.mix.aggregate == agg);
     let topping = if same {
@@ -93,14 +95,14 @@ pub fn assess(m: &Member) -> Fire {
     let r_t = rating_by_thickness(agg, te);
     let restrained = m.case.restrained;
     let db = m.db();
-    let mut note = format!(
+    let mut note = say(format_args!(
         "te = {te:.2} in{}",
         if m.case.topping.is_some() && !same {
             " (topping of another aggregate not counted)"
         } else {
             ""
         }
-    );
+    ));
     let (cover, r_c) = match m.section.family {
         Family::DoubleTee => {
             let g = &m.section.geometry;
@@ -117,15 +119,15 @@ pub fn assess(m: &Member) -> Fire {
             let width = bw(0.0);
             let r = rating_by_beam_cover(agg, restrained, width, avg);
             if least_individual < 1.0 {
-                note.push_str(&format!(
+                note.push_str(&say(format_args!(
                     "; a strand has {least_individual:.2} in cover, below the 1 in minimum of 722.2.3.3"
-                ));
+                )));
                 (avg, Some(0.0))
             } else {
                 if r.is_none() {
-                    note.push_str(&format!(
+                    note.push_str(&say(format_args!(
                         "; stems {width:.2} in wide fall under IBC Table 722.2.3(5), not in plankwise's data: average stem cover {avg:.2} in, verify by hand"
-                    ));
+                    )));
                 }
                 (avg, r)
             }
@@ -141,12 +143,12 @@ pub fn assess(m: &Member) -> Fire {
     };
     let rating = r_c.map(|c| c.min(r_t));
     if let Some(c) = r_c {
-        note.push_str(&format!(
+        note.push_str(&say(format_args!(
             "; heat transmission {} h, cover {cover:.2} in gives {} h ({})",
             fmt_h(r_t),
             fmt_h(c),
             if restrained { "restrained" } else { "unrestrained" }
-        ));
+        )));
     }
     Fire {
         equiv_thickness_in: te,

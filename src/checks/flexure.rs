@@ -69,37 +69,40 @@ fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
 /// Steel layers at distance `d` from the end; `full` gives the developed
 /// stresses that set ℓd (None: no development limit).
 fn layers<'m>(m: &'m Member, d: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>> {
+    let mut out = Vec::with_capacity(m.layers.len() + m.pattern.bars.len());
+    layers_into(m, d, full, &mut out);
+    out
+}
+
+/// [`layers`] into a buffer (a station's flexure reuses one).
+fn layers_into<'m>(m: &'m Member, d: f64, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
+    out.clear();
     let fse = m.history.fse_psi;
     let ec = m.mix.ec().get();
     let (pe, y) = m.force_at(d, fse, m.ltr);
     let e = m.bare.yb_in - y;
-    let mut out: Vec<SteelLayer> = m
-        .layers
-        .iter()
-        .enumerate()
-        .map(|(i, layer)| {
-            let yi = m.layer_y(layer, d);
-            let ei = m.bare.yb_in - yi;
-            // decompression: concrete strain at the strand level from prestress
-            let eps2 = (pe / m.bare.area_in2 + pe * e * ei / m.bare.ix_in4) / ec;
-            let cap = match full {
-                None => m.strand.fpu.get(),
-                Some(f) => {
-                    let ld = development_length(fse, f[i], m.db(), layer.debond > 0.0);
-                    developed_stress(d - layer.debond, fse, f[i], m.ltr, ld)
-                }
-            };
-            SteelLayer {
-                area: layer.area,
-                depth: m.h_total - yi,
-                steel: Steel::Strand {
-                    kind: m.strand,
-                    prestrain: fse / m.strand.eps.get() + eps2,
-                    cap,
-                },
+    out.extend(m.layers.iter().enumerate().map(|(i, layer)| {
+        let yi = m.layer_y(layer, d);
+        let ei = m.bare.yb_in - yi;
+        // decompression: concrete strain at the strand level from prestress
+        let eps2 = (pe / m.bare.area_in2 + pe * e * ei / m.bare.ix_in4) / ec;
+        let cap = match full {
+            None => m.strand.fpu.get(),
+            Some(f) => {
+                let ld = development_length(fse, f[i], m.db(), layer.debond > 0.0);
+                developed_stress(d - layer.debond, fse, f[i], m.ltr, ld)
             }
-        })
-        .collect();
+        };
+        SteelLayer {
+            area: layer.area,
+            depth: m.h_total - yi,
+            steel: Steel::Strand {
+                kind: m.strand,
+                prestrain: fse / m.strand.eps.get() + eps2,
+                cap,
+            },
+        }
+    }));
     for bar in &m.pattern.bars {
         out.push(SteelLayer {
             area: bar.count as f64 * bar.area.get(),
@@ -110,7 +113,6 @@ fn layers<'m>(m: &'m Member, d: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>
             },
         });
     }
-    out
 }
 
 /// φ where strand is not fully developed, ACI 318-19 Table 21.2.3
@@ -165,6 +167,7 @@ pub fn mcr(m: &Member, d: f64) -> f64 {
 pub struct Memo<'m> {
     entries: Vec<(Vec<SteelLayer<'m>>, crate::strength::Flexure)>,
     conc: Concrete<'m>,
+    scratch: Vec<SteelLayer<'m>>,
     /// Per-layer strand stress with full development at midspan, psi.
     pub full: Vec<f64>,
 }
@@ -188,6 +191,7 @@ impl<'m> Memo<'m> {
             full,
             entries: vec![(capped, f)],
             conc,
+            scratch: Vec::new(),
         }
     }
 }
@@ -210,15 +214,17 @@ fn same(a: &[SteelLayer], b: &[SteelLayer]) -> bool {
 
 /// Flexure at distance `d` from the nearer end.
 pub fn at<'m>(m: &'m Member, d: f64, memo: &mut Memo<'m>) -> AtStation {
-    let ls = layers(m, d, Some(&memo.full));
+    let mut ls = std::mem::take(&mut memo.scratch);
+    layers_into(m, d, Some(&memo.full), &mut ls);
     let i = match memo.entries.iter().position(|(x, _)| same(x, &ls)) {
         Some(i) => i,
         None => {
             let f = strain_compatibility(&memo.conc, &ls);
-            memo.entries.push((ls, f));
+            memo.entries.push((ls.clone(), f));
             memo.entries.len() - 1
         }
     };
+    memo.scratch = ls;
     let f = &memo.entries[i].1;
     let (phi_dev, developed) = phi_development(m, d, &memo.full);
     let phi = f.phi.min(phi_dev);
