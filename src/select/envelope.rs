@@ -102,38 +102,88 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: r,
         };
     }
-    // not linear: bracket the crossing of 1 and bisect
-    let (mut lo, mut hi) = if r > 1.0 { (0.0, best.0) } else { (best.0, best.0) };
-    if r < 1.0 {
-        while worst(hi).0 < 1.0 && hi < MAX_LIVE_PSF {
+    // not linear: bracket the crossing of 1 (reusing the ratios known at
+    // no live load and at the estimate)
+    let r0 = load_ratios(&e0, &driven)
+        .into_iter()
+        .map(|(_, r)| r)
+        .fold(f64::NEG_INFINITY, f64::max);
+    let (mut lo, mut hi, mut flo, mut fhi) = if r > 1.0 {
+        (0.0, best.0, r0 - 1.0, r - 1.0)
+    } else {
+        let (mut lo, mut flo) = (best.0, r - 1.0);
+        let mut hi = best.0;
+        let mut fhi = r - 1.0;
+        while fhi < 0.0 && hi < MAX_LIVE_PSF {
+            (lo, flo) = (hi, fhi);
             hi = (hi * 2.0).clamp(1.0, MAX_LIVE_PSF);
+            fhi = worst(hi).0 - 1.0;
         }
-        if worst(hi).0 < 1.0 {
+        if fhi < 0.0 {
             return LoadLimit {
                 span_ft,
                 live_psf: Some(MAX_LIVE_PSF),
                 governing: "none".into(),
-                ratio: worst(hi).0,
+                ratio: fhi + 1.0,
             };
         }
-    }
+        (lo, hi, flo, fhi)
+    };
+    // search [lo, hi] for ratio − 1 = 0, keeping the bracket (the ratio can
+    // jump where the governing check, station or a waiver changes): the
+    // secant through the last two points below the limit (exact where the
+    // ratio is straight up to a jump), else regula falsi (Illinois), and
+    // every third step a bisection
+    let mut below: Option<(f64, f64)> = None;
+    // the true ratio at lo (flo is halved by the Illinois step)
+    let mut at_lo = flo;
     let mut last = (r, id);
-    for _ in 0..200 {
+    let mut side = 0i8;
+    let mut answer = lo;
+    for k in 0..200 {
         let mid = 0.5 * (lo + hi);
-        last = worst(mid);
-        if (last.0 - 1.0).abs() <= TOLERANCE * 0.1 || hi - lo < 1e-12 {
-            lo = mid;
+        let secant = below
+            .filter(|&(_, f0)| at_lo > f0)
+            .map(|(q0, f0)| lo - at_lo * (lo - q0) / (at_lo - f0))
+            .filter(|&q| q > lo && q < hi);
+        let q = if k % 3 == 2 {
+            mid
+        } else if let Some(q) = secant {
+            q
+        } else if fhi > flo {
+            (lo * fhi - hi * flo) / (fhi - flo)
+        } else {
+            mid
+        };
+        let now = worst(q);
+        let f = now.0 - 1.0;
+        if f <= 0.0 || f.abs() <= TOLERANCE * 0.1 {
+            (answer, last) = (q, now);
+        }
+        if f.abs() <= TOLERANCE * 0.1 || hi - lo < 1e-9 {
             break;
         }
-        if last.0 > 1.0 {
-            hi = mid;
+        if f > 0.0 {
+            hi = q;
+            fhi = f;
+            if side == 1 {
+                flo /= 2.0;
+            }
+            side = 1;
         } else {
-            lo = mid;
+            below = Some((lo, at_lo));
+            lo = q;
+            flo = f;
+            at_lo = f;
+            if side == -1 {
+                fhi /= 2.0;
+            }
+            side = -1;
         }
     }
     LoadLimit {
         span_ft,
-        live_psf: Some(lo),
+        live_psf: Some(answer),
         governing: last.1.to_string(),
         ratio: last.0,
     }
@@ -141,14 +191,27 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
 
 /// The envelope over a range of spans, with the bay's other loads held.
 pub fn envelope(entry: &Entry, base: &DesignCase, spans_ft: &[f64]) -> Vec<LoadLimit> {
-    spans_ft
-        .iter()
-        .map(|&s| {
-            let mut c = base.clone();
-            c.span = Length::from_unit(s, "ft");
-            max_live(entry, &c)
-        })
-        .collect()
+    let at = |s: f64| {
+        let mut c = base.clone();
+        c.span = Length::from_unit(s, "ft");
+        max_live(entry, &c)
+    };
+    // spans are independent: split them over the cores (scoped threads)
+    let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
+    if threads < 2 || spans_ft.len() < 8 {
+        return spans_ft.iter().map(|&s| at(s)).collect();
+    }
+    let chunk = spans_ft.len().div_ceil(threads);
+    std::thread::scope(|sc| {
+        let handles: Vec<_> = spans_ft
+            .chunks(chunk)
+            .map(|part| sc.spawn(move || part.iter().map(|&s| at(s)).collect::<Vec<_>>()))
+            .collect();
+        handles
+            .into_iter()
+            .flat_map(|h| h.join().expect("an envelope thread panicked"))
+            .collect()
+    })
 }
 
 /// The longest span (ft) the entry carries under the case's loads: the
