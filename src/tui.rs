@@ -9,6 +9,7 @@ pub mod ui;
 
 use std::collections::BTreeSet;
 use std::path::PathBuf;
+use std::sync::Arc;
 
 use fuzzy_matcher::FuzzyMatcher;
 use fuzzy_matcher::skim::SkimMatcherV2;
@@ -218,6 +219,29 @@ pub struct Row {
     pub failure: Option<String>,
 }
 
+/// The ranked rows of a bay, viable first (what the list shows).
+pub fn rows_for(cat: &Catalog, bay: &Bay) -> Vec<Row> {
+    let r = rank_bay(cat, bay, None);
+    let to_row = |x: &crate::select::Ranked| {
+        let si = index_in(&cat.sections, x.entry.section);
+        let pi = index_in(&cat.sections[si].patterns, x.entry.pattern);
+        Row {
+            section: si,
+            pattern: pi,
+            topping: x.entry.topping,
+            label: x.entry.label(),
+            designation: format!("{} — {}", x.entry.section.designation, x.entry.pattern.designation),
+            family: x.entry.section.family,
+            remarks: format!("{} {}", x.entry.section.remarks, x.entry.pattern.remarks),
+            metrics: x.metrics,
+            viable: x.eval.viable,
+            governing: (x.eval.governing().title.to_string(), x.eval.governing().ratio),
+            failure: (!x.eval.viable).then(|| failure_reason(x)),
+        }
+    };
+    r.viable.iter().chain(r.failing.iter()).map(to_row).collect()
+}
+
 /// The index of `item` in `list`, found from its address (constant time:
 /// a ranking of 10 000 entries would otherwise search 10 000 times).
 fn index_in<T>(list: &[T], item: &T) -> usize {
@@ -230,10 +254,25 @@ fn index_in<T>(list: &[T], item: &T) -> usize {
     }
 }
 
+/// Bays with more entries than this are ranked off the UI thread when the
+/// shell offers it ([`App::background`]): the next frame comes at once, with
+/// the previous list marked as being re-ranked (about 100 ms of ranking on
+/// two cores at 10 000 entries; below 2000 it is quicker than a frame).
+pub const BACKGROUND_ABOVE: usize = 2000;
+
+/// A ranking the shell is asked to compute: its number and its bay.
+#[derive(Debug, Clone)]
+pub struct RankRequest {
+    /// Increases with every request; only the latest one's answer is kept.
+    pub generation: u64,
+    /// The bay as it is now.
+    pub bay: Bay,
+}
+
 /// The UI state.
 pub struct App {
-    /// The catalog.
-    pub catalog: Catalog,
+    /// The catalog (shared with a ranking thread).
+    pub catalog: Arc<Catalog>,
     /// The job being worked on.
     pub job: Job,
     /// Where the job came from (None: the built-in demo or flags).
@@ -274,13 +313,22 @@ pub struct App {
     pub chart: Vec<(String, Vec<LoadLimit>)>,
     /// Monochrome display (NO_COLOR).
     pub mono: bool,
+    /// Bays with more entries than this are ranked off the UI thread (the
+    /// shell sets it, to [`BACKGROUND_ABOVE`], when it runs a ranking
+    /// thread); None ranks every bay at once.
+    pub background: Option<usize>,
+    /// The ranking the shell should start, if any.
+    pub request: Option<RankRequest>,
+    /// The generation of the ranking being computed, if one is.
+    pub pending: Option<u64>,
+    generation: u64,
 }
 
 impl App {
     /// A new app on a catalog and a job.
     pub fn new(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> App {
         let mut app = App {
-            catalog,
+            catalog: Arc::new(catalog),
             job,
             job_path,
             bay: 0,
@@ -301,6 +349,10 @@ impl App {
             detail: None,
             chart: Vec::new(),
             mono: false,
+            background: None,
+            request: None,
+            pending: None,
+            generation: 0,
         };
         app.rerank();
         app
@@ -320,30 +372,47 @@ impl App {
         }
     }
 
-    /// Recompute the ranking of the current bay (its inputs changed).
+    /// Recompute the ranking of the current bay (its inputs changed): at
+    /// once, or — for a large bay when the shell ranks in the background —
+    /// as a [`RankRequest`] whose answer comes to [`App::ranked`].
     pub fn rerank(&mut self) {
+        self.generation += 1;
         let bay = self.job.bays[self.bay].clone();
-        let r = rank_bay(&self.catalog, &bay, None);
-        let to_row = |x: &crate::select::Ranked| {
-            let si = index_in(&self.catalog.sections, x.entry.section);
-            let pi = index_in(&self.catalog.sections[si].patterns, x.entry.pattern);
-            Row {
-                section: si,
-                pattern: pi,
-                topping: x.entry.topping,
-                label: x.entry.label(),
-                designation: format!("{} — {}", x.entry.section.designation, x.entry.pattern.designation),
-                family: x.entry.section.family,
-                remarks: format!("{} {}", x.entry.section.remarks, x.entry.pattern.remarks),
-                metrics: x.metrics,
-                viable: x.eval.viable,
-                governing: (x.eval.governing().title.to_string(), x.eval.governing().ratio),
-                failure: (!x.eval.viable).then(|| failure_reason(x)),
-            }
-        };
-        let rows: Vec<Row> = r.viable.iter().chain(r.failing.iter()).map(to_row).collect();
+        if self
+            .background
+            .is_some_and(|n| crate::select::entries(&self.catalog, &bay).len() > n)
+        {
+            self.pending = Some(self.generation);
+            self.request = Some(RankRequest {
+                generation: self.generation,
+                bay,
+            });
+            // the detail follows the new case at once; the list when ranked
+            self.refresh_detail();
+            return;
+        }
+        self.pending = None;
+        self.request = None;
+        self.rows = rows_for(&self.catalog, &bay);
+        self.refilter();
+    }
+
+    /// The answer to a [`RankRequest`]: kept when it is the latest one.
+    pub fn ranked(&mut self, generation: u64, rows: Vec<Row>) {
+        if self.pending != Some(generation) {
+            return;
+        }
+        self.pending = None;
+        // keep the selection on the same entry when it is still listed
+        let keep = self.selected_row().map(|r| r.label.clone());
         self.rows = rows;
         self.refilter();
+        if let Some(label) = keep {
+            if let Some(i) = self.visible.iter().position(|(i, _)| self.rows[*i].label == label) {
+                self.selected = i;
+                self.refresh_detail();
+            }
+        }
     }
 
     /// Recompute the visible rows (query or toggle changed).

@@ -6,6 +6,9 @@ use std::process::Command;
 use std::thread::sleep;
 use std::time::{Duration, Instant};
 
+#[path = "support/synthetic.rs"]
+mod synthetic;
+
 fn tmux(args: &[&str]) -> String {
     let out = Command::new("tmux").args(args).output().expect("tmux runs");
     String::from_utf8_lossy(&out.stdout).into_owned()
@@ -52,6 +55,20 @@ impl Session {
                 "timed out waiting for '{what}'; screen:\n{s}"
             );
             sleep(Duration::from_millis(100));
+        }
+    }
+}
+
+impl Session {
+    fn wait_for_gone(&self, what: &str) -> String {
+        let start = Instant::now();
+        loop {
+            let s = self.screen();
+            if !s.contains(what) {
+                return s;
+            }
+            assert!(start.elapsed() < Duration::from_secs(20), "'{what}' stayed; screen:\n{s}");
+            sleep(Duration::from_millis(50));
         }
     }
 }
@@ -188,4 +205,41 @@ fn a_vanished_terminal_ends_the_ui() {
         }
         sleep(Duration::from_millis(100));
     }
+}
+
+#[test]
+fn a_large_catalog_reranks_off_the_ui_thread() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    // 2500 entries: above the size ranked at once, so the frame after the
+    // key shows the old list marked, and the new ranking follows
+    let dir = std::env::temp_dir().join(format!("plankwise-e2e-big-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    std::fs::write(dir.join("big.toml"), synthetic::catalog(500, 5)).unwrap();
+    std::fs::write(
+        dir.join("job.toml"),
+        "[job]\nproject = \"large catalog\"\n\n[[bay]]\nname = \"Big bay\"\nspan = \"24 ft\"\nsdl = \"20 psf\"\nlive = \"40 psf\"\n",
+    )
+    .unwrap();
+    let cmd = format!(
+        "cd {} && TERM=xterm-256color {} big.toml --job job.toml; echo EXITED $?; sleep 30",
+        dir.display(),
+        env!("CARGO_BIN_EXE_plankwise")
+    );
+    let s = Session::start("big", &cmd);
+    let first = s.wait_for("viable of 2500");
+    assert!(first.contains("24.00 ft"), "{first}");
+    s.keys(&["+"]);
+    let after = s.wait_for("25.00 ft");
+    let ranked = if after.contains("re-ranking") {
+        s.wait_for_gone("re-ranking")
+    } else {
+        after
+    };
+    assert!(ranked.contains("viable of 2500"), "{ranked}");
+    s.keys(&["q", "y"]);
+    s.wait_for("EXITED 0");
+    std::fs::remove_dir_all(&dir).unwrap();
 }

@@ -121,18 +121,45 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
             }
         }
     });
+    // large bays are ranked on a thread of their own, so that a key press
+    // is answered by the next frame at once; it ranks only the latest request
+    let (ask, asked) = std::sync::mpsc::channel::<plankwise::tui::RankRequest>();
+    let (tell, told) = std::sync::mpsc::channel::<(u64, Vec<plankwise::tui::Row>)>();
+    let shared = Arc::clone(&app.catalog);
+    std::thread::spawn(move || {
+        while let Ok(mut req) = asked.recv() {
+            while let Ok(newer) = asked.try_recv() {
+                req = newer;
+            }
+            let rows = plankwise::tui::rows_for(&shared, &req.bay);
+            if tell.send((req.generation, rows)).is_err() {
+                break;
+            }
+        }
+    });
+    app.background = Some(plankwise::tui::BACKGROUND_ABOVE);
     let mut terminal = ratatui::init();
     let mut table = TableState::default();
     let result = (|| -> io::Result<()> {
         loop {
+            if let Some(req) = app.request.take() {
+                // the thread only ends with the program
+                let _ = ask.send(req);
+            }
             terminal.draw(|f| ui::draw(f, &app, &mut table))?;
-            // wake up now and then to notice a signal; otherwise block on input
+            // wake up now and then to notice a signal or a finished ranking;
+            // otherwise block on input
             let mut ev = None;
             while ev.is_none() {
                 if stop.load(Ordering::Relaxed) {
                     return Ok(());
                 }
-                if event::poll(Duration::from_millis(200))? {
+                if let Ok((generation, rows)) = told.try_recv() {
+                    app.ranked(generation, rows);
+                    break;
+                }
+                let wait = if app.pending.is_some() { 10 } else { 200 };
+                if event::poll(Duration::from_millis(wait))? {
                     ev = Some(event::read()?);
                 }
             }

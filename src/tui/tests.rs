@@ -359,3 +359,31 @@ fn the_list_window_follows_the_selection() {
     assert_eq!((a.selected, state.offset()), (0, 0));
     assert!(shown(&term, &label(&a)));
 }
+
+#[test]
+fn large_bays_rank_in_the_background_and_only_the_latest_answer_counts() {
+    let mut a = app();
+    a.background = Some(0); // every bay counts as large here
+    let before = a.rows.clone();
+    update(&mut a, Action::SpanUp);
+    let first = a.request.take().expect("a ranking is asked for");
+    assert_eq!(a.pending, Some(first.generation));
+    assert_eq!(a.rows, before, "the list stays until the answer comes");
+    assert!(screen(&a, 120, 40).contains("re-ranking"));
+    update(&mut a, Action::SpanUp);
+    let second = a.request.take().expect("a second ranking");
+    assert!(second.generation > first.generation);
+    // the shell's thread computes the rows; an out-of-date answer is dropped
+    a.ranked(first.generation, rows_for(&a.catalog, &first.bay));
+    assert_eq!(a.rows, before);
+    assert_eq!(a.pending, Some(second.generation));
+    a.ranked(second.generation, rows_for(&a.catalog, &second.bay));
+    assert_eq!(a.pending, None);
+    assert!(!screen(&a, 120, 40).contains("re-ranking"));
+    // the same rows as ranking at once
+    let mut sync = app();
+    update(&mut sync, Action::SpanUp);
+    update(&mut sync, Action::SpanUp);
+    assert_eq!(a.rows, sync.rows);
+    assert_ne!(a.rows, before, "two feet more span changes the ranking");
+}

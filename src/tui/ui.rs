@@ -119,6 +119,9 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
     if !app.show_failing {
         title.push_str("· non-viable hidden ");
     }
+    if app.pending.is_some() {
+        title.push_str("· re-ranking… ");
+    }
     let wide = area.width >= 70;
     // only the rows that fit are built (a ranking can hold 10 000): the
     // window starts where the last frame's did and moves as little as
