@@ -188,13 +188,19 @@ impl Geometry {
         }
         let step = (hi - lo) / n as f64;
         let (mut a, mut c) = ((best.1 - step).max(lo), (best.1 + step).min(hi));
+        // golden section: one new width per step, the bracket × 0.618
+        const G: f64 = 0.381_966_011_250_105_1;
+        let (mut m1, mut m2) = (a + (c - a) * G, c - (c - a) * G);
+        let (mut w1, mut w2) = (self.width_at(m1), self.width_at(m2));
         for _ in 0..60 {
-            let m1 = a + (c - a) * 0.382;
-            let m2 = a + (c - a) * 0.618;
-            if self.width_at(m1) <= self.width_at(m2) {
-                c = m2;
+            if w1 <= w2 {
+                (c, m2, w2) = (m2, m1, w1);
+                m1 = a + (c - a) * G;
+                w1 = self.width_at(m1);
             } else {
-                a = m1;
+                (a, m1, w1) = (m1, m2, w2);
+                m2 = c - (c - a) * G;
+                w2 = self.width_at(m2);
             }
         }
         let y = (a + c) / 2.0;
