@@ -86,6 +86,9 @@ pub struct Reporter<'a> {
     line_starts: Vec<usize>,
     /// Problems so far, in the order found.
     pub problems: Vec<Problem>,
+    /// Added to every span: the offset in the text of the block the spans
+    /// count from (a large catalog is parsed block by block).
+    pub base: usize,
 }
 
 impl<'a> Reporter<'a> {
@@ -98,6 +101,7 @@ impl<'a> Reporter<'a> {
             text,
             line_starts,
             problems: Vec::new(),
+            base: 0,
         }
     }
 
@@ -111,7 +115,7 @@ impl<'a> Reporter<'a> {
     }
 
     fn push(&mut self, severity: Severity, span: Option<Range<usize>>, path: &str, message: String) {
-        let (line, column) = span.map_or((0, 0), |s| self.line_col(s.start));
+        let (line, column) = span.map_or((0, 0), |s| self.line_col(s.start + self.base));
         self.problems.push(Problem {
             severity,
             file: self.file.clone(),

@@ -337,32 +337,144 @@ pub(crate) fn parse<'t>(text: &'t str, file: &str) -> Result<(Ctx<'t>, Spanned<D
     Ok((cx, root))
 }
 
+/// Files at least this large are parsed one `[[section]]` block at a time
+/// (see [`catalog_in_blocks`]); smaller ones whole.
+const BLOCKS_ABOVE: usize = 64 * 1024;
+
 /// Validate catalog text.
 pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
-    let (mut cx, root) = parse(text, file)?;
-    let root_span = root.span();
-    let root = root.into_inner();
+    if text.len() >= BLOCKS_ABOVE {
+        if let Some(r) = catalog_in_blocks(text, file) {
+            return r;
+        }
+    }
+    catalog_whole(text, file)
+}
 
-    let mut meta = Meta {
-        code: "ACI 318-19".into(),
-        ..Meta::default()
-    };
-    let mut raw_mixes = Vec::new();
-    let mut raw_strands = Vec::new();
-    let mut raw_sections: Vec<(Spanned<RawSection>, Vec<Spanned<RawPattern>>, usize)> = Vec::new();
+/// Validate catalog text parsed as one tree.
+fn catalog_whole(text: &str, file: &str) -> Result<Catalog, Problems> {
+    let (mut cx, root) = parse(text, file)?;
+    let root_start = root.span().start;
+    let mut g = Gathered::new();
+    gather(&mut cx, root.get_ref(), 0, &mut g);
+    drop(root);
+    finish(cx, g, root_start, text)
+}
+
+/// A section as gathered: its block offset, the section, its patterns, and
+/// how many of its patterns failed to parse.
+type GatheredSection = (usize, Spanned<RawSection>, Vec<Spanned<RawPattern>>, usize);
+
+/// What the top level of a catalog gives, before validation; each item
+/// with the byte offset of the block it was parsed from (its spans count
+/// from there).
+#[derive(Default)]
+struct Gathered {
+    meta: Meta,
+    saw_catalog: bool,
+    mixes: Vec<(usize, Spanned<raw::RawMix>)>,
+    strands: Vec<(usize, Spanned<raw::RawStrand>)>,
+    sections: Vec<GatheredSection>,
     // ids of entries that failed to parse, so references to them are not
     // reported a second time
-    let mut broken_mixes: Vec<String> = Vec::new();
-    let mut broken_strands: Vec<String> = Vec::new();
-    let mut saw_catalog = false;
+    broken_mixes: Vec<String>,
+    broken_strands: Vec<String>,
+}
 
+impl Gathered {
+    fn new() -> Gathered {
+        Gathered {
+            meta: Meta {
+                code: "ACI 318-19".into(),
+                ..Meta::default()
+            },
+            ..Gathered::default()
+        }
+    }
+}
+
+/// The start of each `[[section]]` header line outside multi-line strings,
+/// after the first byte. A header missed (an unusual spelling) only joins
+/// two blocks; a wrong one breaks a block's syntax, and the caller then
+/// parses the whole file.
+fn section_starts(text: &str) -> Vec<usize> {
+    let mut starts = Vec::new();
+    let (mut basic, mut literal) = (false, false);
+    let mut pos = 0;
+    for line in text.split_inclusive('\n') {
+        if !basic && !literal {
+            if let Some(rest) = line.trim_start().strip_prefix("[[section]]") {
+                let rest = rest.trim();
+                if pos > 0 && (rest.is_empty() || rest.starts_with('#')) {
+                    starts.push(pos);
+                }
+            }
+        }
+        if !literal && line.matches("\"\"\"").count() % 2 == 1 {
+            basic = !basic;
+        }
+        if !basic && line.matches("\'\'\'").count() % 2 == 1 {
+            literal = !literal;
+        }
+        pos += line.len();
+    }
+    starts
+}
+
+/// A large catalog parsed block by block — what precedes the first
+/// `[[section]]`, then each section with its patterns — so that only one
+/// block's spanned tree is alive at a time (the tree of a whole 10 000-entry
+/// file is ~50 MB). None when the file does not split cleanly (a syntax
+/// error in a block, a top-level table other than `section` in two blocks,
+/// a `section` key before the first header): the whole-file parse then
+/// reports it exactly as for a small file.
+fn catalog_in_blocks(text: &str, file: &str) -> Option<Result<Catalog, Problems>> {
+    let mut bounds = vec![0];
+    bounds.extend(section_starts(text));
+    bounds.push(text.len());
+    if bounds.len() < 4 {
+        return None;
+    }
+    let mut cx = Ctx {
+        rep: Reporter::new(file, text),
+    };
+    let mut g = Gathered::new();
+    let mut seen: Vec<String> = Vec::new();
+    for (i, w) in bounds.windows(2).enumerate() {
+        let (root, errors) = DeTable::parse_recoverable(&text[w[0]..w[1]]);
+        if !errors.is_empty() {
+            return None;
+        }
+        let root = root.into_inner();
+        let mut has_section = false;
+        for (k, _) in root.iter() {
+            let k = k.get_ref().as_ref();
+            if k == "section" {
+                has_section = true;
+            } else if seen.iter().any(|x| x == k) {
+                return None;
+            } else {
+                seen.push(k.to_string());
+            }
+        }
+        if has_section == (i == 0) {
+            return None;
+        }
+        gather(&mut cx, &root, w[0], &mut g);
+    }
+    Some(finish(cx, g, 0, text))
+}
+
+/// Take the top-level tables of one parsed block into `g` (spans from `base`).
+fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
+    cx.rep.base = base;
     for (k, v) in root.iter() {
         match k.get_ref().as_ref() {
             "catalog" => {
-                saw_catalog = true;
+                g.saw_catalog = true;
                 if let Some(m) = de::<raw::RawMeta>(&mut cx.rep, v, "catalog") {
-                    meta.name = cx.text(&Some(m.name), "catalog", "name");
-                    meta.producer = cx.text(&m.producer, "catalog", "producer");
+                    g.meta.name = cx.text(&Some(m.name), "catalog", "name");
+                    g.meta.producer = cx.text(&m.producer, "catalog", "producer");
                     if let Some(code) = &m.code {
                         if code.get_ref() != "ACI 318-19" {
                             cx.rep.error(
@@ -372,7 +484,7 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                             );
                         }
                     }
-                    meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| n.into_inner()).collect();
+                    g.meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| n.into_inner()).collect();
                 }
             }
             "mix" => {
@@ -380,8 +492,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                     let id = e.get_ref().as_table().and_then(|t| key_str(t, "id"));
                     let path = id.map_or(format!("mix {}", i + 1), |id| format!("mix '{id}'"));
                     match de::<raw::RawMix>(&mut cx.rep, e, &path) {
-                        Some(m) => raw_mixes.push(Spanned::new(e.span(), m)),
-                        None => broken_mixes.extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
+                        Some(m) => g.mixes.push((base, Spanned::new(e.span(), m))),
+                        None => g
+                            .broken_mixes
+                            .extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
                     }
                 }
             }
@@ -390,8 +504,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                     let id = e.get_ref().as_table().and_then(|t| key_str(t, "id"));
                     let path = id.map_or(format!("strand {}", i + 1), |id| format!("strand '{id}'"));
                     match de::<raw::RawStrand>(&mut cx.rep, e, &path) {
-                        Some(m) => raw_strands.push(Spanned::new(e.span(), m)),
-                        None => broken_strands.extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
+                        Some(m) => g.strands.push((base, Spanned::new(e.span(), m))),
+                        None => g
+                            .broken_strands
+                            .extend(e.get_ref().as_table().and_then(|t| key_str(t, "id")).map(String::from)),
                     }
                 }
             }
@@ -434,7 +550,7 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
                     }
                     let bv = Spanned::new(e.span(), DeValue::Table(body));
                     if let Some(s) = de::<RawSection>(&mut cx.rep, &bv, &name) {
-                        raw_sections.push((Spanned::new(e.span(), s), patterns, pattern_failures));
+                        g.sections.push((base, Spanned::new(e.span(), s), patterns, pattern_failures));
                     }
                 }
             }
@@ -451,9 +567,14 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
             }
         }
     }
-    if !saw_catalog {
+}
+
+/// Validate what was gathered: mixes, strands, then sections against them.
+fn finish(mut cx: Ctx, g: Gathered, root_start: usize, text: &str) -> Result<Catalog, Problems> {
+    cx.rep.base = 0;
+    if !g.saw_catalog {
         cx.rep.error(
-            Some(root_span.start..root_span.start),
+            Some(root_start..root_start),
             "catalog",
             "missing [catalog] table with at least name = \"…\"",
         );
@@ -461,7 +582,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
 
     // mixes
     let mut mixes: Vec<Mix> = Vec::new();
-    for m in &raw_mixes {
+    let mut broken_mixes = g.broken_mixes;
+    let mut broken_strands = g.broken_strands;
+    for (base, m) in &g.mixes {
+        cx.rep.base = *base;
         let path = format!("mix '{}'", m.get_ref().id.get_ref());
         let found = mix(&mut cx, m.get_ref(), &path);
         if found.is_none() {
@@ -480,7 +604,8 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
     }
     // strands
     let mut strands: Vec<StrandKind> = Vec::new();
-    for s in &raw_strands {
+    for (base, s) in &g.strands {
+        cx.rep.base = *base;
         let path = format!("strand '{}'", s.get_ref().id.get_ref());
         let found = strand(&mut cx, s.get_ref(), &path);
         if found.is_none() {
@@ -503,7 +628,8 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
     // sections
     let mut sections: Vec<Section> = Vec::new();
     let mut section_count = 0;
-    for (s, pats, failures) in &raw_sections {
+    for (base, s, pats, failures) in &g.sections {
+        cx.rep.base = *base;
         section_count += 1;
         let path = format!("section '{}'", s.get_ref().id.get_ref());
         let refs = Refs {
@@ -523,9 +649,10 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
             sections.push(sec);
         }
     }
+    cx.rep.base = 0;
     if section_count == 0 && !cx.rep.has_errors() {
         cx.rep.error(
-            Some(root_span.start..root_span.start),
+            Some(root_start..root_start),
             "section",
             "the catalog has no sections; add at least one [[section]] with a [[section.pattern]]",
         );
@@ -535,7 +662,7 @@ pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
         return Err(Problems(cx.rep.finish()));
     }
     Ok(Catalog {
-        meta,
+        meta: g.meta,
         mixes,
         strands,
         sections,
@@ -661,4 +788,99 @@ fn section(
     };
     compare_published(cx, &sec, &refs.mixes[mix], r.published.as_ref(), path);
     Some(sec)
+}
+
+#[cfg(test)]
+mod block_tests {
+    use super::*;
+    use crate::catalog::DEMO_US;
+
+    /// The demo catalog with its sections repeated (new ids) until it is
+    /// well above the size parsed block by block, and `edit` applied to the
+    /// last copy.
+    fn big(edit: impl Fn(String) -> String) -> String {
+        let first = DEMO_US.find("[[section]]").unwrap();
+        let (head, body) = DEMO_US.split_at(first);
+        let mut text = DEMO_US.to_string();
+        let mut k = 0;
+        while text.len() < 3 * BLOCKS_ABOVE {
+            k += 1;
+            text.push('\n');
+            text.push_str(&body.replace("\nid = \"", &format!("\nid = \"copy{k}-")));
+        }
+        let cut = text.rfind("[[section]]").unwrap();
+        let (a, b) = text.split_at(cut);
+        let _ = head;
+        format!("{a}{}", edit(b.to_string()))
+    }
+
+    fn same_both_ways(text: &str) {
+        assert!(text.len() >= BLOCKS_ABOVE);
+        let whole = catalog_whole(text, "big.toml");
+        let blocks = catalog_in_blocks(text, "big.toml");
+        match (&whole, &blocks) {
+            (Ok(a), Some(Ok(b))) => {
+                assert_eq!(a.sections, b.sections);
+                assert_eq!(a.mixes, b.mixes);
+                assert_eq!(a.warnings, b.warnings);
+            }
+            (Err(a), Some(Err(b))) => assert_eq!(a, b),
+            (_, None) => {} // fell back to the whole-file parse: same by construction
+            _ => panic!("the two parses disagree: {whole:?} / {blocks:?}"),
+        }
+        assert_eq!(catalog(text, "big.toml").is_ok(), whole.is_ok());
+    }
+
+    #[test]
+    fn a_large_catalog_reads_the_same_block_by_block() {
+        let text = big(|b| b);
+        assert!(catalog_in_blocks(&text, "big.toml").is_some_and(|r| r.is_ok()));
+        same_both_ways(&text);
+    }
+
+    #[test]
+    fn problems_deep_in_a_large_catalog_are_located_the_same() {
+        let cases: [fn(String) -> String; 6] = [
+            // a bad value
+            |b| b.replacen("count = ", "count = -", 1),
+            // a mix that is not there
+            |b| b.replacen("mix = \"", "mix = \"nosuch-", 1),
+            // an unknown key
+            |b| b.replacen("[[section.pattern]]", "[[section.pattern]]\nstrnad = 1", 1),
+            // a duplicate id of an earlier section
+            |b| {
+                let id = b.split("id = \"").nth(1).unwrap().split('"').next().unwrap().to_string();
+                b.replacen(&id, id.trim_start_matches(|c: char| c != '-').trim_start_matches('-'), 1)
+            },
+            // a syntax error: falls back to the whole file
+            |b| b.replacen("[[section.pattern]]", "[[section.pattern]\n", 1),
+            // a mix defined after the sections
+            |b| {
+                format!(
+                    "{b}\n[[mix]]\nid = \"late\"\nfc = \"5000 psi\"\nfci = \"3500 psi\"\nunit_weight = \"150 pcf\"\naggregate = \"carbonate\"\n"
+                )
+            },
+        ];
+        // the syntax error and the late mix table make the whole file parse
+        let by_blocks = [true, true, true, true, false, false];
+        for (edit, blocks) in cases.into_iter().zip(by_blocks) {
+            let text = big(edit);
+            assert_eq!(catalog_in_blocks(&text, "big.toml").is_some(), blocks);
+            same_both_ways(&text);
+        }
+        // the located problem is in the last block, not at its start
+        let text = big(|b| b.replacen("mix = \"", "mix = \"nosuch-", 1));
+        let Err(e) = catalog(&text, "big.toml") else {
+            panic!("the unknown mix is not found")
+        };
+        let line = e.first().unwrap().line;
+        assert!(e.first().unwrap().message.contains("nosuch-"), "{e}");
+        assert!(line > text[..text.rfind("[[section]]").unwrap()].lines().count(), "{e}");
+    }
+
+    #[test]
+    fn headers_inside_multi_line_strings_are_not_block_starts() {
+        let text = "[catalog]\nname = \"x\"\nnotes = [\"\"\"\n[[section]]\n\"\"\"]\n[[section]]\nid = \"a\"\n";
+        assert_eq!(section_starts(text), vec![text.rfind("[[section]]").unwrap()]);
+    }
 }
