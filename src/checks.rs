@@ -411,6 +411,8 @@ pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
 pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
     let mut ev = finish(analyse_with(cand, case, true));
     ev.stations = Vec::new();
+    // a ranking holds thousands of these: no spare capacity
+    ev.checks.shrink_to_fit();
     for c in &mut ev.checks {
         c.note = String::new();
     }

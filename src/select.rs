@@ -238,18 +238,22 @@ fn evaluate_all<'c>(cat: &Catalog, bay: &Bay, list: Vec<Entry<'c>>) -> Vec<Ranke
             .chunks(chunk)
             .map(|part| s.spawn(move || part.iter().map(|&e| evaluate_entry(cat, bay, e)).collect::<Vec<_>>()))
             .collect();
-        handles
-            .into_iter()
-            .flat_map(|h| h.join().expect("an evaluation thread panicked"))
-            .collect()
+        let mut out = Vec::with_capacity(list.len());
+        for h in handles {
+            out.extend(h.join().expect("an evaluation thread panicked"));
+        }
+        out
     })
 }
 
 /// Rank every entry for a bay with its own objective (or `objective`).
 pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -> BayRanking<'c> {
     let o = objective.unwrap_or(bay.objective);
-    let (mut viable, mut failing): (Vec<Ranked>, Vec<Ranked>) =
-        evaluate_all(cat, bay, entries(cat, bay)).into_iter().partition(|r| r.eval.viable);
+    // viable first, then split in place (no second copy of the list)
+    let mut viable = evaluate_all(cat, bay, entries(cat, bay));
+    viable.sort_by_key(|r| !r.eval.viable);
+    let mut failing = viable.split_off(viable.iter().take_while(|r| r.eval.viable).count());
+    failing.shrink_to_fit();
     viable.sort_by(|a, b| compare(o, a, b));
     failing.sort_by(|a, b| {
         let (fa, fb) = (a.eval.first_failure(), b.eval.first_failure());
