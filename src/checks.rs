@@ -66,20 +66,14 @@ pub struct CheckInfo {
 }
 
 /// The result of one check.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+#[derive(Debug, Clone, PartialEq)]
 pub struct CheckResult {
-    /// Registry id.
-    pub id: &'static str,
-    /// Title.
-    pub title: &'static str,
-    /// Clause.
-    pub clause: &'static str,
-    /// Demand, in `unit`.
+    /// Registry entry: id, title, clause, unit and group.
+    pub info: &'static CheckInfo,
+    /// Demand, in the entry's unit.
     pub demand: f64,
-    /// Capacity (or limit), in `unit`.
+    /// Capacity (or limit), in the entry's unit.
     pub capacity: f64,
-    /// Unit of demand and capacity.
-    pub unit: &'static str,
     /// Demand ÷ capacity.
     pub ratio: f64,
     /// Whether the check passes.
@@ -88,13 +82,30 @@ pub struct CheckResult {
     pub station_ft: Option<f64>,
     /// What governed and any caveat.
     pub note: String,
-    /// Group.
-    pub group: Group,
+}
+
+impl Serialize for CheckResult {
+    fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        use serde::ser::SerializeStruct;
+        let mut m = s.serialize_struct("CheckResult", 11)?;
+        m.serialize_field("id", self.info.id)?;
+        m.serialize_field("title", self.info.title)?;
+        m.serialize_field("clause", self.info.clause)?;
+        m.serialize_field("demand", &self.demand)?;
+        m.serialize_field("capacity", &self.capacity)?;
+        m.serialize_field("unit", self.info.unit)?;
+        m.serialize_field("ratio", &self.ratio)?;
+        m.serialize_field("pass", &self.pass)?;
+        m.serialize_field("station_ft", &self.station_ft)?;
+        m.serialize_field("note", &self.note)?;
+        m.serialize_field("group", &self.info.group)?;
+        m.end()
+    }
 }
 
 impl CheckResult {
     /// A result from the registry entry and the numbers.
-    pub fn new(info: &CheckInfo, demand: f64, capacity: f64, station_in: Option<f64>, note: String) -> CheckResult {
+    pub fn new(info: &'static CheckInfo, demand: f64, capacity: f64, station_in: Option<f64>, note: String) -> CheckResult {
         // no capacity at all reads as RATIO_NONE, so no infinity reaches an output
         let ratio = if capacity > 0.0 {
             (demand / capacity).min(RATIO_NONE)
@@ -104,17 +115,13 @@ impl CheckResult {
             0.0
         };
         CheckResult {
-            id: info.id,
-            title: info.title,
-            clause: info.clause,
+            info,
             demand,
             capacity,
-            unit: info.unit,
             ratio,
             pass: ratio <= 1.0 + 1e-9,
             station_ft: station_in.map(|x| x / 12.0),
             note,
-            group: info.group,
         }
     }
 }
@@ -298,11 +305,11 @@ impl Evaluation {
     }
     /// The first failing check in the order of importance, if any.
     pub fn first_failure(&self) -> Option<&CheckResult> {
-        self.checks.iter().filter(|c| !c.pass).min_by_key(|c| c.group)
+        self.checks.iter().filter(|c| !c.pass).min_by_key(|c| c.info.group)
     }
     /// A check by id.
     pub fn check(&self, id: &str) -> Option<&CheckResult> {
-        self.checks.iter().find(|c| c.id == id)
+        self.checks.iter().find(|c| c.info.id == id)
     }
 }
 
@@ -427,7 +434,7 @@ fn finish(an: Analysis) -> Evaluation {
     let governing = checks
         .iter()
         .enumerate()
-        .filter(|(_, c)| c.group != Group::Strand)
+        .filter(|(_, c)| c.info.group != Group::Strand)
         .max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio))
         .map_or(0, |(i, _)| i);
     let viable = checks.iter().all(|c| c.pass);

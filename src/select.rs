@@ -257,8 +257,8 @@ pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -
     viable.sort_by(|a, b| compare(o, a, b));
     failing.sort_by(|a, b| {
         let (fa, fb) = (a.eval.first_failure(), b.eval.first_failure());
-        fa.map(|f| f.group)
-            .cmp(&fb.map(|f| f.group))
+        fa.map(|f| f.info.group)
+            .cmp(&fb.map(|f| f.info.group))
             .then_with(|| fa.map_or(0.0, |f| f.ratio).total_cmp(&fb.map_or(0.0, |f| f.ratio)))
             .then_with(|| compare(o, a, b))
     });
@@ -270,11 +270,11 @@ pub fn failure_reason(r: &Ranked) -> String {
     match r.eval.first_failure() {
         Some(f) => format!(
             "{} ({:.0} % over: {:.2} vs {:.2} {})",
-            f.title,
+            f.info.title,
             (f.ratio - 1.0) * 100.0,
             f.demand,
             f.capacity,
-            f.unit
+            f.info.unit
         ),
         None => "passes".into(),
     }

@@ -235,7 +235,7 @@ pub fn rows_for(cat: &Catalog, bay: &Bay) -> Vec<Row> {
             remarks: format!("{} {}", x.entry.section.remarks, x.entry.pattern.remarks),
             metrics: x.metrics,
             viable: x.eval.viable,
-            governing: (x.eval.governing().title.to_string(), x.eval.governing().ratio),
+            governing: (x.eval.governing().info.title.to_string(), x.eval.governing().ratio),
             failure: (!x.eval.viable).then(|| failure_reason(x)),
         }
     };

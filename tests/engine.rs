@@ -108,10 +108,14 @@ fn every_demo_entry_gives_a_full_finite_table() {
                     "{} {} {}: {:?}",
                     s.id,
                     p.id,
-                    ch.id,
+                    ch.info.id,
                     ch
                 );
-                assert!(ch.clause.starts_with("ACI") || ch.clause.starts_with("catalog"), "{}", ch.clause);
+                assert!(
+                    ch.info.clause.starts_with("ACI") || ch.info.clause.starts_with("catalog"),
+                    "{}",
+                    ch.info.clause
+                );
             }
             for st in &ev.stations {
                 assert!(st.flexure.phi_mn_lbin.is_finite() && st.release_psi.0.is_finite() && st.service.bottom_total_psi.is_finite());

@@ -32,7 +32,7 @@ fn all_finite(ev: &plankwise::checks::Evaluation) -> Result<(), String> {
     for c in &ev.checks {
         for (what, v) in [("demand", c.demand), ("capacity", c.capacity), ("ratio", c.ratio)] {
             if !v.is_finite() {
-                return Err(format!("{} {what} = {v}", c.id));
+                return Err(format!("{} {what} = {v}", c.info.id));
             }
         }
     }
@@ -236,9 +236,9 @@ row = [{{ count = 7, height = "{}" }}]
     );
     assert_eq!(ea.checks.len(), eb.checks.len());
     for (x, y) in ea.checks.iter().zip(&eb.checks) {
-        assert_eq!(x.id, y.id);
+        assert_eq!(x.info.id, y.info.id);
         for (u, v) in [(x.demand, y.demand), (x.capacity, y.capacity), (x.ratio, y.ratio)] {
-            assert!((u - v).abs() <= 1e-9 * u.abs().max(v.abs()) + 1e-12, "{}: {u} vs {v}", x.id);
+            assert!((u - v).abs() <= 1e-9 * u.abs().max(v.abs()) + 1e-12, "{}: {u} vs {v}", x.info.id);
         }
     }
     assert!((ea.camber.camber_final_in - eb.camber.camber_final_in).abs() <= 1e-9 * ea.camber.camber_final_in.abs());

@@ -107,7 +107,7 @@ fn objectives_and_tie_breaks_on_a_small_catalog() {
     // one strand of 3/8 in cannot carry 18 ft: listed with its first failure
     let r = rank_bay(&cat, bay, None);
     let f = r.failing.iter().find(|x| x.entry.pattern.id == "p1").unwrap();
-    assert_eq!(f.eval.first_failure().unwrap().id, "flexure");
+    assert_eq!(f.eval.first_failure().unwrap().info.id, "flexure");
     assert!(plankwise::select::failure_reason(f).starts_with("Flexural strength ("));
 }
 
@@ -157,7 +157,7 @@ fn envelope_inversion_agrees_with_the_forward_check() {
             assert!(
                 (g.ratio - 1.0).abs() <= TOLERANCE,
                 "{s} {p} {span} ft: {} ratio {} at {q} psf",
-                g.id,
+                g.info.id,
                 g.ratio
             );
             // every other load-driven check is within its limit there

@@ -147,7 +147,7 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
     Some(r)
 }
 
-fn compression(an: &Analysis, info: &CheckInfo, k: f64, pick: fn(&AtStation) -> f64, fibre: &str) -> Option<CheckResult> {
+fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, pick: fn(&AtStation) -> f64, fibre: &str) -> Option<CheckResult> {
     let fc = an.member.mix.fc.get();
     let (s, f) = an
         .stations

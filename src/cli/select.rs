@@ -182,9 +182,9 @@ fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
         depth_in: r.metrics.depth_in,
         steel_in2_per_ft2: r.metrics.steel_in2_per_ft2,
         price_per_ft2: r.metrics.price_per_ft2,
-        governing: r.eval.governing().id.to_string(),
+        governing: r.eval.governing().info.id.to_string(),
         governing_ratio: r.eval.governing().ratio,
-        first_failure: f.map(|c| c.id.to_string()),
+        first_failure: f.map(|c| c.info.id.to_string()),
         first_failure_ratio: f.map(|c| c.ratio),
         reason: failure_reason(r),
     }
@@ -283,7 +283,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                     x.entry.label(),
                     x.metrics.weight_psf,
                     x.metrics.depth_in,
-                    x.eval.governing().id,
+                    x.eval.governing().info.id,
                     x.eval.governing().ratio
                 )?;
             }

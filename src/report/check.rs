@@ -177,9 +177,9 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         member_length_ft: ev.member_length_in / 12.0,
         topping_in: case.topping.as_ref().map_or(0.0, |t| t.thickness.get()),
         viable: ev.viable,
-        governing: ev.governing().id.to_string(),
+        governing: ev.governing().info.id.to_string(),
         governing_ratio: ev.governing().ratio,
-        first_failure: ev.first_failure().map(|c| c.id.to_string()),
+        first_failure: ev.first_failure().map(|c| c.info.id.to_string()),
         service_class: ev.service_class.name().to_string(),
         fpj_ksi: h.fpj_psi / 1000.0,
         fpo_ksi: h.fpo_psi / 1000.0,
@@ -371,28 +371,28 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
         writeln!(
             w,
             "{:<40} {:>10.2} {:>10} {:>7} {:>6.3} {:<5} {:>7}",
-            c.title,
+            c.info.title,
             c.demand,
             if c.capacity.is_finite() {
                 format!("{:.2}", c.capacity)
             } else {
                 "none".into()
             },
-            c.unit,
+            c.info.unit,
             c.ratio,
             if c.pass { "yes" } else { "NO" },
             c.station_ft.map_or("-".into(), |x| format!("{x:.2}"))
         )?;
-        writeln!(w, "    {} — {}", c.clause, c.note)?;
+        writeln!(w, "    {} — {}", c.info.clause, c.note)?;
     }
     writeln!(w)?;
     let g = ev.governing();
     match ev.first_failure() {
-        None => writeln!(w, "Result     VIABLE; governing: {} (ratio {:.3})", g.title, g.ratio)?,
+        None => writeln!(w, "Result     VIABLE; governing: {} (ratio {:.3})", g.info.title, g.ratio)?,
         Some(f) => writeln!(
             w,
             "Result     NOT VIABLE; first failure: {} (ratio {:.3}, {})",
-            f.title, f.ratio, f.clause
+            f.info.title, f.ratio, f.info.clause
         )?,
     }
     writeln!(w, "Note       {SIGN_CONVENTION}; moments kip-ft, forces kip")?;

@@ -76,7 +76,7 @@ fn row(r: &Ranked, bay: &Bay) -> Row {
         }),
         weight_psf: r.metrics.weight_psf,
         depth_in: r.metrics.depth_in,
-        governing: e.governing().title.to_string(),
+        governing: e.governing().info.title.to_string(),
         ratio: e.governing().ratio,
         phi_mn_over_mu: flex.map_or(0.0, |f| f.capacity / f.demand),
         shear_ratio: shear.map_or(0.0, |s| s.ratio),

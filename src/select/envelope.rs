@@ -47,8 +47,8 @@ fn with_live(base: &DesignCase, q_psf: f64) -> DesignCase {
 fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f64)> {
     ev.checks
         .iter()
-        .filter(|c| driven.contains(&c.id))
-        .map(|c| (c.id, c.ratio))
+        .filter(|c| driven.contains(&c.info.id))
+        .map(|c| (c.info.id, c.ratio))
         .collect()
 }
 
@@ -61,7 +61,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
         return LoadLimit {
             span_ft,
             live_psf: None,
-            governing: f.id.to_string(),
+            governing: f.info.id.to_string(),
             ratio: f.ratio,
         };
     }
@@ -70,12 +70,12 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     let mut driven: Vec<&'static str> = Vec::new();
     let mut best = (MAX_LIVE_PSF, "none");
     for c0 in &e0.checks {
-        let Some(c1) = e1.check(c0.id) else { continue };
+        let Some(c1) = e1.check(c0.info.id) else { continue };
         if c1.ratio > c0.ratio + 1e-12 {
-            driven.push(c0.id);
+            driven.push(c0.info.id);
             let q = (1.0 - c0.ratio) / (c1.ratio - c0.ratio) * PROBE_PSF;
             if q < best.0 {
-                best = (q.max(0.0), c0.id);
+                best = (q.max(0.0), c0.info.id);
             }
         }
     }

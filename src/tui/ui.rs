@@ -261,11 +261,11 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             ),
             Span::raw(format!(
                 "{:<34.34} {:>9.2} / {:>9.2} {:<6} {:>5.2}",
-                ch.title, ch.demand, ch.capacity, ch.unit, ch.ratio
+                ch.info.title, ch.demand, ch.capacity, ch.info.unit, ch.ratio
             )),
         ];
         if wide {
-            spans.push(Span::styled(format!("  {}", ch.clause), t.muted));
+            spans.push(Span::styled(format!("  {}", ch.info.clause), t.muted));
         }
         lines.push(Line::from(spans));
     }
