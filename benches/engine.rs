@@ -6,8 +6,9 @@
 //! `key_to_ranked_frame_10000` times it at once). Run: `cargo bench`.
 //! Results are recorded in DEVELOPERS.md.
 
+use plankwise::case::DesignCase;
 use plankwise::catalog::{Catalog, DEMO_US};
-use plankwise::checks::{Candidate, evaluate, evaluate_brief};
+use plankwise::checks::{Candidate, Evaluation, evaluate, evaluate_brief};
 use plankwise::job::{DEMO_JOB, Job};
 use plankwise::select::{Entry, case_for, rank_bay, topping_mix};
 use plankwise::tui::{Action, App, update};
@@ -26,8 +27,8 @@ fn demo() -> (Catalog, Job) {
     )
 }
 
-#[divan::bench]
-fn evaluate_one_candidate(b: divan::Bencher) {
+/// One demo candidate and bay, evaluated by `eval`.
+fn bench_evaluation(b: divan::Bencher, eval: fn(&Candidate, &DesignCase) -> Evaluation) {
     let (cat, job) = demo();
     let s = cat.section("plank-8in-4ft").unwrap();
     let cand = Candidate {
@@ -36,20 +37,17 @@ fn evaluate_one_candidate(b: divan::Bencher) {
         mix: s.mix(&cat),
     };
     let case = case_for(&job.bays[0], None, &topping_mix(&cat, &job.bays[0]));
-    b.bench(|| evaluate(divan::black_box(&cand), divan::black_box(&case)));
+    b.bench(|| eval(divan::black_box(&cand), divan::black_box(&case)));
+}
+
+#[divan::bench]
+fn evaluate_one_candidate(b: divan::Bencher) {
+    bench_evaluation(b, evaluate);
 }
 
 #[divan::bench]
 fn evaluate_one_candidate_brief(b: divan::Bencher) {
-    let (cat, job) = demo();
-    let s = cat.section("plank-8in-4ft").unwrap();
-    let cand = Candidate {
-        section: s,
-        pattern: &s.patterns[1],
-        mix: s.mix(&cat),
-    };
-    let case = case_for(&job.bays[0], None, &topping_mix(&cat, &job.bays[0]));
-    b.bench(|| evaluate_brief(divan::black_box(&cand), divan::black_box(&case)));
+    bench_evaluation(b, evaluate_brief);
 }
 
 #[divan::bench]

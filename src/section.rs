@@ -271,17 +271,6 @@ impl Geometry {
         }
         c - d / 2.0
     }
-
-    /// Clear cover from a strand at (x, y) of diameter `d` to the soffit or
-    /// the nearest void or side, the three distances a fire table asks
-    /// about: (bottom, side, least), in.
-    pub fn covers(&self, x: f64, y: f64, d: f64) -> (f64, f64, f64) {
-        let bottom = y - d / 2.0;
-        let least = self.clear_cover(x, y, d);
-        let (x0, x1) = self.outline.x_range();
-        let side = (x - x0).min(x1 - x) - d / 2.0;
-        (bottom, side, least)
-    }
 }
 
 #[cfg(test)]
