@@ -154,11 +154,7 @@ impl Geometry {
     /// Net width of concrete cut by the horizontal line at `y`, in: the
     /// summed web width at that height. A lumped reduction is ignored here.
     pub fn width_at(&self, y: f64) -> f64 {
-        let mut b = self.outline.chord(y);
-        for v in &self.voids {
-            b -= v.chord(y);
-        }
-        b.max(0.0)
+        (self.outline.chord(y) - shapes::chords_at(&self.voids, y)).max(0.0)
     }
 
     /// The least summed web width and the height where it occurs, searched

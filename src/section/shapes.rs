@@ -184,8 +184,9 @@ impl Polygon {
     /// Distance from (x, y) to the nearest edge, in.
     pub fn distance_to_edge(&self, x: f64, y: f64) -> f64 {
         self.edges()
-            .map(|(a, b)| dist_to_segment((x, y), a, b))
+            .map(|(a, b)| dist2_to_segment((x, y), a, b))
             .fold(f64::INFINITY, f64::min)
+            .sqrt()
     }
 
     /// Lowest and highest y.
@@ -236,6 +237,11 @@ fn segments_cross(p1: (f64, f64), p2: (f64, f64), q1: (f64, f64), q2: (f64, f64)
 
 /// Distance from point p to segment ab.
 pub fn dist_to_segment(p: (f64, f64), a: (f64, f64), b: (f64, f64)) -> f64 {
+    dist2_to_segment(p, a, b).sqrt()
+}
+
+/// Squared distance from point p to segment ab.
+fn dist2_to_segment(p: (f64, f64), a: (f64, f64), b: (f64, f64)) -> f64 {
     let (dx, dy) = (b.0 - a.0, b.1 - a.1);
     let len2 = dx * dx + dy * dy;
     let t = if len2 == 0.0 {
@@ -243,7 +249,8 @@ pub fn dist_to_segment(p: (f64, f64), a: (f64, f64), b: (f64, f64)) -> f64 {
     } else {
         (((p.0 - a.0) * dx + (p.1 - a.1) * dy) / len2).clamp(0.0, 1.0)
     };
-    (p.0 - a.0 - t * dx).hypot(p.1 - a.1 - t * dy)
+    let (ex, ey) = (p.0 - a.0 - t * dx, p.1 - a.1 - t * dy);
+    ex * ex + ey * ey
 }
 
 fn half_chord(r: f64, dy: f64) -> f64 {
@@ -551,33 +558,79 @@ impl Shape {
                     (cx + r * t.cos(), cy + r * t.sin())
                 })
                 .collect(),
-            _ => {
-                // march around by angle and project onto the boundary by the
-                // signed distance along the ray from the centre
-                let (x0, x1) = self.x_range();
-                let (y0, y1) = self.y_range();
-                let (cx, cy) = ((x0 + x1) / 2.0, (y0 + y1) / 2.0);
-                let reach = (x1 - x0).hypot(y1 - y0);
-                (0..n)
-                    .map(|k| {
-                        let t = 2.0 * PI * k as f64 / n as f64;
-                        let (dx, dy) = (t.cos(), t.sin());
-                        // bisection on the ray for the zero of the signed distance
-                        let (mut lo, mut hi) = (0.0, reach);
-                        for _ in 0..44 {
-                            let mid = (lo + hi) / 2.0;
-                            if self.signed_distance(cx + mid * dx, cy + mid * dy) < 0.0 {
-                                lo = mid;
-                            } else {
-                                hi = mid;
-                            }
-                        }
-                        (cx + lo * dx, cy + lo * dy)
-                    })
-                    .collect()
-            }
+            Shape::Stadium { cx, cy, w, h } => rounded_rect_points(cx, cy, w / 2.0, h / 2.0, w.min(h) / 2.0, n),
+            Shape::RoundedRect { cx, cy, w, h, r } => rounded_rect_points(cx, cy, w / 2.0, h / 2.0, r, n),
         }
     }
+
+    /// Whether `o` has the same horizontal cuts as this shape at every
+    /// height (the same shape moved sideways), so chords can be shared.
+    fn same_rows(&self, o: &Shape) -> bool {
+        match (self, o) {
+            (Shape::Circle { cy, r, .. }, Shape::Circle { cy: c2, r: r2, .. }) => cy == c2 && r == r2,
+            (Shape::Stadium { cy, w, h, .. }, Shape::Stadium { cy: c2, w: w2, h: h2, .. }) => cy == c2 && w == w2 && h == h2,
+            (
+                Shape::RoundedRect { cy, w, h, r, .. },
+                Shape::RoundedRect {
+                    cy: c2,
+                    w: w2,
+                    h: h2,
+                    r: r2,
+                    ..
+                },
+            ) => cy == c2 && w == w2 && h == h2 && r == r2,
+            _ => false,
+        }
+    }
+}
+
+/// Sum of the chords of `shapes` at height `y`; a shape with the same rows
+/// as the one before it (a row of equal cores) reuses its chord.
+pub fn chords_at(shapes: &[Shape], y: f64) -> f64 {
+    let mut sum = 0.0;
+    let mut last: Option<(&Shape, f64)> = None;
+    for s in shapes {
+        let c = match last {
+            Some((p, c)) if p.same_rows(s) => c,
+            _ => s.chord(y),
+        };
+        sum += c;
+        last = Some((s, c));
+    }
+    sum
+}
+
+/// `n` points evenly spaced by arc length around a rectangle of half-sizes
+/// `hw` × `hh` centred at (cx, cy) with corners rounded to `r`, starting on
+/// the right side and running counter-clockwise.
+fn rounded_rect_points(cx: f64, cy: f64, hw: f64, hh: f64, r: f64, n: usize) -> Vec<(f64, f64)> {
+    let r = r.clamp(0.0, hw.min(hh));
+    let (sx, sy) = (hw - r, hh - r);
+    let quarter = PI / 2.0 * r;
+    // the four sides and four corners in order: (length, point at distance s)
+    let sides = [2.0 * sy, 2.0 * sx, 2.0 * sy, 2.0 * sx];
+    let corners = [(sx, sy), (-sx, sy), (-sx, -sy), (sx, -sy)];
+    let starts = [(hw, -sy), (sx, hh), (-hw, sy), (-sx, -hh)];
+    let dirs = [(0.0, 1.0), (-1.0, 0.0), (0.0, -1.0), (1.0, 0.0)];
+    let total = 2.0 * (sides[0] + sides[1]) + 4.0 * quarter;
+    (0..n)
+        .map(|k| {
+            let mut s = total * k as f64 / n as f64;
+            for i in 0..4 {
+                if s <= sides[i] {
+                    return (cx + starts[i].0 + s * dirs[i].0, cy + starts[i].1 + s * dirs[i].1);
+                }
+                s -= sides[i];
+                if s <= quarter || i == 3 {
+                    let a = i as f64 * PI / 2.0 + if r > 0.0 { s / r } else { 0.0 };
+                    let (sin, cos) = a.sin_cos();
+                    return (cx + corners[i].0 + r * cos, cy + corners[i].1 + r * sin);
+                }
+                s -= quarter;
+            }
+            unreachable!("the last corner takes the rest")
+        })
+        .collect()
 }
 
 #[cfg(test)]
@@ -692,6 +745,56 @@ mod tests {
         };
         for (x, y) in s.boundary_points(64) {
             assert!(s.signed_distance(x, y).abs() < 1e-9);
+        }
+        // a flat stadium and a rounded rectangle, points evenly spaced: the
+        // straight-line gaps between neighbours are equal on the straight parts
+        // and no longer than the arc step anywhere
+        for s in [
+            Shape::Stadium {
+                cx: 0.0,
+                cy: 3.0,
+                w: 9.0,
+                h: 4.0,
+            },
+            Shape::RoundedRect {
+                cx: 2.0,
+                cy: 5.0,
+                w: 6.0,
+                h: 8.0,
+                r: 1.5,
+            },
+            Shape::RoundedRect {
+                cx: 2.0,
+                cy: 5.0,
+                w: 6.0,
+                h: 8.0,
+                r: 0.0,
+            },
+        ] {
+            let pts = s.boundary_points(96);
+            assert_eq!(pts.len(), 96);
+            let step = s.perimeter() / 96.0;
+            for (i, &(x, y)) in pts.iter().enumerate() {
+                assert!(s.signed_distance(x, y).abs() < 1e-9, "{s:?} point {i}");
+                let (u, v) = pts[(i + 1) % 96];
+                let gap = (u - x).hypot(v - y);
+                assert!(gap <= step + 1e-9 && gap > 0.6 * step, "{s:?} gap {gap} step {step}");
+            }
+        }
+    }
+
+    #[test]
+    fn equal_cores_share_their_chords() {
+        let core = |cx| Shape::Stadium {
+            cx,
+            cy: 4.0,
+            w: 5.0,
+            h: 6.0,
+        };
+        let row = [core(3.0), core(9.0), core(15.0), Shape::Circle { cx: 20.0, cy: 4.0, r: 2.0 }];
+        for y in [1.0, 1.5, 3.3, 4.0, 6.2, 6.9, 7.5] {
+            let each: f64 = row.iter().map(|s| s.chord(y)).sum();
+            assert_relative_eq!(chords_at(&row, y), each, max_relative = 1e-15);
         }
     }
 
