@@ -313,6 +313,43 @@ impl Evaluation {
     }
 }
 
+/// What a ranking keeps of an evaluation: whether every check passes, the
+/// governing check and the first failure in the order of importance —
+/// no heap, so 10 000 of them stay small.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Verdict {
+    /// Whether every check passes.
+    pub viable: bool,
+    governing: CheckResult,
+    first_failure: Option<CheckResult>,
+}
+
+impl Verdict {
+    /// The governing check (highest ratio, strand checks aside).
+    pub fn governing(&self) -> &CheckResult {
+        &self.governing
+    }
+    /// The first failing check in the order of importance, if any.
+    pub fn first_failure(&self) -> Option<&CheckResult> {
+        self.first_failure.as_ref()
+    }
+}
+
+impl Evaluation {
+    /// The verdict (notes dropped: a ranking shows numbers).
+    pub fn verdict(&self) -> Verdict {
+        let bare = |c: &CheckResult| CheckResult {
+            note: String::new(),
+            ..c.clone()
+        };
+        Verdict {
+            viable: self.viable,
+            governing: bare(self.governing()),
+            first_failure: self.first_failure().map(bare),
+        }
+    }
+}
+
 /// A candidate member: a section, one of its patterns, and its concrete.
 #[derive(Debug, Clone, Copy)]
 pub struct Candidate<'a> {

@@ -10,7 +10,7 @@ use serde::Serialize;
 
 use crate::case::{DesignCase, Topping};
 use crate::catalog::{Catalog, Pattern, Section};
-use crate::checks::{Candidate, Evaluation, evaluate_brief};
+use crate::checks::{Candidate, Evaluation, Verdict, evaluate_brief};
 use crate::job::{Bay, Objective};
 use crate::material::{Aggregate, Mix, Modulus};
 use crate::units::{Length, Stress, UnitWeight};
@@ -65,13 +65,14 @@ pub struct Metrics {
     pub governing_ratio: f64,
 }
 
-/// An evaluated entry.
+/// An evaluated entry, as a ranking keeps it: the verdict and the figures
+/// (a ranking holds thousands; [`evaluation`] gives every check of one).
 #[derive(Debug, Clone)]
 pub struct Ranked<'c> {
     /// The entry.
     pub entry: Entry<'c>,
-    /// Its evaluation.
-    pub eval: Evaluation,
+    /// Whether it works, what governs and what fails first.
+    pub verdict: Verdict,
     /// Its figures.
     pub metrics: Metrics,
 }
@@ -215,14 +216,23 @@ pub fn compare(o: Objective, a: &Ranked, b: &Ranked) -> Ordering {
         })
 }
 
-/// Evaluate one entry for a bay.
+/// Every check of one entry for a bay, numbers only (no notes, no stations).
+pub fn evaluation(cat: &Catalog, bay: &Bay, e: &Entry) -> Evaluation {
+    evaluate_brief(&e.candidate(), &case_for(bay, e.topping, &topping_mix(cat, bay)))
+}
+
+/// Evaluate one entry for a bay, as a ranking keeps it.
 pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> {
     let case = case_for(bay, e.topping, &topping_mix(cat, bay));
-    // a ranking keeps the checks' numbers, not their notes nor the
-    // station-by-station state: the detail view re-evaluates
+    // a ranking keeps the verdict, not every check nor the station-by-station
+    // state: the detail view and the shortlist re-evaluate what they show
     let eval = evaluate_brief(&e.candidate(), &case);
     let metrics = metrics(&e, &case, &eval);
-    Ranked { entry: e, eval, metrics }
+    Ranked {
+        entry: e,
+        verdict: eval.verdict(),
+        metrics,
+    }
 }
 
 /// Evaluate entries on every core (scoped threads; evaluation is pure), in
@@ -251,12 +261,13 @@ pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -
     let o = objective.unwrap_or(bay.objective);
     // viable first, then split in place (no second copy of the list)
     let mut viable = evaluate_all(cat, bay, entries(cat, bay));
-    viable.sort_by_key(|r| !r.eval.viable);
-    let mut failing = viable.split_off(viable.iter().take_while(|r| r.eval.viable).count());
+    viable.sort_by_key(|r| !r.verdict.viable);
+    let mut failing = viable.split_off(viable.iter().take_while(|r| r.verdict.viable).count());
     failing.shrink_to_fit();
+    viable.shrink_to_fit();
     viable.sort_by(|a, b| compare(o, a, b));
     failing.sort_by(|a, b| {
-        let (fa, fb) = (a.eval.first_failure(), b.eval.first_failure());
+        let (fa, fb) = (a.verdict.first_failure(), b.verdict.first_failure());
         fa.map(|f| f.info.group)
             .cmp(&fb.map(|f| f.info.group))
             .then_with(|| fa.map_or(0.0, |f| f.ratio).total_cmp(&fb.map_or(0.0, |f| f.ratio)))
@@ -267,7 +278,7 @@ pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -
 
 /// "Flexural strength 1.18" — the first failure in order of importance and by how much.
 pub fn failure_reason(r: &Ranked) -> String {
-    match r.eval.first_failure() {
+    match r.verdict.first_failure() {
         Some(f) => format!(
             "{} ({:.0} % over: {:.2} vs {:.2} {})",
             f.info.title,
@@ -299,6 +310,24 @@ mod tests {
         }
         for f in &r.failing {
             assert!(failure_reason(f).contains("% over"));
+        }
+    }
+
+    #[test]
+    fn a_verdict_keeps_what_the_full_evaluation_says() {
+        let cat = Catalog::from_str(DEMO_US, "demo-us.toml").unwrap();
+        let job = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
+        let r = rank_bay(&cat, &job.bays[0], None);
+        assert!(!r.failing.is_empty());
+        for x in r.viable.iter().chain(&r.failing) {
+            let ev = evaluation(&cat, &job.bays[0], &x.entry);
+            assert_eq!(x.verdict.viable, ev.viable);
+            assert_eq!(x.verdict.governing().info.id, ev.governing().info.id);
+            assert_eq!(x.verdict.governing().ratio, ev.governing().ratio);
+            assert_eq!(
+                x.verdict.first_failure().map(|c| (c.info.id, c.ratio)),
+                ev.first_failure().map(|c| (c.info.id, c.ratio))
+            );
         }
     }
 }

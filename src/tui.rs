@@ -234,9 +234,9 @@ pub fn rows_for(cat: &Catalog, bay: &Bay) -> Vec<Row> {
             family: x.entry.section.family,
             remarks: format!("{} {}", x.entry.section.remarks, x.entry.pattern.remarks),
             metrics: x.metrics,
-            viable: x.eval.viable,
-            governing: (x.eval.governing().info.title.to_string(), x.eval.governing().ratio),
-            failure: (!x.eval.viable).then(|| failure_reason(x)),
+            viable: x.verdict.viable,
+            governing: (x.verdict.governing().info.title.to_string(), x.verdict.governing().ratio),
+            failure: (!x.verdict.viable).then(|| failure_reason(x)),
         }
     };
     r.viable.iter().chain(r.failing.iter()).map(to_row).collect()

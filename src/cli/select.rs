@@ -171,10 +171,10 @@ struct EntryJson {
 }
 
 fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
-    let f = r.eval.first_failure();
+    let f = r.verdict.first_failure();
     EntryJson {
         rank,
-        viable: r.eval.viable,
+        viable: r.verdict.viable,
         section: r.entry.section.id.clone(),
         pattern: r.entry.pattern.id.clone(),
         topping_in: r.entry.topping.map_or(0.0, |t| t.get()),
@@ -182,8 +182,8 @@ fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
         depth_in: r.metrics.depth_in,
         steel_in2_per_ft2: r.metrics.steel_in2_per_ft2,
         price_per_ft2: r.metrics.price_per_ft2,
-        governing: r.eval.governing().info.id.to_string(),
-        governing_ratio: r.eval.governing().ratio,
+        governing: r.verdict.governing().info.id.to_string(),
+        governing_ratio: r.verdict.governing().ratio,
         first_failure: f.map(|c| c.info.id.to_string()),
         first_failure_ratio: f.map(|c| c.ratio),
         reason: failure_reason(r),
@@ -283,8 +283,8 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                     x.entry.label(),
                     x.metrics.weight_psf,
                     x.metrics.depth_in,
-                    x.eval.governing().info.id,
-                    x.eval.governing().ratio
+                    x.verdict.governing().info.id,
+                    x.verdict.governing().ratio
                 )?;
             }
             if r.viable.is_empty() {

@@ -6,7 +6,7 @@ use std::io::{self, Write};
 use crate::catalog::Catalog;
 use crate::checks::fire::fmt_h;
 use crate::job::{Bay, Job};
-use crate::select::{BayRanking, Ranked, failure_reason};
+use crate::select::{BayRanking, Ranked, evaluation, failure_reason};
 use crate::units::fmt_ft_in;
 
 /// Output format.
@@ -48,8 +48,10 @@ struct Row {
     pieces: Option<u64>,
 }
 
-fn row(r: &Ranked, bay: &Bay) -> Row {
-    let e = &r.eval;
+/// A listed member's row: its checks are evaluated again (a ranking keeps
+/// only the verdict).
+fn row(cat: &Catalog, r: &Ranked, bay: &Bay) -> Row {
+    let e = &evaluation(cat, bay, &r.entry);
     let flex = e.check("flexure");
     let shear = e.check("shear");
     let fire = match (e.fire.rating_h, e.fire.rating_cover_h) {
@@ -143,7 +145,7 @@ pub fn write(w: &mut impl Write, format: Format, job: &Job, cat: &Catalog, bays:
     match format {
         Format::Text => text(w, job, cat, bays, top),
         Format::Markdown => markdown(w, job, cat, bays, top),
-        Format::Csv => csv(w, job, bays, top),
+        Format::Csv => csv(w, job, cat, bays, top),
     }
 }
 
@@ -213,7 +215,7 @@ fn text_raw(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
             continue;
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(r, b.bay);
+            let x = row(cat, r, b.bay);
             writeln!(w, "{:>3}. {}", k + 1, x.designation)?;
             writeln!(
                 w,
@@ -281,7 +283,7 @@ fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
         )?;
         writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(r, b.bay);
+            let x = row(cat, r, b.bay);
             writeln!(
                 w,
                 "| {} | {} (`{}`) | {} | {:.1} | {:.2} | {} | {:.2} | {:.2} | {:.2} | {} | {:+.2} | {:+.2} | {:.2} | {} | {} | {} |",
@@ -329,7 +331,7 @@ fn q(s: &str) -> String {
     }
 }
 
-fn csv(w: &mut impl Write, job: &Job, bays: &[BayList], top: usize) -> io::Result<()> {
+fn csv(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
     writeln!(
         w,
         "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces"
@@ -340,7 +342,7 @@ fn csv(w: &mut impl Write, job: &Job, bays: &[BayList], top: usize) -> io::Resul
             continue;
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(r, b.bay);
+            let x = row(cat, r, b.bay);
             writeln!(
                 w,
                 "{},{},{},{},{},{},{},{:.1},{:.2},{},{:.3},{:.3},{:.3},{},{:.3},{:.3},{:.3},{},{},{}",

@@ -10,7 +10,7 @@
 
 use serde::Serialize;
 
-use super::{Entry, case_for, evaluate_entry, rank_bay, topping_mix};
+use super::{Entry, case_for, evaluation, rank_bay, topping_mix};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
 use crate::checks::{Evaluation, evaluate_brief};
@@ -308,5 +308,5 @@ pub fn bay_envelope(cat: &Catalog, bay: &Bay, entry: &Entry, spans_ft: &[f64]) -
 pub fn forward(cat: &Catalog, bay: &Bay, entry: Entry, live_psf: f64) -> Evaluation {
     let mut b = bay.clone();
     b.case.live = AreaLoad::from_unit(live_psf, "psf");
-    evaluate_entry(cat, &b, entry).eval
+    evaluation(cat, &b, &entry)
 }
