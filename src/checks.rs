@@ -361,6 +361,28 @@ pub struct Candidate<'a> {
     pub mix: &'a Mix,
 }
 
+impl Station {
+    /// The same state seen from the other end, at `l − x`.
+    fn mirrored(&self, l: f64) -> Station {
+        let mut s = self.clone();
+        s.x_in = l - self.x_in;
+        let e = &mut s.effects;
+        for v in [&mut e.v_self, &mut e.v_topping, &mut e.v_sdl, &mut e.v_live, &mut e.v_roof] {
+            *v = -*v;
+        }
+        s
+    }
+}
+
+/// Whether the member and its loads are symmetric about midspan: every
+/// line load has its mirror (strand, debonding and harping are measured
+/// from the nearer end, so they always are).
+fn symmetric(m: &Member) -> bool {
+    m.points
+        .iter()
+        .all(|&(p, a, k)| m.points.iter().any(|&(q, b, j)| q == p && j == k && (b - (m.l - a)).abs() < 1e-9))
+}
+
 /// Stations: every 1/20 of the span plus the special points.
 fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
     let l = m.l;
@@ -401,29 +423,41 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     let member = Member::new(cand.section, cand.pattern, cand.mix, case);
     let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
     let mut memo = flexure::Memo::new(&member);
-    let stations = stations(&member, x_shear)
-        .into_iter()
-        .map(|x| {
-            let d = member.end_distance(x);
-            let eff = member.effects(x);
-            let (mu, mu_combo, vu, vu_combo) = factored(&eff);
-            let flex = flexure::at(&member, d, &mut memo);
-            let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(&member, d, &eff, mu, vu));
-            Station {
-                x_in: x,
-                d_in: d,
-                mu_lbin: mu,
-                mu_combo,
-                vu_lbf: vu,
-                effects: eff,
-                vu_combo,
-                flexure: flex,
-                release_psi: release::at(&member, d),
-                service: service::at(&member, d, &eff),
-                shear,
-            }
-        })
-        .collect::<Vec<Station>>();
+    let mut at = |x: f64| {
+        let d = member.end_distance(x);
+        let eff = member.effects(x);
+        let (mu, mu_combo, vu, vu_combo) = factored(&eff);
+        let flex = flexure::at(&member, d, &mut memo);
+        let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(&member, d, &eff, mu, vu));
+        Station {
+            x_in: x,
+            d_in: d,
+            mu_lbin: mu,
+            mu_combo,
+            vu_lbf: vu,
+            effects: eff,
+            vu_combo,
+            flexure: flex,
+            release_psi: release::at(&member, d),
+            service: service::at(&member, d, &eff),
+            shear,
+        }
+    };
+    let xs = stations(&member, x_shear);
+    let stations = if symmetric(&member) {
+        // the member, its strand and its loads are the same seen from either
+        // end: the right half mirrors the left (shears change sign)
+        let half = member.l / 2.0;
+        let left: Vec<Station> = xs.iter().filter(|&&x| x <= half + 1e-9).map(|&x| at(x)).collect();
+        let mut all = Vec::with_capacity(2 * left.len());
+        all.extend(left.iter().cloned());
+        for s in left.iter().rev().filter(|s| s.x_in < half - 1e-9) {
+            all.push(s.mirrored(member.l));
+        }
+        all
+    } else {
+        xs.into_iter().map(at).collect::<Vec<Station>>()
+    };
     // camber needs the class reached and, for T and C, the stresses of the
     // bilinear method at the section of greatest moment
     let worst = stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");

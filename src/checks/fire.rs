@@ -160,9 +160,23 @@ pub fn assess(m: &Member, brief: bool) -> Fire {
     }
 }
 
-/// "1½" style hours.
-pub fn fmt_h(h: f64) -> String {
-    if (h - 1.5).abs() < 1e-9 { "1½".into() } else { format!("{h:.0}") }
+/// "1½" style hours (formatted only when printed).
+pub fn fmt_h(h: f64) -> Hours {
+    Hours(h)
+}
+
+/// Hours as a rating prints them: "1", "1½", "2".
+#[derive(Debug, Clone, Copy)]
+pub struct Hours(pub f64);
+
+impl std::fmt::Display for Hours {
+    fn fmt(&self, f: &mut std::fmt::Formatter) -> std::fmt::Result {
+        if (self.0 - 1.5).abs() < 1e-9 {
+            f.write_str("1½")
+        } else {
+            write!(f, "{:.0}", self.0)
+        }
+    }
 }
 
 /// Run only when the case requires a rating.
