@@ -387,8 +387,10 @@ fn symmetric(m: &Member) -> bool {
 fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
     let l = m.l;
     let half = (m.lm - l) / 2.0;
-    let mut xs: Vec<f64> = (0..=20).map(|k| l * k as f64 / 20.0).collect();
-    let mut special = vec![x_shear, m.ltr - half, m.ltr_shear - half, l / 2.0];
+    let mut xs: Vec<f64> = Vec::with_capacity(48);
+    xs.extend((0..=20).map(|k| l * k as f64 / 20.0));
+    let mut special = Vec::with_capacity(16);
+    special.extend([x_shear, m.ltr - half, m.ltr_shear - half, l / 2.0]);
     if let Some(hd) = m.hold_down {
         special.push(hd - half);
     }
@@ -448,11 +450,15 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
         // the member, its strand and its loads are the same seen from either
         // end: the right half mirrors the left (shears change sign)
         let half = member.l / 2.0;
-        let left: Vec<Station> = xs.iter().filter(|&&x| x <= half + 1e-9).map(|&x| at(x)).collect();
-        let mut all = Vec::with_capacity(2 * left.len());
-        all.extend(left.iter().cloned());
-        for s in left.iter().rev().filter(|s| s.x_in < half - 1e-9) {
-            all.push(s.mirrored(member.l));
+        // xs is sorted: the left half is a prefix
+        let n = xs.iter().take_while(|&&x| x <= half + 1e-9).count();
+        let mut all = Vec::with_capacity(2 * n);
+        all.extend(xs[..n].iter().map(|&x| at(x)));
+        for i in (0..n).rev() {
+            if all[i].x_in < half - 1e-9 {
+                let m = all[i].mirrored(member.l);
+                all.push(m);
+            }
         }
         all
     } else {

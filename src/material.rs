@@ -89,7 +89,8 @@ pub struct Mix {
 
 impl Mix {
     fn modulus_at(&self, f: Stress) -> Stress {
-        let wc_pcf = self.unit_weight.in_unit("pcf");
+        // pcf by its factor, not by name: this runs at every station
+        let wc_pcf = self.unit_weight.get() / (1.0 / 1728.0);
         match self.modulus {
             Modulus::UnitWeight => Stress::new(wc_pcf * wc_pcf.sqrt() * 33.0 * f.get().sqrt()),
             Modulus::Normalweight => Stress::new(57_000.0 * f.get().sqrt()),
@@ -169,8 +170,9 @@ impl StrandKind {
     /// piecewise curve of the nearer grade (250 or 270), scaled to this
     /// strand's fpu and Eps (reference sheet §1.3(a), from memory, medium).
     pub fn stress(&self, eps: f64) -> f64 {
-        let fpu = self.fpu.in_unit("ksi");
-        let e_ksi = self.eps.in_unit("ksi");
+        // ksi by its factor, not by name: this runs in every strain-compatibility step
+        let fpu = self.fpu.get() / 1000.0;
+        let e_ksi = self.eps.get() / 1000.0;
         let f = if eps <= 0.0 {
             e_ksi * eps
         } else if (fpu - 270.0).abs() < 1.0 && self.relaxation == Relaxation::Low {

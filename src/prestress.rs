@@ -110,22 +110,23 @@ pub fn kre_j(relaxation: Relaxation, fpu_psi: f64) -> (f64, f64) {
 
 /// C by linear interpolation in [`ZIA_C_TABLE`]; (C, clamped).
 pub fn c_factor(relaxation: Relaxation, ratio: f64) -> (f64, bool) {
-    let col: Vec<(f64, f64)> = ZIA_C_TABLE
-        .iter()
-        .filter_map(|&(r, sr, lr)| match relaxation {
+    // the column of this relaxation, highest ratio first (no allocation: losses run per evaluation)
+    let col = || {
+        ZIA_C_TABLE.iter().filter_map(move |&(r, sr, lr)| match relaxation {
             Relaxation::Low => Some((r, lr)),
             Relaxation::StressRelieved => sr.map(|v| (r, v)),
         })
-        .collect();
-    let (hi, lo) = (col[0], col[col.len() - 1]);
+    };
+    let (Some(hi), Some(lo)) = (col().next(), col().last()) else {
+        return (1.0, true);
+    };
     if ratio >= hi.0 {
         return (hi.1, ratio > hi.0 + 1e-9);
     }
     if ratio <= lo.0 {
         return (lo.1, ratio < lo.0 - 1e-9);
     }
-    for w in col.windows(2) {
-        let ((r1, c1), (r0, c0)) = (w[0], w[1]);
+    for ((r1, c1), (r0, c0)) in col().zip(col().skip(1)) {
         if ratio <= r1 && ratio >= r0 {
             return (c0 + (c1 - c0) * (ratio - r0) / (r1 - r0), false);
         }
