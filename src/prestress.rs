@@ -117,7 +117,7 @@ pub fn c_factor(relaxation: Relaxation, ratio: f64) -> (f64, bool) {
             Relaxation::StressRelieved => sr.map(|v| (r, v)),
         })
     };
-    let (Some(hi), Some(lo)) = (col().next(), col().last()) else {
+    let (Some(hi), Some(lo)) = (col().next(), col().next_back()) else {
         return (1.0, true);
     };
     if ratio >= hi.0 {
