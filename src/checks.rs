@@ -448,16 +448,21 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     let xs = stations(&member, x_shear);
     let stations = if symmetric(&member) {
         // the member, its strand and its loads are the same seen from either
-        // end: the right half mirrors the left (shears change sign)
+        // end: the right half mirrors the left (shears change sign), and a
+        // station's state is worked out once
         let half = member.l / 2.0;
         // xs is sorted: the left half is a prefix
         let n = xs.iter().take_while(|&&x| x <= half + 1e-9).count();
-        let mut all = Vec::with_capacity(2 * n);
+        let mut all = Vec::with_capacity(if brief { n } else { 2 * n });
         all.extend(xs[..n].iter().map(|&x| at(x)));
-        for i in (0..n).rev() {
-            if all[i].x_in < half - 1e-9 {
-                let m = all[i].mirrored(member.l);
-                all.push(m);
+        // a brief evaluation keeps the numbers only: every maximum over the
+        // stations is already found on the left half
+        if !brief {
+            for i in (0..n).rev() {
+                if all[i].x_in < half - 1e-9 {
+                    let m = all[i].mirrored(member.l);
+                    all.push(m);
+                }
             }
         }
         all

@@ -426,3 +426,41 @@ fn mirrored_half_agrees_with_every_station() {
         }
     }
 }
+
+/// The brief evaluation (ranking, envelope) reads only the left half of a
+/// symmetric member and skips the notes: it must give the full evaluation's
+/// numbers for every demo entry on every demo bay; a governing station may
+/// be reported at its mirror image.
+#[test]
+fn brief_and_full_evaluations_agree() {
+    use plankwise::checks::evaluate_brief;
+    use plankwise::job::{DEMO_JOB, Job};
+    use plankwise::select::{case_for, entries, topping_mix};
+    let cat = demo();
+    let job = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
+    let mut n = 0;
+    for bay in &job.bays {
+        for e in entries(&cat, bay) {
+            let k = case_for(bay, e.topping, &topping_mix(&cat, bay));
+            let (full, brief) = (evaluate(&e.candidate(), &k), evaluate_brief(&e.candidate(), &k));
+            assert_eq!(full.viable, brief.viable);
+            assert_eq!(full.governing, brief.governing);
+            assert_eq!(full.checks.len(), brief.checks.len());
+            for (a, b) in full.checks.iter().zip(&brief.checks) {
+                assert_eq!(a.info.id, b.info.id);
+                assert_eq!(
+                    (a.demand, a.capacity, a.ratio, a.pass),
+                    (b.demand, b.capacity, b.ratio, b.pass),
+                    "{}",
+                    a.info.id
+                );
+                let l = k.span.get() / 12.0;
+                if let (Some(x), Some(y)) = (a.station_ft, b.station_ft) {
+                    assert!((x - y).abs() < 1e-9 || (x - (l - y)).abs() < 1e-9, "{}: {x} vs {y}", a.info.id);
+                }
+            }
+            n += 1;
+        }
+    }
+    assert!(n > 100, "{n}");
+}
