@@ -427,23 +427,8 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     let mut memo = flexure::Memo::new(&member);
     let mut at = |x: f64| {
         let d = member.end_distance(x);
-        let eff = member.effects(x);
-        let (mu, mu_combo, vu, vu_combo) = factored(&eff);
         let flex = flexure::at(&member, d, &mut memo);
-        let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(&member, d, &eff, mu, vu));
-        Station {
-            x_in: x,
-            d_in: d,
-            mu_lbin: mu,
-            mu_combo,
-            vu_lbf: vu,
-            effects: eff,
-            vu_combo,
-            flexure: flex,
-            release_psi: release::at(&member, d),
-            service: service::at(&member, d, &eff),
-            shear,
-        }
+        loaded(&member, x, d, x_shear, flex, release::at(&member, d))
     };
     let xs = stations(&member, x_shear);
     let stations = if symmetric(&member) {
@@ -469,6 +454,34 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     } else {
         xs.into_iter().map(at).collect::<Vec<Station>>()
     };
+    let fire = fire::assess(&member, brief);
+    complete(member, stations, x_shear, fire, brief)
+}
+
+/// The state at station `x` (`d` from the nearer end) under the member's
+/// loads, given what does not depend on them: flexural strength and the
+/// release stresses.
+fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
+    let eff = member.effects(x);
+    let (mu, mu_combo, vu, vu_combo) = factored(&eff);
+    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, &eff, mu, vu));
+    Station {
+        x_in: x,
+        d_in: d,
+        mu_lbin: mu,
+        mu_combo,
+        vu_lbf: vu,
+        effects: eff,
+        vu_combo,
+        flexure,
+        release_psi,
+        service: service::at(member, d, &eff),
+        shear,
+    }
+}
+
+/// The analysis from its stations: camber and frequency added.
+fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: fire::Fire, brief: bool) -> Analysis<'a> {
     // camber needs the class reached and, for T and C, the stresses of the
     // bilinear method at the section of greatest moment
     let worst = stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");
@@ -477,7 +490,6 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     let f_live = worst.effects.m_live.max(worst.effects.m_roof) / s_live;
     let class = service::class_of(ft_total, member.mix.fc.get());
     let camber = crate::camber::camber(&member, class, ft_total, f_live);
-    let fire = fire::assess(&member, brief);
     let frequency_hz = vibration::frequency(&member);
     Analysis {
         member,
@@ -490,6 +502,40 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     }
 }
 
+/// A brief analysis kept for trying other floor live loads on the same
+/// member and span: the prestress history, the flexural strength and the
+/// release stresses at each station do not depend on the live load (the
+/// losses of Zia et al. take the sustained dead loads only), so a trial
+/// load recomputes moments, shears, service stresses, shear strength,
+/// camber and frequency, and runs the checks. The capacity envelope tries
+/// many loads per span.
+pub struct Prepared<'a> {
+    base: Analysis<'a>,
+}
+
+impl<'a> Prepared<'a> {
+    /// Prepare a candidate under a case (its live load is replaced by each trial).
+    pub fn new(cand: &Candidate<'a>, case: &'a DesignCase) -> Prepared<'a> {
+        Prepared {
+            base: analyse_with(cand, case, true),
+        }
+    }
+
+    /// The brief evaluation with the floor live load `live` instead of the
+    /// case's: equal to [`evaluate_brief`] of the case with that live load.
+    pub fn with_live(&self, live: crate::units::AreaLoad) -> Evaluation {
+        let b = &self.base;
+        let mut member = b.member.clone();
+        member.w[3] = live.get() * member.bare.width_in;
+        let stations = b
+            .stations
+            .iter()
+            .map(|s| loaded(&member, s.x_in, s.d_in, b.x_shear, s.flexure, s.release_psi))
+            .collect();
+        trimmed(finish(complete(member, stations, b.x_shear, b.fire.clone(), true)))
+    }
+}
+
 /// Evaluate every check for one candidate under one case.
 pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
     finish(analyse(cand, case))
@@ -498,7 +544,11 @@ pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
 /// The same numbers as [`evaluate`] without the checks' notes and the
 /// stations: what ranking and the envelope need, in less time and memory.
 pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    let mut ev = finish(analyse_with(cand, case, true));
+    trimmed(finish(analyse_with(cand, case, true)))
+}
+
+/// A brief evaluation as kept: no stations, no notes, no spare capacity.
+fn trimmed(mut ev: Evaluation) -> Evaluation {
     ev.stations = Vec::new();
     // a ranking holds thousands of these: no spare capacity
     ev.checks.shrink_to_fit();

@@ -464,3 +464,27 @@ fn brief_and_full_evaluations_agree() {
     }
     assert!(n > 100, "{n}");
 }
+
+/// A prepared analysis tried at other live loads gives exactly what a fresh
+/// brief evaluation at that live load gives (every demo entry and bay, four
+/// loads from none to heavy): the envelope relies on it.
+#[test]
+fn prepared_live_trials_equal_fresh_evaluations() {
+    use plankwise::checks::{Prepared, evaluate_brief};
+    use plankwise::job::{DEMO_JOB, Job};
+    use plankwise::select::{case_for, entries, topping_mix};
+    let cat = demo();
+    let job = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
+    for bay in &job.bays {
+        for e in entries(&cat, bay) {
+            let k = case_for(bay, e.topping, &topping_mix(&cat, bay));
+            let prep = Prepared::new(&e.candidate(), &k);
+            for q in [0.0, 40.0, 125.0, 400.0] {
+                let mut kq = k.clone();
+                kq.live = AreaLoad::from_unit(q, "psf");
+                let (a, b) = (prep.with_live(AreaLoad::from_unit(q, "psf")), evaluate_brief(&e.candidate(), &kq));
+                assert_eq!(a, b, "{} at {q} psf", e.label());
+            }
+        }
+    }
+}

@@ -13,7 +13,7 @@ use serde::Serialize;
 use super::{Entry, case_for, evaluation, rank_bay, topping_mix};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
-use crate::checks::{Evaluation, evaluate_brief};
+use crate::checks::{Evaluation, Prepared, evaluate_brief};
 use crate::job::{Bay, Objective};
 use crate::units::{AreaLoad, Length};
 
@@ -37,12 +37,6 @@ pub struct LoadLimit {
     pub ratio: f64,
 }
 
-fn with_live(base: &DesignCase, q_psf: f64) -> DesignCase {
-    let mut c = base.clone();
-    c.live = AreaLoad::from_unit(q_psf, "psf");
-    c
-}
-
 /// The ratios that grow with live load, at load `q`: (id, ratio).
 fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f64)> {
     ev.checks
@@ -54,9 +48,11 @@ fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f
 
 /// Largest live load on `entry` for `base` (its live load ignored).
 pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
-    let cand = entry.candidate();
     let span_ft = base.span.get() / 12.0;
-    let e0 = evaluate_brief(&cand, &with_live(base, 0.0));
+    // one analysis per span; each trial load reuses what the load leaves alone
+    let prep = Prepared::new(&entry.candidate(), base);
+    let at = |q: f64| prep.with_live(AreaLoad::from_unit(q, "psf"));
+    let e0 = at(0.0);
     if let Some(f) = e0.first_failure() {
         return LoadLimit {
             span_ft,
@@ -65,7 +61,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: f.ratio,
         };
     }
-    let e1 = evaluate_brief(&cand, &with_live(base, PROBE_PSF));
+    let e1 = at(PROBE_PSF);
     // checks whose ratio rises with load; the rest cannot limit it
     let mut driven: Vec<&'static str> = Vec::new();
     let mut best = (MAX_LIVE_PSF, "none");
@@ -88,7 +84,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
         };
     }
     let worst = |q: f64| -> (f64, &'static str) {
-        let ev = evaluate_brief(&cand, &with_live(base, q));
+        let ev = at(q);
         load_ratios(&ev, &driven)
             .into_iter()
             .fold((f64::NEG_INFINITY, ""), |a, (id, r)| if r > a.0 { (r, id) } else { a })
