@@ -46,6 +46,12 @@ fn load_ratios(ev: &Evaluation, driven: &[&'static str]) -> Vec<(&'static str, f
         .collect()
 }
 
+/// The largest ratio and its check.
+fn top(v: &[(&'static str, f64)]) -> (f64, &'static str) {
+    v.iter()
+        .fold((f64::NEG_INFINITY, ""), |a, &(id, r)| if r > a.0 { (r, id) } else { a })
+}
+
 /// Largest live load on `entry` for `base` (its live load ignored).
 pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     let span_ft = base.span.get() / 12.0;
@@ -83,13 +89,10 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: 0.0,
         };
     }
-    let worst = |q: f64| -> (f64, &'static str) {
-        let ev = at(q);
-        load_ratios(&ev, &driven)
-            .into_iter()
-            .fold((f64::NEG_INFINITY, ""), |a, (id, r)| if r > a.0 { (r, id) } else { a })
-    };
-    let (r, id) = worst(best.0);
+    let ratios = |q: f64| load_ratios(&at(q), &driven);
+    let worst = |q: f64| top(&ratios(q));
+    let est = ratios(best.0);
+    let (r, id) = top(&est);
     if (r - 1.0).abs() <= TOLERANCE {
         return LoadLimit {
             span_ft,
@@ -98,18 +101,54 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: r,
         };
     }
-    // not linear: bracket the crossing of 1 (reusing the ratios known at
-    // no live load and at the estimate)
-    let r0 = load_ratios(&e0, &driven)
-        .into_iter()
-        .map(|(_, r)| r)
-        .fold(f64::NEG_INFINITY, f64::max);
-    let (mut lo, mut hi, mut flo, mut fhi) = if r > 1.0 {
-        (0.0, best.0, r0 - 1.0, r - 1.0)
+    // a second estimate: each check's line through the probe and the first
+    // estimate, two loaded points, so both lie past a change of governing
+    // combination (1.4D to 1.2D + 1.6L) that the line from no load crosses
+    let mut known = vec![(0.0, top(&load_ratios(&e0, &driven))), (best.0, (r, id))];
+    if (best.0 - PROBE_PSF).abs() > 1e-6 {
+        let mut q2 = MAX_LIVE_PSF;
+        for (&(_, a), &(_, b)) in load_ratios(&e1, &driven).iter().zip(&est) {
+            let slope = (b - a) / (best.0 - PROBE_PSF);
+            if slope > 1e-15 {
+                let q = PROBE_PSF + (1.0 - a) / slope;
+                if q > 0.0 && q < q2 {
+                    q2 = q;
+                }
+            }
+        }
+        if q2 < MAX_LIVE_PSF {
+            let (r2, id2) = worst(q2);
+            if (r2 - 1.0).abs() <= TOLERANCE {
+                return LoadLimit {
+                    span_ft,
+                    live_psf: Some(q2),
+                    governing: id2.to_string(),
+                    ratio: r2,
+                };
+            }
+            known.push((q2, (r2, id2)));
+        }
+    }
+    // not linear: bracket the crossing of 1 with the points known — the
+    // highest load within the limit and the lowest one beyond it above that
+    let (lo0, (rl, idl)) = known
+        .iter()
+        .copied()
+        .filter(|p| p.1.0 <= 1.0)
+        .fold((0.0, known[0].1), |a, p| if p.0 >= a.0 { p } else { a });
+    let beyond = known
+        .iter()
+        .copied()
+        .filter(|p| p.1.0 > 1.0 && p.0 > lo0)
+        .min_by(|a, b| a.0.total_cmp(&b.0));
+    // the ratio at the answer so far (lo)
+    let (r, id) = (rl, idl);
+    let (mut lo, mut hi, mut flo, mut fhi) = if let Some((qh, (rh, _))) = beyond {
+        (lo0, qh, rl - 1.0, rh - 1.0)
     } else {
-        let (mut lo, mut flo) = (best.0, r - 1.0);
-        let mut hi = best.0;
-        let mut fhi = r - 1.0;
+        let (mut lo, mut flo) = (lo0, rl - 1.0);
+        let mut hi = lo0;
+        let mut fhi = rl - 1.0;
         while fhi < 0.0 && hi < MAX_LIVE_PSF {
             (lo, flo) = (hi, fhi);
             hi = (hi * 2.0).clamp(1.0, MAX_LIVE_PSF);
