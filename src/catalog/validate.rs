@@ -527,16 +527,20 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
                     let Some(t) = e.get_ref().as_table() else { continue };
                     let name = key_str(t, "id").map_or(format!("section {}", i + 1), |id| format!("section '{id}'"));
                     // split off the patterns so each is parsed on its own
-                    let mut body = t.clone();
-                    let pats = body
-                        .iter()
-                        .find(|(k, _)| k.get_ref() == "pattern")
-                        .map(|(k, v)| (k.clone(), v.clone()));
+                    // (the section's own keys are copied, the patterns are not)
+                    let mut body = DeTable::new();
+                    let mut pats = None;
+                    for (k, v) in t.iter() {
+                        if k.get_ref() == "pattern" {
+                            pats = Some(v);
+                        } else {
+                            body.insert(k.clone(), v.clone());
+                        }
+                    }
                     let mut patterns = Vec::new();
                     let mut pattern_failures = 0;
-                    if let Some((pk, pv)) = pats {
-                        body.remove(&pk);
-                        for (j, pe) in tables(&mut cx.rep, &pv, &format!("{name} / pattern")).into_iter().enumerate() {
+                    if let Some(pv) = pats {
+                        for (j, pe) in tables(&mut cx.rep, pv, &format!("{name} / pattern")).into_iter().enumerate() {
                             let pname = pe
                                 .get_ref()
                                 .as_table()
