@@ -110,6 +110,49 @@ proptest! {
         prop_assert!(!text.contains("null,\"ratio\"") && !text.contains("NaN"));
     }
 
+    /// The shortcuts equal the full route, for any entry and case: the brief
+    /// evaluation (left half of a symmetric member, no notes) gives the full
+    /// evaluation's numbers, and a prepared analysis tried at another live
+    /// load gives a fresh evaluation at that load — with and without a line
+    /// load, which turns the mirrored half off.
+    #[test]
+    fn shortcuts_agree_with_the_full_route(
+        entry in 0usize..33,
+        span in 6.0f64..90.0,
+        sdl in 0.0f64..150.0,
+        live in 0.0f64..400.0,
+        other_live in 0.0f64..800.0,
+        topped in any::<bool>(),
+        line in proptest::option::of((0.0f64..3.0, 0.0f64..1.0)),
+    ) {
+        let cat = demo();
+        let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
+        let cand = Candidate { section: s, pattern: p, mix: s.mix(&cat) };
+        let mut k = DesignCase::new(Length::from_unit(span, "ft"));
+        k.sdl = AreaLoad::from_unit(sdl, "psf");
+        k.live = AreaLoad::from_unit(live, "psf");
+        if topped {
+            k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() });
+        }
+        if let Some((w, at)) = line {
+            k.line_loads.push(plankwise::case::LineLoadSpec {
+                w: plankwise::units::LineLoad::from_unit(w, "klf"),
+                at: Length::from_unit(span * at, "ft"),
+                kind: plankwise::case::LoadKind::Dead,
+            });
+        }
+        let (full, brief) = (evaluate(&cand, &k), plankwise::checks::evaluate_brief(&cand, &k));
+        prop_assert_eq!(full.checks.len(), brief.checks.len());
+        for (a, b) in full.checks.iter().zip(&brief.checks) {
+            prop_assert_eq!((a.info.id, a.demand, a.capacity, a.ratio, a.pass), (b.info.id, b.demand, b.capacity, b.ratio, b.pass));
+        }
+        prop_assert_eq!((full.viable, full.governing), (brief.viable, brief.governing));
+        let prep = plankwise::checks::Prepared::new(&cand, &k);
+        let mut k2 = k.clone();
+        k2.live = AreaLoad::from_unit(other_live, "psf");
+        prop_assert_eq!(prep.with_live(k2.live), plankwise::checks::evaluate_brief(&cand, &k2));
+    }
+
     /// The loaders never panic on a damaged catalog or job: every result is
     /// a catalog or a list of located problems. Seeds: the demo files and
     /// every file of the broken-input corpus.
