@@ -104,7 +104,11 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     // a second estimate: each check's line through the probe and the first
     // estimate, two loaded points, so both lie past a change of governing
     // combination (1.4D to 1.2D + 1.6L) that the line from no load crosses
-    let mut known = vec![(0.0, top(&load_ratios(&e0, &driven))), (best.0, (r, id))];
+    let mut known = vec![
+        (0.0, top(&load_ratios(&e0, &driven))),
+        (PROBE_PSF, top(&load_ratios(&e1, &driven))),
+        (best.0, (r, id)),
+    ];
     if (best.0 - PROBE_PSF).abs() > 1e-6 {
         let mut q2 = MAX_LIVE_PSF;
         for (&(_, a), &(_, b)) in load_ratios(&e1, &driven).iter().zip(&est) {
@@ -169,7 +173,13 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     // secant through the last two points below the limit (exact where the
     // ratio is straight up to a jump), else regula falsi (Illinois), and
     // every third step a bisection
-    let mut below: Option<(f64, f64)> = None;
+    // seeded with the next known point below the limit, so a ratio that is
+    // straight up to a jump (a waiver ending) is solved by the first secant
+    let mut below: Option<(f64, f64)> = known
+        .iter()
+        .filter(|p| p.1.0 <= 1.0 && p.0 < lo)
+        .max_by(|a, b| a.0.total_cmp(&b.0))
+        .map(|p| (p.0, p.1.0 - 1.0));
     // the true ratio at lo (flo is halved by the Illinois step)
     let mut at_lo = flo;
     let mut last = (r, id);
