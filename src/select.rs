@@ -236,24 +236,43 @@ pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> 
 }
 
 /// Evaluate entries on every core (scoped threads; evaluation is pure), in
-/// their original order.
+/// their original order. The threads take blocks of entries in turn, so a
+/// thread that drew cheap members does not sit idle.
 fn evaluate_all<'c>(cat: &Catalog, bay: &Bay, list: Vec<Entry<'c>>) -> Vec<Ranked<'c>> {
+    const BLOCK: usize = 128;
     let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
     if threads < 2 || list.len() < 64 {
         return list.into_iter().map(|e| evaluate_entry(cat, bay, e)).collect();
     }
-    let chunk = list.len().div_ceil(threads);
-    std::thread::scope(|s| {
-        let handles: Vec<_> = list
-            .chunks(chunk)
-            .map(|part| s.spawn(move || part.iter().map(|&e| evaluate_entry(cat, bay, e)).collect::<Vec<_>>()))
+    let next = std::sync::atomic::AtomicUsize::new(0);
+    let blocks = list.len().div_ceil(BLOCK);
+    let mut done: Vec<(usize, Vec<Ranked<'c>>)> = std::thread::scope(|s| {
+        let handles: Vec<_> = (0..threads)
+            .map(|_| {
+                s.spawn(|| {
+                    let mut mine = Vec::new();
+                    loop {
+                        let b = next.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+                        if b >= blocks {
+                            break mine;
+                        }
+                        let part = &list[b * BLOCK..((b + 1) * BLOCK).min(list.len())];
+                        mine.push((b, part.iter().map(|&e| evaluate_entry(cat, bay, e)).collect::<Vec<_>>()));
+                    }
+                })
+            })
             .collect();
-        let mut out = Vec::with_capacity(list.len());
-        for h in handles {
-            out.extend(h.join().expect("an evaluation thread panicked"));
-        }
-        out
-    })
+        handles
+            .into_iter()
+            .flat_map(|h| h.join().expect("an evaluation thread panicked"))
+            .collect()
+    });
+    done.sort_by_key(|(b, _)| *b);
+    let mut out = Vec::with_capacity(list.len());
+    for (_, part) in done {
+        out.extend(part);
+    }
+    out
 }
 
 /// Rank every entry for a bay with its own objective (or `objective`).
