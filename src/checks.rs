@@ -524,6 +524,23 @@ impl<'a> Prepared<'a> {
     /// The brief evaluation with the floor live load `live` instead of the
     /// case's: equal to [`evaluate_brief`] of the case with that live load.
     pub fn with_live(&self, live: crate::units::AreaLoad) -> Evaluation {
+        trimmed(finish(self.analysis(live)))
+    }
+
+    /// Only the ratios of the checks `ids` (in registry order) at live load
+    /// `live`: what the envelope's later trials read, without running the
+    /// checks the load cannot change.
+    pub fn ratios_with_live(&self, live: crate::units::AreaLoad, ids: &[&'static str]) -> Vec<(&'static str, f64)> {
+        let an = self.analysis(live);
+        REGISTRY
+            .iter()
+            .filter(|c| ids.contains(&c.info.id))
+            .filter_map(|c| (c.run)(&an))
+            .map(|r| (r.info.id, r.ratio))
+            .collect()
+    }
+
+    fn analysis(&self, live: crate::units::AreaLoad) -> Analysis<'a> {
         let b = &self.base;
         let mut member = b.member.clone();
         member.w[3] = live.get() * member.bare.width_in;
@@ -532,7 +549,7 @@ impl<'a> Prepared<'a> {
             .iter()
             .map(|s| loaded(&member, s.x_in, s.d_in, b.x_shear, s.flexure, s.release_psi))
             .collect();
-        trimmed(finish(complete(member, stations, b.x_shear, b.fire.clone(), true)))
+        complete(member, stations, b.x_shear, b.fire.clone(), true)
     }
 }
 

@@ -13,7 +13,7 @@ use crate::section::{Composite, Properties};
 
 /// One row of strands as the analysis sees it.
 #[derive(Debug, Clone, PartialEq)]
-pub struct Layer {
+pub struct Layer<'a> {
     /// Strand area of the row, in².
     pub area: f64,
     /// Height at the hold-downs (or everywhere when straight), in.
@@ -22,8 +22,8 @@ pub struct Layer {
     pub y_end: f64,
     /// Debonded length at each end, in (0 when fully bonded).
     pub debond: f64,
-    /// Horizontal positions, in.
-    pub x: Vec<f64>,
+    /// Horizontal positions, in (the catalog's own list).
+    pub x: &'a [f64],
 }
 
 /// The prestress history, psi.
@@ -69,7 +69,7 @@ pub struct Member<'a> {
     /// Overall depth with topping, in.
     pub h_total: f64,
     /// Strand layers.
-    pub layers: Vec<Layer>,
+    pub layers: Vec<Layer<'a>>,
     /// Strand kind.
     pub strand: &'a StrandKind,
     /// Total strand area, in².
@@ -101,7 +101,7 @@ impl<'a> Member<'a> {
         });
         let h_total = comp.map_or(bare.depth_in, |c| c.depth_in);
         let area = pattern.strand.area.get();
-        let layers: Vec<Layer> = pattern
+        let layers: Vec<Layer<'a>> = pattern
             .rows
             .iter()
             .map(|r| Layer {
@@ -109,7 +109,7 @@ impl<'a> Member<'a> {
                 y_mid: r.height.get(),
                 y_end: r.end_height.unwrap_or(r.height).get(),
                 debond: r.debond.map_or(0.0, |d| d.get()),
-                x: r.x.clone(),
+                x: &r.x,
             })
             .collect();
         let aps: f64 = layers.iter().map(|l| l.area).sum();

@@ -484,6 +484,14 @@ fn prepared_live_trials_equal_fresh_evaluations() {
                 kq.live = AreaLoad::from_unit(q, "psf");
                 let (a, b) = (prep.with_live(AreaLoad::from_unit(q, "psf")), evaluate_brief(&e.candidate(), &kq));
                 assert_eq!(a, b, "{} at {q} psf", e.label());
+                let ids: Vec<&'static str> = b.checks.iter().map(|c| c.info.id).filter(|id| id.len() % 2 == 0).collect();
+                let want: Vec<(&str, f64)> = b
+                    .checks
+                    .iter()
+                    .filter(|c| ids.contains(&c.info.id))
+                    .map(|c| (c.info.id, c.ratio))
+                    .collect();
+                assert_eq!(prep.ratios_with_live(AreaLoad::from_unit(q, "psf"), &ids), want);
             }
         }
     }

@@ -89,7 +89,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: 0.0,
         };
     }
-    let ratios = |q: f64| load_ratios(&at(q), &driven);
+    let ratios = |q: f64| prep.ratios_with_live(AreaLoad::from_unit(q, "psf"), &driven);
     let worst = |q: f64| top(&ratios(q));
     let est = ratios(best.0);
     let (r, id) = top(&est);
