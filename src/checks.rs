@@ -521,6 +521,11 @@ impl<'a> Prepared<'a> {
         }
     }
 
+    /// The brief evaluation at the case's own loads (as [`evaluate_brief`]).
+    pub fn evaluation(&self) -> Evaluation {
+        trimmed(results(&self.base))
+    }
+
     /// The brief evaluation with the floor live load `live` instead of the
     /// case's: equal to [`evaluate_brief`] of the case with that live load.
     pub fn with_live(&self, live: crate::units::AreaLoad) -> Evaluation {
@@ -576,8 +581,15 @@ fn trimmed(mut ev: Evaluation) -> Evaluation {
 }
 
 fn finish(an: Analysis) -> Evaluation {
+    let mut ev = results(&an);
+    ev.stations = an.stations;
+    ev
+}
+
+/// Every check's result on an analysis, without its stations.
+fn results(an: &Analysis) -> Evaluation {
     let mut checks: Vec<CheckResult> = Vec::with_capacity(REGISTRY.len());
-    checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(&an)));
+    checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(an)));
     // jacking and spacing are properties of the pattern, not of the bay:
     // they pass or fail, but do not govern
     let governing = checks
@@ -590,14 +602,14 @@ fn finish(an: Analysis) -> Evaluation {
     Evaluation {
         governing,
         viable,
-        service_class: service::class_reached(&an),
+        service_class: service::class_reached(an),
         history: an.member.history,
         transfer_length_in: an.member.ltr,
         member_length_in: an.member.lm,
         camber: an.camber,
-        fire: an.fire,
+        fire: an.fire.clone(),
         frequency_hz: an.frequency_hz,
-        stations: an.stations,
+        stations: Vec::new(),
         checks,
     }
 }

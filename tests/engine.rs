@@ -479,6 +479,7 @@ fn prepared_live_trials_equal_fresh_evaluations() {
         for e in entries(&cat, bay) {
             let k = case_for(bay, e.topping, &topping_mix(&cat, bay));
             let prep = Prepared::new(&e.candidate(), &k);
+            assert_eq!(prep.evaluation(), evaluate_brief(&e.candidate(), &k), "{}", e.label());
             for q in [0.0, 40.0, 125.0, 400.0] {
                 let mut kq = k.clone();
                 kq.live = AreaLoad::from_unit(q, "psf");

@@ -56,9 +56,11 @@ fn top(v: &[(&'static str, f64)]) -> (f64, &'static str) {
 pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     let span_ft = base.span.get() / 12.0;
     // one analysis per span; each trial load reuses what the load leaves alone
-    let prep = Prepared::new(&entry.candidate(), base);
+    let mut unloaded = base.clone();
+    unloaded.live = AreaLoad::from_unit(0.0, "psf");
+    let prep = Prepared::new(&entry.candidate(), &unloaded);
     let at = |q: f64| prep.with_live(AreaLoad::from_unit(q, "psf"));
-    let e0 = at(0.0);
+    let e0 = prep.evaluation();
     if let Some(f) = e0.first_failure() {
         return LoadLimit {
             span_ft,
