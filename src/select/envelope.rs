@@ -243,22 +243,32 @@ pub fn envelope(entry: &Entry, base: &DesignCase, spans_ft: &[f64]) -> Vec<LoadL
         c.span = Length::from_unit(s, "ft");
         max_live(entry, &c)
     };
-    // spans are independent: split them over the cores (scoped threads)
+    // spans are independent: split them over the cores (scoped threads),
+    // interleaved, since short spans take more trials than long ones that
+    // fail with no live load at all
     let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
     if threads < 2 || spans_ft.len() < 8 {
         return spans_ft.iter().map(|&s| at(s)).collect();
     }
-    let chunk = spans_ft.len().div_ceil(threads);
-    std::thread::scope(|sc| {
-        let handles: Vec<_> = spans_ft
-            .chunks(chunk)
-            .map(|part| sc.spawn(move || part.iter().map(|&s| at(s)).collect::<Vec<_>>()))
+    let mut out: Vec<(usize, LoadLimit)> = std::thread::scope(|sc| {
+        let handles: Vec<_> = (0..threads)
+            .map(|t| {
+                let at = &at;
+                sc.spawn(move || {
+                    (t..spans_ft.len())
+                        .step_by(threads)
+                        .map(|i| (i, at(spans_ft[i])))
+                        .collect::<Vec<_>>()
+                })
+            })
             .collect();
         handles
             .into_iter()
             .flat_map(|h| h.join().expect("an envelope thread panicked"))
             .collect()
-    })
+    });
+    out.sort_by_key(|(i, _)| *i);
+    out.into_iter().map(|(_, l)| l).collect()
 }
 
 /// The longest span (ft) the entry carries under the case's loads: the
