@@ -26,7 +26,7 @@ use serde::Serialize;
 use crate::case::{DesignCase, ServiceClass, factored};
 use crate::catalog::{Pattern, Section};
 use crate::material::Mix;
-use crate::member::{History, Member};
+use crate::member::{Effective, History, Member};
 
 /// Families of checks, in the order a failure is reported (most important first).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
@@ -244,6 +244,8 @@ pub struct Station {
     pub service: service::AtStation,
     /// Shear strength, when the station is at or beyond the critical section.
     pub shear: Option<shear::AtStation>,
+    /// Effective prestress here.
+    pub prestress: Effective,
 }
 
 /// Everything the checks read: the member model and the stations.
@@ -427,8 +429,9 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
     let mut memo = flexure::Memo::new(&member);
     let mut at = |x: f64| {
         let d = member.end_distance(x);
-        let flex = flexure::at(&member, d, &mut memo);
-        loaded(&member, x, d, x_shear, flex, release::at(&member, d))
+        let pre = member.effective_at(d);
+        let flex = flexure::at(&member, d, pre, &mut memo);
+        loaded(&member, x, d, x_shear, pre, flex, release::at(&member, d))
     };
     let xs = stations(&member, x_shear);
     let stations = if symmetric(&member) {
@@ -461,10 +464,10 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
 /// The state at station `x` (`d` from the nearer end) under the member's
 /// loads, given what does not depend on them: flexural strength and the
 /// release stresses.
-fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
+fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
     let eff = member.effects(x);
     let (mu, mu_combo, vu, vu_combo) = factored(&eff);
-    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, &eff, mu, vu));
+    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, pre, &eff, mu, vu));
     Station {
         x_in: x,
         d_in: d,
@@ -475,7 +478,8 @@ fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, flexure: flexure::AtSta
         vu_combo,
         flexure,
         release_psi,
-        service: service::at(member, d, &eff),
+        service: service::at(member, pre, &eff),
+        prestress: pre,
         shear,
     }
 }
@@ -552,7 +556,7 @@ impl<'a> Prepared<'a> {
         let stations = b
             .stations
             .iter()
-            .map(|s| loaded(&member, s.x_in, s.d_in, b.x_shear, s.flexure, s.release_psi))
+            .map(|s| loaded(&member, s.x_in, s.d_in, b.x_shear, s.prestress, s.flexure, s.release_psi))
             .collect();
         complete(member, stations, b.x_shear, b.fire.clone(), true)
     }

@@ -47,6 +47,19 @@ pub struct History {
     pub lump_sum: bool,
 }
 
+/// The effective prestress force at a station and the height it acts at.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Effective {
+    /// Force transferred over ℓtr (stresses, flexure), lbf.
+    pub pe: f64,
+    /// Its height, in.
+    pub y: f64,
+    /// Force transferred over 50 db (shear, ACI 318-19 §22.5.9.1), lbf.
+    pub pe_shear: f64,
+    /// Its height, in.
+    pub y_shear: f64,
+}
+
 /// The member model.
 #[derive(Debug, Clone)]
 pub struct Member<'a> {
@@ -190,6 +203,14 @@ impl<'a> Member<'a> {
             py += pl * self.layer_y(layer, d);
         }
         if p > 0.0 { (p, py / p) } else { (0.0, self.pattern.centroid()) }
+    }
+
+    /// The effective prestress at `d`, for stresses and flexure (over ℓtr)
+    /// and for shear (over 50 db): what every station reads, found once.
+    pub fn effective_at(&self, d: f64) -> Effective {
+        let (pe, y) = self.force_at(d, self.history.fse_psi, self.ltr);
+        let (pe_shear, y_shear) = self.force_at(d, self.history.fse_psi, self.ltr_shear);
+        Effective { pe, y, pe_shear, y_shear }
     }
 
     /// Vertical component of the effective prestress at `d` (draped layers), lbf.

@@ -18,7 +18,7 @@ use serde::Serialize;
 
 use super::{Analysis, CheckInfo, CheckResult, Group, kipft};
 use crate::material::beta1;
-use crate::member::Member;
+use crate::member::{Effective, Member};
 use crate::prestress::{developed_stress, development_length};
 use crate::strength::{Concrete, Steel, SteelLayer, fps_approx, mn_fixed_stress, strain_compatibility};
 
@@ -70,16 +70,16 @@ fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
 /// stresses that set ℓd (None: no development limit).
 fn layers<'m>(m: &'m Member, d: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>> {
     let mut out = Vec::with_capacity(m.layers.len() + m.pattern.bars.len());
-    layers_into(m, d, full, &mut out);
+    layers_into(m, d, m.effective_at(d), full, &mut out);
     out
 }
 
 /// [`layers`] into a buffer (a station's flexure reuses one).
-fn layers_into<'m>(m: &'m Member, d: f64, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
+fn layers_into<'m>(m: &'m Member, d: f64, pre: Effective, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
     out.clear();
     let fse = m.history.fse_psi;
     let ec = m.mix.ec().get();
-    let (pe, y) = m.force_at(d, fse, m.ltr);
+    let (pe, y) = (pre.pe, pre.y);
     let e = m.bare.yb_in - y;
     out.extend(m.layers.iter().enumerate().map(|(i, layer)| {
         let yi = m.layer_y(layer, d);
@@ -145,7 +145,12 @@ fn phi_development(m: &Member, d: f64, full: &[f64]) -> (f64, bool) {
 /// reference sheet §4.5, from memory, high confidence), Mnc the moment of
 /// self-weight and topping at midspan.
 pub fn mcr(m: &Member, d: f64) -> f64 {
-    let (pe, y) = m.force_at(d, m.history.fse_psi, m.ltr);
+    mcr_with(m, m.effective_at(d))
+}
+
+/// [`mcr`] with the effective prestress at the station already found.
+fn mcr_with(m: &Member, pre: Effective) -> f64 {
+    let (pe, y) = (pre.pe, pre.y);
     let e = m.bare.yb_in - y;
     let fr = m.mix.fr().get();
     let pre = pe / m.bare.area_in2 + pe * e / m.bare.sb_in3;
@@ -213,9 +218,9 @@ fn same(a: &[SteelLayer], b: &[SteelLayer]) -> bool {
 }
 
 /// Flexure at distance `d` from the nearer end.
-pub fn at<'m>(m: &'m Member, d: f64, memo: &mut Memo<'m>) -> AtStation {
+pub fn at<'m>(m: &'m Member, d: f64, pre: Effective, memo: &mut Memo<'m>) -> AtStation {
     let mut ls = std::mem::take(&mut memo.scratch);
-    layers_into(m, d, Some(&memo.full), &mut ls);
+    layers_into(m, d, pre, Some(&memo.full), &mut ls);
     let i = match memo.entries.iter().position(|(x, _)| same(x, &ls)) {
         Some(i) => i,
         None => {
@@ -235,7 +240,7 @@ pub fn at<'m>(m: &'m Member, d: f64, memo: &mut Memo<'m>) -> AtStation {
         eps_t: f.eps_t,
         c_in: f.c,
         developed,
-        mcr_lbin: mcr(m, d),
+        mcr_lbin: mcr_with(m, pre),
     }
 }
 

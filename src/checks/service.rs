@@ -15,7 +15,7 @@ use serde::Serialize;
 
 use super::{Analysis, CheckInfo, CheckResult, Group};
 use crate::case::{Effects, ServiceClass, service_moments};
-use crate::member::Member;
+use crate::member::{Effective, Member};
 
 /// Registry entry: tension (class).
 pub const TENSION: CheckInfo = CheckInfo {
@@ -66,8 +66,8 @@ pub struct AtStation {
 }
 
 /// Service stresses at distance `d` from the end.
-pub fn at(m: &Member, d: f64, eff: &Effects) -> AtStation {
-    let (pe, y) = m.force_at(d, m.history.fse_psi, m.ltr);
+pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
+    let (pe, y) = (pre.pe, pre.y);
     let e = m.bare.yb_in - y;
     let b = m.bare;
     let pre_top = pe / b.area_in2 - pe * e / b.st_in3;

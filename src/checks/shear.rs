@@ -18,7 +18,7 @@ use serde::Serialize;
 
 use super::{Analysis, CheckInfo, CheckResult, Group, kip};
 use crate::case::Effects;
-use crate::member::Member;
+use crate::member::{Effective, Member};
 use crate::section::Family;
 
 /// Registry entry: Vu ≤ φVc.
@@ -56,12 +56,12 @@ const PHI: f64 = 0.75;
 
 /// Shear strength at distance `d` from the end, with the station's effects
 /// and factored Mu, Vu.
-pub fn at(m: &Member, d: f64, eff: &Effects, mu: f64, vu: f64) -> AtStation {
+pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects, mu: f64, vu: f64) -> AtStation {
     let lam = m.mix.aggregate.lambda();
     let rt = m.mix.fc.get().sqrt().min(100.0);
     let b = m.bare;
     let bw = b.web_width_min_in;
-    let (pe, y) = m.force_at(d, m.history.fse_psi, m.ltr_shear);
+    let (pe, y) = (pre.pe_shear, pre.y_shear);
     let dp = (m.h_total - y).max(0.8 * m.h_total);
     let e = b.yb_in - y;
     let fpe = pe / b.area_in2 + pe * e / b.sb_in3;
