@@ -313,6 +313,18 @@ impl Evaluation {
     pub fn check(&self, id: &str) -> Option<&CheckResult> {
         self.checks.iter().find(|c| c.info.id == id)
     }
+    /// The verdict (notes dropped: a ranking shows numbers).
+    pub fn verdict(&self) -> Verdict {
+        let bare = |c: &CheckResult| CheckResult {
+            note: String::new(),
+            ..c.clone()
+        };
+        Verdict {
+            viable: self.viable,
+            governing: bare(self.governing()),
+            first_failure: self.first_failure().map(bare),
+        }
+    }
 }
 
 /// What a ranking keeps of an evaluation: whether every check passes, the
@@ -334,21 +346,6 @@ impl Verdict {
     /// The first failing check in the order of importance, if any.
     pub fn first_failure(&self) -> Option<&CheckResult> {
         self.first_failure.as_ref()
-    }
-}
-
-impl Evaluation {
-    /// The verdict (notes dropped: a ranking shows numbers).
-    pub fn verdict(&self) -> Verdict {
-        let bare = |c: &CheckResult| CheckResult {
-            note: String::new(),
-            ..c.clone()
-        };
-        Verdict {
-            viable: self.viable,
-            governing: bare(self.governing()),
-            first_failure: self.first_failure().map(bare),
-        }
     }
 }
 

@@ -235,18 +235,22 @@ pub fn evaluate_entry<'c>(cat: &Catalog, bay: &Bay, e: Entry<'c>) -> Ranked<'c> 
     }
 }
 
-/// Evaluate entries on every core (scoped threads; evaluation is pure), in
-/// their original order. The threads take blocks of entries in turn, so a
-/// thread that drew cheap members does not sit idle.
+/// Evaluate entries on every core (evaluation is pure), in their original order.
 fn evaluate_all<'c>(cat: &Catalog, bay: &Bay, list: Vec<Entry<'c>>) -> Vec<Ranked<'c>> {
-    const BLOCK: usize = 128;
+    par_map(&list, 64, 128, |&e| evaluate_entry(cat, bay, e))
+}
+
+/// `f` of every item, in order, on every core (scoped threads) once there
+/// are `min` items or more. The threads take blocks of `block` items in
+/// turn, so a thread that drew cheap items does not sit idle.
+pub(crate) fn par_map<T: Sync, R: Send>(items: &[T], min: usize, block: usize, f: impl Fn(&T) -> R + Sync) -> Vec<R> {
     let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
-    if threads < 2 || list.len() < 64 {
-        return list.into_iter().map(|e| evaluate_entry(cat, bay, e)).collect();
+    if threads < 2 || items.len() < min {
+        return items.iter().map(f).collect();
     }
     let next = std::sync::atomic::AtomicUsize::new(0);
-    let blocks = list.len().div_ceil(BLOCK);
-    let mut done: Vec<(usize, Vec<Ranked<'c>>)> = std::thread::scope(|s| {
+    let blocks = items.len().div_ceil(block);
+    let mut done: Vec<(usize, Vec<R>)> = std::thread::scope(|s| {
         let handles: Vec<_> = (0..threads)
             .map(|_| {
                 s.spawn(|| {
@@ -256,23 +260,18 @@ fn evaluate_all<'c>(cat: &Catalog, bay: &Bay, list: Vec<Entry<'c>>) -> Vec<Ranke
                         if b >= blocks {
                             break mine;
                         }
-                        let part = &list[b * BLOCK..((b + 1) * BLOCK).min(list.len())];
-                        mine.push((b, part.iter().map(|&e| evaluate_entry(cat, bay, e)).collect::<Vec<_>>()));
+                        mine.push((b, items[b * block..((b + 1) * block).min(items.len())].iter().map(&f).collect()));
                     }
                 })
             })
             .collect();
         handles
             .into_iter()
-            .flat_map(|h| h.join().expect("an evaluation thread panicked"))
+            .flat_map(|h| h.join().expect("a worker thread panicked"))
             .collect()
     });
     done.sort_by_key(|(b, _)| *b);
-    let mut out = Vec::with_capacity(list.len());
-    for (_, part) in done {
-        out.extend(part);
-    }
-    out
+    done.into_iter().flat_map(|(_, part)| part).collect()
 }
 
 /// Rank every entry for a bay with its own objective (or `objective`).

@@ -28,6 +28,29 @@ fn demo() -> Catalog {
     Catalog::from_str(DEMO_US, "demo-us.toml").unwrap()
 }
 
+/// A case of the given span (ft), SDL and live (psf), optionally with a
+/// 2 in topping of the demo topping mix and a dead line load (klf, at a
+/// fraction of the span).
+fn case(cat: &Catalog, span: f64, sdl: f64, live: f64, topped: bool, line: Option<(f64, f64)>) -> DesignCase {
+    let mut k = DesignCase::new(Length::from_unit(span, "ft"));
+    k.sdl = AreaLoad::from_unit(sdl, "psf");
+    k.live = AreaLoad::from_unit(live, "psf");
+    if topped {
+        k.topping = Some(Topping {
+            thickness: Length::new(2.0),
+            mix: cat.mixes[3].clone(),
+        });
+    }
+    if let Some((w, at)) = line {
+        k.line_loads.push(plankwise::case::LineLoadSpec {
+            w: plankwise::units::LineLoad::from_unit(w, "klf"),
+            at: Length::from_unit(span * at, "ft"),
+            kind: plankwise::case::LoadKind::Dead,
+        });
+    }
+    k
+}
+
 fn all_finite(ev: &plankwise::checks::Evaluation) -> Result<(), String> {
     for c in &ev.checks {
         for (what, v) in [("demand", c.demand), ("capacity", c.capacity), ("ratio", c.ratio)] {
@@ -87,22 +110,10 @@ proptest! {
     ) {
         let cat = demo();
         let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
-        let mut k = DesignCase::new(Length::from_unit(span, "ft"));
-        k.sdl = AreaLoad::from_unit(sdl, "psf");
-        k.live = AreaLoad::from_unit(live, "psf");
+        let mut k = case(&cat, span, sdl, live, topped, line);
         k.snow = AreaLoad::from_unit(snow, "psf");
         k.class_allowed = [ServiceClass::U, ServiceClass::T, ServiceClass::C][class];
         k.fire_rating = fire.map(|i| plankwise::fire::RATINGS[i]);
-        if topped {
-            k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() });
-        }
-        if let Some((w, at)) = line {
-            k.line_loads.push(plankwise::case::LineLoadSpec {
-                w: plankwise::units::LineLoad::from_unit(w, "klf"),
-                at: Length::from_unit(span * at, "ft"),
-                kind: plankwise::case::LoadKind::Dead,
-            });
-        }
         let ev = evaluate(&Candidate { section: s, pattern: p, mix: s.mix(&cat) }, &k);
         prop_assert!(all_finite(&ev).is_ok(), "{:?}", all_finite(&ev));
         let json = plankwise::report::check::to_json(&Candidate { section: s, pattern: p, mix: s.mix(&cat) }, &k, &ev);
@@ -128,19 +139,7 @@ proptest! {
         let cat = demo();
         let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
         let cand = Candidate { section: s, pattern: p, mix: s.mix(&cat) };
-        let mut k = DesignCase::new(Length::from_unit(span, "ft"));
-        k.sdl = AreaLoad::from_unit(sdl, "psf");
-        k.live = AreaLoad::from_unit(live, "psf");
-        if topped {
-            k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() });
-        }
-        if let Some((w, at)) = line {
-            k.line_loads.push(plankwise::case::LineLoadSpec {
-                w: plankwise::units::LineLoad::from_unit(w, "klf"),
-                at: Length::from_unit(span * at, "ft"),
-                kind: plankwise::case::LoadKind::Dead,
-            });
-        }
+        let k = case(&cat, span, sdl, live, topped, line);
         let (full, brief) = (evaluate(&cand, &k), plankwise::checks::evaluate_brief(&cand, &k));
         prop_assert_eq!(full.checks.len(), brief.checks.len());
         for (a, b) in full.checks.iter().zip(&brief.checks) {

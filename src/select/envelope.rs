@@ -106,14 +106,15 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     // a second estimate: each check's line through the probe and the first
     // estimate, two loaded points, so both lie past a change of governing
     // combination (1.4D to 1.2D + 1.6L) that the line from no load crosses
+    let at_probe = load_ratios(&e1, &driven);
     let mut known = vec![
         (0.0, top(&load_ratios(&e0, &driven))),
-        (PROBE_PSF, top(&load_ratios(&e1, &driven))),
+        (PROBE_PSF, top(&at_probe)),
         (best.0, (r, id)),
     ];
     if (best.0 - PROBE_PSF).abs() > 1e-6 {
         let mut q2 = MAX_LIVE_PSF;
-        for (&(_, a), &(_, b)) in load_ratios(&e1, &driven).iter().zip(&est) {
+        for (&(_, a), &(_, b)) in at_probe.iter().zip(&est) {
             let slope = (b - a) / (best.0 - PROBE_PSF);
             if slope > 1e-15 {
                 let q = PROBE_PSF + (1.0 - a) / slope;
@@ -243,32 +244,9 @@ pub fn envelope(entry: &Entry, base: &DesignCase, spans_ft: &[f64]) -> Vec<LoadL
         c.span = Length::from_unit(s, "ft");
         max_live(entry, &c)
     };
-    // spans are independent: split them over the cores (scoped threads),
-    // interleaved, since short spans take more trials than long ones that
-    // fail with no live load at all
-    let threads = std::thread::available_parallelism().map_or(1, |n| n.get()).min(8);
-    if threads < 2 || spans_ft.len() < 8 {
-        return spans_ft.iter().map(|&s| at(s)).collect();
-    }
-    let mut out: Vec<(usize, LoadLimit)> = std::thread::scope(|sc| {
-        let handles: Vec<_> = (0..threads)
-            .map(|t| {
-                let at = &at;
-                sc.spawn(move || {
-                    (t..spans_ft.len())
-                        .step_by(threads)
-                        .map(|i| (i, at(spans_ft[i])))
-                        .collect::<Vec<_>>()
-                })
-            })
-            .collect();
-        handles
-            .into_iter()
-            .flat_map(|h| h.join().expect("an envelope thread panicked"))
-            .collect()
-    });
-    out.sort_by_key(|(i, _)| *i);
-    out.into_iter().map(|(_, l)| l).collect()
+    // spans are independent: over the cores, one span at a time, since short
+    // spans take more trials than long ones that fail with no live load
+    super::par_map(spans_ft, 8, 1, |&s| at(s))
 }
 
 /// The longest span (ft) the entry carries under the case's loads: the
