@@ -13,7 +13,7 @@ use crate::member::Member;
 /// Long-term multipliers of Martin (1977), PCI Journal 22(1), as tabulated in
 /// the PCI Design Handbook ("suggested simple span multipliers"). From
 /// memory, high confidence — verify (reference sheet §6.3).
-#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
 pub struct Multipliers {
     /// (1) deflection from member weight at release, to erection.
     pub erection_self: f64,
@@ -51,7 +51,7 @@ pub const MARTIN_TOPPED: Multipliers = Multipliers {
 
 /// Camber and deflection of one member, in (camber upward positive,
 /// deflections downward positive).
-#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
 pub struct Camber {
     /// Prestress camber at release (Eci, member length, force after transfer).
     pub prestress_release_in: f64,
@@ -137,8 +137,8 @@ pub fn cracked_inertia(n: f64, aps: f64, dp: f64, b: f64) -> f64 {
 /// stress from live load alone (psi, tension positive) for the bilinear method.
 pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Camber {
     let b = m.bare;
-    let eci_i = m.mix.eci().get() * b.ix_in4;
-    let ec_i = m.mix.ec().get() * b.ix_in4;
+    let eci_i = m.eci * b.ix_in4;
+    let ec_i = m.ec * b.ix_in4;
     let lm = m.lm;
     let po = m.history.fpo_psi;
     let a = m.hold_down.unwrap_or(lm / 2.0);
@@ -164,7 +164,7 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
     let self_rel = uniform_deflection(m.w[0], lm, eci_i);
     let mult = if m.comp.is_some() { MARTIN_TOPPED } else { MARTIN_UNTOPPED };
     let l = m.l;
-    let ec_comp = m.comp.map_or(ec_i, |c| m.mix.ec().get() * c.ix_in4);
+    let ec_comp = m.comp.map_or(ec_i, |c| m.ec * c.ix_in4);
     let topping = uniform_deflection(m.w[1], l, ec_i);
     let mut sdl = uniform_deflection(m.w[2], l, ec_comp);
     let mut live_pts = 0.0;
@@ -185,7 +185,7 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         let fr = m.mix.fr().get();
         let ratio = (1.0 - (ft_total - fr) / f_live).clamp(0.0, 1.0);
         let dp = m.h_total - m.pattern.centroid();
-        let n = m.strand.eps.get() / m.mix.ec().get();
+        let n = m.strand.eps.get() / m.ec;
         let ig = m.comp.map_or(b.ix_in4, |c| c.ix_in4);
         let icr = cracked_inertia(n, m.aps, dp, b.width_in).max(1e-6);
         let ie = (ratio.powi(3) * ig + (1.0 - ratio.powi(3)) * icr).min(ig);

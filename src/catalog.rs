@@ -91,6 +91,18 @@ pub struct Bar {
     pub height: Length,
 }
 
+/// Shear reinforcement in each stem of a double tee (stirrups or a welded
+/// wire sheet): the area of the legs in one stem at each spacing.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct WebSteel {
+    /// Area of the legs in one stem at each spacing.
+    pub area: Area,
+    /// Spacing along the member.
+    pub spacing: Length,
+    /// Yield strength (ACI 318-19 counts at most 60 ksi in shear).
+    pub fy: Stress,
+}
+
 /// A strand pattern of a section.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Pattern {
@@ -109,6 +121,8 @@ pub struct Pattern {
     pub rows: Vec<Row>,
     /// Mild bars.
     pub bars: Vec<Bar>,
+    /// Shear reinforcement per stem (double tees), if the catalog gives it.
+    pub web_steel: Option<WebSteel>,
     /// Price per plan area.
     pub price: Option<PricePerArea>,
     /// Longest member the plant makes.

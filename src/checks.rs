@@ -63,6 +63,11 @@ pub struct CheckInfo {
     pub unit: &'static str,
     /// Group, for the failure order.
     pub group: Group,
+    /// Whether the check limits the load a member carries: only such a
+    /// check can govern (a requirement the load cannot change — release
+    /// stresses, cover, fire, strand sanity, length — passes or fails but
+    /// says nothing about how much of the member is used).
+    pub load_driven: bool,
 }
 
 /// The result of one check.
@@ -82,6 +87,12 @@ pub struct CheckResult {
     pub station_ft: Option<f64>,
     /// What governed and any caveat.
     pub note: String,
+    /// Unit of demand and capacity (the entry's, unless the result says
+    /// otherwise: a waived minimum-strength check governed by shear is in kip).
+    pub unit: &'static str,
+    /// Whether this result limits the load (see [`CheckInfo::load_driven`];
+    /// the minimum-strength check limits it only while it is waived).
+    pub governs: bool,
 }
 
 impl Serialize for CheckResult {
@@ -93,7 +104,7 @@ impl Serialize for CheckResult {
         m.serialize_field("clause", self.info.clause)?;
         m.serialize_field("demand", &self.demand)?;
         m.serialize_field("capacity", &self.capacity)?;
-        m.serialize_field("unit", self.info.unit)?;
+        m.serialize_field("unit", self.unit)?;
         m.serialize_field("ratio", &self.ratio)?;
         m.serialize_field("pass", &self.pass)?;
         m.serialize_field("station_ft", &self.station_ft)?;
@@ -122,7 +133,29 @@ impl CheckResult {
             pass: ratio <= 1.0 + 1e-9,
             station_ft: station_in.map(|x| x / 12.0),
             note,
+            unit: info.unit,
+            governs: info.load_driven,
         }
+    }
+
+    /// A compression check in the sign convention of every output
+    /// (compression positive): the fibre stress against its (positive)
+    /// limit; a fibre in tension has ratio 0.
+    pub fn compression(info: &'static CheckInfo, stress: f64, limit: f64, station_in: Option<f64>, note: String) -> CheckResult {
+        let mut r = CheckResult::new(info, stress.max(0.0), limit, station_in, note);
+        r.demand = stress;
+        r
+    }
+
+    /// A tension check in the same convention (tension negative): `stress`
+    /// is the fibre stress (negative in tension) and the capacity is the
+    /// limit written as a stress, −`limit`; the ratio is the tension over
+    /// the limit, 0 when the fibre is in compression — never negative.
+    pub fn tension(info: &'static CheckInfo, stress: f64, limit: f64, station_in: Option<f64>, note: String) -> CheckResult {
+        let mut r = CheckResult::new(info, (-stress).max(0.0), limit, station_in, note);
+        r.demand = stress;
+        r.capacity = -limit;
+        r
     }
 }
 
@@ -248,12 +281,191 @@ pub struct Station {
     pub prestress: Effective,
 }
 
+/// The fibre stresses halfway between two neighbouring stations.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Mid {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// Distance from the nearer member end, in.
+    pub d_in: f64,
+    /// Release stresses, psi: (top, bottom).
+    pub release_psi: (f64, f64),
+    /// Service stresses.
+    pub service: service::AtStation,
+}
+
+impl Mid {
+    fn at(m: &Member, x: f64) -> Mid {
+        let d = m.end_distance(x);
+        Mid {
+            x_in: x,
+            d_in: d,
+            release_psi: release::at(m, d),
+            service: service::at(m, m.effective_at(d), &m.effects(x)),
+        }
+    }
+}
+
+/// Where a quantity is greatest over the member.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Peak {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// Distance from the nearer member end, in.
+    pub d_in: f64,
+    /// The quantity there.
+    pub value: f64,
+    /// Its limit there.
+    pub limit: f64,
+    /// value ÷ limit (0 when the value is not positive).
+    pub ratio: f64,
+}
+
+/// The greatest ratio of a fibre stress `q` to its `limit` over the member.
+///
+/// `q` is quadratic in x between neighbouring stations (prestress and
+/// eccentricity are linear there, moments quadratic; see [`stations`]), and
+/// `limit(d, at_station)` is constant inside each segment: a station on the
+/// boundary of two limit regions takes the stricter side
+/// (`at_station = true`), since the stress just beyond it is the same.
+/// So the maximum is at a station or at the vertex of the parabola through
+/// a segment's ends and its midpoint; the vertex is evaluated exactly
+/// (`exact(x, d)`) when it lies inside the segment and could exceed the
+/// best found. A quantity that is not positive has ratio 0 (a tension
+/// check on a fibre in compression).
+pub fn peak(
+    an: &Analysis,
+    q: impl Fn(&service::AtStation, (f64, f64)) -> f64,
+    limit: impl Fn(f64, bool) -> f64,
+    exact: impl Fn(f64, f64) -> f64,
+) -> Option<Peak> {
+    let ratio = |v: f64, lim: f64| if v > 0.0 && lim > 0.0 { v / lim } else { 0.0 };
+    let mut best: Option<Peak> = None;
+    let keep = |best: &mut Option<Peak>, p: Peak| {
+        if best.is_none_or(|b| p.ratio > b.ratio || (p.ratio == b.ratio && p.value > b.value)) {
+            *best = Some(p);
+        }
+    };
+    for s in &an.stations {
+        let (v, lim) = (q(&s.service, s.release_psi), limit(s.d_in, true));
+        keep(&mut best, Peak {
+            x_in: s.x_in,
+            d_in: s.d_in,
+            value: v,
+            limit: lim,
+            ratio: ratio(v, lim),
+        });
+    }
+    for (w, m) in an.stations.windows(2).zip(&an.mids) {
+        let (v0, v1, vm) = (q(&w[0].service, w[0].release_psi), q(&w[1].service, w[1].release_psi), q(&m.service, m.release_psi));
+        let lim = limit(m.d_in, false);
+        // f(t) = v0 + b t + c t², t from 0 to 1 over the segment
+        let b = 4.0 * vm - 3.0 * v0 - v1;
+        let c = 2.0 * v0 + 2.0 * v1 - 4.0 * vm;
+        keep(&mut best, Peak {
+            x_in: m.x_in,
+            d_in: m.d_in,
+            value: vm,
+            limit: lim,
+            ratio: ratio(vm, lim),
+        });
+        if c < 0.0 {
+            let t = -b / (2.0 * c);
+            let top = v0 + b * t + c * t * t;
+            if t > 0.0 && t < 1.0 && best.is_none_or(|p| ratio(top, lim) > p.ratio) {
+                let x = w[0].x_in + t * (w[1].x_in - w[0].x_in);
+                let d = an.member.end_distance(x);
+                let v = exact(x, d);
+                keep(&mut best, Peak {
+                    x_in: x,
+                    d_in: d,
+                    value: v,
+                    limit: lim,
+                    ratio: ratio(v, lim),
+                });
+            }
+        }
+    }
+    best
+}
+
+/// A root of `g` between `a` and `b`, where g(a) = `ga` and g(b) = `gb`
+/// have opposite signs (Illinois regula falsi, to 1e-4 of the interval:
+/// the checks need the quantity there, which changes little over it).
+pub fn root(g: impl Fn(f64) -> f64, mut a: f64, mut ga: f64, mut b: f64, mut gb: f64) -> f64 {
+    let tol = 1e-4 * (b - a).abs().max(1e-9);
+    let mut last = f64::NAN;
+    // which end was kept last time (Illinois: halve the kept end's value
+    // when the same end is kept twice, so neither end sticks)
+    let mut kept = 0;
+    for _ in 0..40 {
+        let x = (a * gb - b * ga) / (gb - ga);
+        if (x - last).abs() < tol {
+            return x;
+        }
+        last = x;
+        let gx = g(x);
+        if gx == 0.0 {
+            return x;
+        }
+        if (gx < 0.0) == (ga < 0.0) {
+            (a, ga) = (x, gx);
+            if kept == 2 {
+                gb /= 2.0;
+            }
+            kept = 2;
+        } else {
+            (b, gb) = (x, gx);
+            if kept == 1 {
+                ga /= 2.0;
+            }
+            kept = 1;
+        }
+    }
+    0.5 * (a + b)
+}
+
+/// The largest value of a smooth `f` on [a, b], given f(a) = `fa` and
+/// f(b) = `fb`: successive parabolas through the best three points, from
+/// the midpoint, until the step is below 1e-4 of the interval (a handful
+/// of evaluations for the smooth ratios of the checks). Returns (x, f(x)).
+pub fn refine_max(mut f: impl FnMut(f64) -> f64, a: f64, fa: f64, b: f64, fb: f64) -> (f64, f64) {
+    let m = 0.5 * (a + b);
+    let mut p = [(a, fa), (m, f(m)), (b, fb)];
+    let tol = 1e-4 * (b - a);
+    for _ in 0..8 {
+        let [(x0, y0), (x1, y1), (x2, y2)] = p;
+        let den = (x1 - x0) * (y1 - y2) - (x1 - x2) * (y1 - y0);
+        let num = (x1 - x0).powi(2) * (y1 - y2) - (x1 - x2).powi(2) * (y1 - y0);
+        if den.abs() < 1e-300 {
+            break;
+        }
+        let v = x1 - 0.5 * num / den;
+        if !(v > x0 && v < x2) || (v - x1).abs() < tol {
+            break;
+        }
+        let fv = f(v);
+        // keep a bracket around the best point
+        p = if v < x1 {
+            if fv >= y1 { [(x0, y0), (v, fv), (x1, y1)] } else { [(v, fv), (x1, y1), (x2, y2)] }
+        } else if fv >= y1 {
+            [(x1, y1), (v, fv), (x2, y2)]
+        } else {
+            [(x0, y0), (x1, y1), (v, fv)]
+        };
+    }
+    p.into_iter().max_by(|a, b| a.1.total_cmp(&b.1)).expect("three points")
+}
+
 /// Everything the checks read: the member model and the stations.
 pub struct Analysis<'a> {
     /// The member.
     pub member: Member<'a>,
     /// Stations, sorted by x.
     pub stations: Vec<Station>,
+    /// The midpoint of each pair of neighbouring stations (the fibre
+    /// stresses there find each segment's own maximum, see [`peak`]).
+    pub mids: Vec<Mid>,
     /// x of the critical section for shear (h/2 from the support face), in.
     pub x_shear: f64,
     /// Camber and deflections.
@@ -264,6 +476,12 @@ pub struct Analysis<'a> {
     pub frequency_hz: f64,
     /// Whether the checks skip their notes (ranking needs only the numbers).
     pub brief: bool,
+    /// Per-layer strand stress with full development (sets ℓd), psi.
+    pub full: Vec<f64>,
+    /// The greatest Mu/φMn, found once for the checks that read it.
+    pub flexure_worst: std::cell::OnceCell<Option<flexure::Worst>>,
+    /// The greatest Vu/φVn, found once for the checks that read it.
+    pub shear_worst: std::cell::OnceCell<Option<shear::Worst>>,
 }
 
 impl Analysis<'_> {
@@ -382,28 +600,51 @@ fn symmetric(m: &Member) -> bool {
         .all(|&(p, a, k)| m.points.iter().any(|&(q, b, j)| q == p && j == k && (b - (m.l - a)).abs() < 1e-9))
 }
 
-/// Stations: every 1/20 of the span plus the special points.
-fn stations(m: &Member, x_shear: f64) -> Vec<f64> {
+/// How far either side of a jump (a line load's shear step) its two
+/// stations sit, in: small enough that moments and stresses are those of
+/// the jump itself, large enough to keep the stations apart.
+pub const JUMP_IN: f64 = 1e-3;
+
+/// Stations: every 1/20 of the span plus every point where a checked
+/// quantity or its limit changes its law, so that each check's maximum is
+/// at a station or is found between two by the check itself:
+/// - h/2 from each support face (shear starts there, ACI 318-19 §7.4.3.2 / §9.4.3.2);
+/// - the transfer lengths (fse/3000)·db and 50 db from each member end and
+///   from each debonding point (prestress stops growing; the end-region
+///   release limits of Tables 24.5.3.1/24.5.3.2 end at ℓtr);
+/// - each layer's development length ℓd past its bonding point (`full`:
+///   the strand stresses with full development, psi);
+/// - hold-downs (the strand profile bends);
+/// - each line load, on both sides of its shear step ([`JUMP_IN`]);
+/// - where the shear of each moment combination passes through zero
+///   (the moment maxima, [`Member::zero_shear_points`]), and midspan.
+///
+/// Between these points prestress, eccentricity and moments are linear or
+/// quadratic in x, so the fibre stresses are quadratic; the stress checks
+/// find each segment's vertex ([`peak`]).
+fn stations(m: &Member, x_shear: f64, full: &[f64]) -> Vec<f64> {
     let l = m.l;
     let half = (m.lm - l) / 2.0;
-    let mut xs: Vec<f64> = Vec::with_capacity(48);
+    let mut xs: Vec<f64> = Vec::with_capacity(64);
     xs.extend((0..=20).map(|k| l * k as f64 / 20.0));
-    let mut special = Vec::with_capacity(16);
+    let mut special = Vec::with_capacity(24);
     special.extend([x_shear, m.ltr - half, m.ltr_shear - half, l / 2.0]);
     if let Some(hd) = m.hold_down {
         special.push(hd - half);
     }
-    for layer in &m.layers {
+    for (i, layer) in m.layers.iter().enumerate() {
         if layer.debond > 0.0 {
             special.push(layer.debond - half);
             special.push(layer.debond + m.ltr - half);
+            special.push(layer.debond + m.ltr_shear - half);
         }
+        let fps = full.get(i).copied().unwrap_or(m.strand.fpu.get());
+        special.push(layer.debond + crate::prestress::development_length(m.history.fse_psi, fps, m.db(), layer.debond > 0.0) - half);
     }
-    // development length at full fse → fps ≈ fpu as an upper estimate point
-    special.push(crate::prestress::development_length(m.history.fse_psi, m.strand.fpu.get(), m.db(), false) - half);
     for &(_, a, _) in &m.points {
-        special.push(a);
+        special.extend([a - JUMP_IN, a + JUMP_IN]);
     }
+    special.extend(m.zero_shear_points());
     for s in special {
         xs.push(s);
         xs.push(l - s);
@@ -421,16 +662,33 @@ pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
 
 /// [`analyse`], brief (no notes) when asked.
 fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> Analysis<'a> {
+    analyse_on(cand, case, brief, None)
+}
+
+/// Every check on a station set given by the caller (x from the left
+/// bearing centre, in) instead of the member's own: the proof that the
+/// member's own stations miss no maximum compares the two on a dense set.
+pub fn evaluate_on_stations(cand: &Candidate, case: &DesignCase, xs: &[f64]) -> Evaluation {
+    finish(analyse_on(cand, case, false, Some(xs)))
+}
+
+fn analyse_on<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool, given: Option<&[f64]>) -> Analysis<'a> {
     let member = Member::new(cand.section, cand.pattern, cand.mix, case);
     let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
     let mut memo = flexure::Memo::new(&member);
+    let xs = stations(&member, x_shear, &memo.full);
+    let full = memo.full.clone();
     let mut at = |x: f64| {
         let d = member.end_distance(x);
         let pre = member.effective_at(d);
         let flex = flexure::at(&member, d, pre, &mut memo);
         loaded(&member, x, d, x_shear, pre, flex, release::at(&member, d))
     };
-    let xs = stations(&member, x_shear);
+    if let Some(xs) = given {
+        let stations = xs.iter().map(|&x| at(x)).collect();
+        let fire = fire::assess(&member, brief);
+        return complete(member, stations, x_shear, fire, brief, full);
+    }
     let stations = if symmetric(&member) {
         // the member, its strand and its loads are the same seen from either
         // end: the right half mirrors the left (shears change sign), and a
@@ -455,7 +713,7 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
         xs.into_iter().map(at).collect::<Vec<Station>>()
     };
     let fire = fire::assess(&member, brief);
-    complete(member, stations, x_shear, fire, brief)
+    complete(member, stations, x_shear, fire, brief, full)
 }
 
 /// The state at station `x` (`d` from the nearer end) under the member's
@@ -464,7 +722,7 @@ fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> 
 fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
     let eff = member.effects(x);
     let (mu, mu_combo, vu, vu_combo) = factored(&eff);
-    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, pre, &eff, mu, vu));
+    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, pre, &eff));
     Station {
         x_in: x,
         d_in: d,
@@ -482,25 +740,32 @@ fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure
 }
 
 /// The analysis from its stations: camber and frequency added.
-fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: fire::Fire, brief: bool) -> Analysis<'a> {
-    // camber needs the class reached and, for T and C, the stresses of the
-    // bilinear method at the section of greatest moment
-    let worst = stations.iter().max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin)).expect("stations");
-    let ft_total = -worst.service.bottom_total_psi;
-    let s_live = member.comp.map_or(member.bare.sb_in3, |c| c.sb_in3);
-    let f_live = worst.effects.m_live.max(worst.effects.m_roof) / s_live;
-    let class = service::class_of(ft_total, member.mix.fc.get());
-    let camber = crate::camber::camber(&member, class, ft_total, f_live);
+fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: fire::Fire, brief: bool, full: Vec<f64>) -> Analysis<'a> {
     let frequency_hz = vibration::frequency(&member);
-    Analysis {
+    let mids = stations.windows(2).map(|w| Mid::at(&member, (w[0].x_in + w[1].x_in) / 2.0)).collect();
+    let mut an = Analysis {
         member,
         stations,
+        mids,
         x_shear,
-        camber,
+        camber: crate::camber::Camber::default(),
         fire,
         frequency_hz,
         brief,
-    }
+        full,
+        flexure_worst: std::cell::OnceCell::new(),
+        shear_worst: std::cell::OnceCell::new(),
+    };
+    // camber needs the class reached and, for T and C, the stresses of the
+    // bilinear method where the bottom-fibre tension is greatest
+    let m = &an.member;
+    let (ft_total, x) = service::max_tension(&an).map_or((0.0, m.l / 2.0), |p| (p.value, p.x_in));
+    let s_live = m.comp.map_or(m.bare.sb_in3, |c| c.sb_in3);
+    let eff = m.effects(x);
+    let f_live = eff.m_live.max(eff.m_roof) / s_live;
+    let class = service::class_of(ft_total, m.mix.fc.get());
+    an.camber = crate::camber::camber(m, class, ft_total, f_live);
+    an
 }
 
 /// A brief analysis kept for trying other floor live loads on the same
@@ -512,14 +777,16 @@ fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: 
 /// many loads per span.
 pub struct Prepared<'a> {
     base: Analysis<'a>,
+    /// Per-layer strand stress with full development (sets ℓd), psi.
+    full: Vec<f64>,
 }
 
 impl<'a> Prepared<'a> {
     /// Prepare a candidate under a case (its live load is replaced by each trial).
     pub fn new(cand: &Candidate<'a>, case: &'a DesignCase) -> Prepared<'a> {
-        Prepared {
-            base: analyse_with(cand, case, true),
-        }
+        let base = analyse_with(cand, case, true);
+        let full = base.full.clone();
+        Prepared { base, full }
     }
 
     /// The brief evaluation at the case's own loads (as [`evaluate_brief`]).
@@ -550,12 +817,35 @@ impl<'a> Prepared<'a> {
         let b = &self.base;
         let mut member = b.member.clone();
         member.w[3] = live.get() * member.bare.width_in;
-        let stations = b
-            .stations
-            .iter()
-            .map(|s| loaded(&member, s.x_in, s.d_in, b.x_shear, s.prestress, s.flexure, s.release_psi))
-            .collect();
-        complete(member, stations, b.x_shear, b.fire.clone(), true)
+        // the station set of a fresh evaluation at this load: the same
+        // load-independent points, and the zero-shear points of these loads
+        let mut xs = stations(&member, b.x_shear, &self.full);
+        if symmetric(&member) {
+            let half = member.l / 2.0;
+            xs.truncate(xs.iter().take_while(|&&x| x <= half + 1e-9).count());
+        }
+        let stations: Vec<Station> = {
+            let mut memo: Option<flexure::Memo> = None;
+            xs.iter()
+                .map(|&x| match b.stations.binary_search_by(|s| s.x_in.total_cmp(&x)) {
+                    Ok(i) => {
+                        let s = &b.stations[i];
+                        loaded(&member, s.x_in, s.d_in, b.x_shear, s.prestress, s.flexure, s.release_psi)
+                    }
+                    Err(_) => {
+                        // a zero-shear point these loads move: worked out afresh
+                        let d = member.end_distance(x);
+                        let pre = member.effective_at(d);
+                        // the same memo a fresh evaluation starts with, so
+                        // the answers agree to the bit
+                        let memo = memo.get_or_insert_with(|| flexure::Memo::new(&member));
+                        let flex = flexure::at(&member, d, pre, memo);
+                        loaded(&member, x, d, b.x_shear, pre, flex, release::at(&member, d))
+                    }
+                })
+                .collect()
+        };
+        complete(member, stations, b.x_shear, b.fire.clone(), true, self.full.clone())
     }
 }
 
@@ -591,13 +881,15 @@ fn finish(an: Analysis) -> Evaluation {
 fn results(an: &Analysis) -> Evaluation {
     let mut checks: Vec<CheckResult> = Vec::with_capacity(REGISTRY.len());
     checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(an)));
-    // jacking and spacing are properties of the pattern, not of the bay:
-    // they pass or fail, but do not govern
+    // the governing check is the one that limits the load: requirements
+    // the load cannot change (release stresses, cover, fire, strand, length,
+    // minimum strength when met outright) pass or fail but do not govern
     let governing = checks
         .iter()
         .enumerate()
-        .filter(|(_, c)| c.info.group != Group::Strand)
+        .filter(|(_, c)| c.governs)
         .max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio))
+        .or_else(|| checks.iter().enumerate().max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio)))
         .map_or(0, |(i, _)| i);
     let viable = checks.iter().all(|c| c.pass);
     Evaluation {

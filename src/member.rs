@@ -99,6 +99,10 @@ pub struct Member<'a> {
     pub ltr_shear: f64,
     /// Hold-down distance from each member end, in (when depressed).
     pub hold_down: Option<f64>,
+    /// Ec of the precast concrete, psi (found once: it takes a power).
+    pub ec: f64,
+    /// Eci of the precast concrete at release, psi.
+    pub eci: f64,
 }
 
 impl<'a> Member<'a> {
@@ -166,6 +170,8 @@ impl<'a> Member<'a> {
             ltr: 0.0,
             ltr_shear: transfer_length_shear(pattern.strand.diameter.get()),
             hold_down: pattern.hold_down.map(|f| f * lm),
+            ec: mix.ec().get(),
+            eci: mix.eci().get(),
         };
         m.history = m.prestress();
         m.ltr = transfer_length(m.history.fse_psi, pattern.strand.diameter.get());
@@ -264,6 +270,46 @@ impl<'a> Member<'a> {
         }
     }
 
+    /// Where the shear of each load combination that sets a moment check
+    /// passes through zero, in from the left bearing centre: the maxima of
+    /// the factored moments (ASCE 7-16 §2.3.1 combinations 1–3) and of the
+    /// service moments (sustained D + ψL; D + L, D + (Lr or S),
+    /// D + 0.75L + 0.75(Lr or S), §2.4.1). All loads act downward, so the
+    /// shear of a combination falls along the span and crosses zero once;
+    /// a crossing at a line load's jump is that load's own station.
+    pub fn zero_shear_points(&self) -> Vec<f64> {
+        let psi = self.case.sustained_live;
+        let mut combos: Vec<(f64, f64, f64)> = crate::case::COMBINATIONS.iter().map(|c| (c.d, c.l, c.r)).collect();
+        combos.extend([(1.0, psi, 0.0), (1.0, 1.0, 0.0), (1.0, 0.0, 1.0), (1.0, 0.75, 0.75)]);
+        let mut out = Vec::with_capacity(combos.len());
+        for (kd, kl, kr) in combos {
+            let w = kd * (self.w[0] + self.w[1] + self.w[2]) + kl * self.w[3] + kr * self.w[4];
+            let mut loads: Vec<(f64, f64)> = self
+                .points
+                .iter()
+                .map(|&(p, a, k)| (if k == LoadKind::Dead { kd } else { kl } * p, a))
+                .collect();
+            loads.sort_by(|a, b| a.1.total_cmp(&b.1));
+            // shear just right of the left support, then segment by segment
+            let mut v = w * self.l / 2.0 + loads.iter().map(|&(p, a)| p * (self.l - a) / self.l).sum::<f64>();
+            let mut from = 0.0;
+            for (p, a) in loads.into_iter().chain(std::iter::once((0.0, self.l))) {
+                let at_end = v - w * (a - from);
+                if v > 0.0 && at_end <= 0.0 && w > 0.0 {
+                    out.push(from + v / w);
+                    break;
+                }
+                // past the load the shear drops by its weight
+                v = at_end - p;
+                from = a;
+                if v <= 0.0 {
+                    break;
+                }
+            }
+        }
+        out
+    }
+
     /// Self-weight moment at release at distance `d` from the end: the
     /// member rests on the bed at its ends, over its full length (lbf·in).
     pub fn release_moment(&self, d: f64) -> f64 {
@@ -292,8 +338,8 @@ impl<'a> Member<'a> {
             mg: eff.m_self,
             fcds,
             es: self.strand.eps.get(),
-            eci: self.mix.eci().get(),
-            ec: self.mix.ec().get(),
+            eci: self.eci,
+            ec: self.ec,
             vs: self.bare.vs_ratio_in,
             rh: self.case.humidity,
             lightweight: matches!(self.mix.aggregate, Aggregate::SandLightweight | Aggregate::Lightweight),

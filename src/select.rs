@@ -303,7 +303,7 @@ pub fn failure_reason(r: &Ranked) -> String {
             (f.ratio - 1.0) * 100.0,
             f.demand,
             f.capacity,
-            f.info.unit
+            f.unit
         ),
         None => "passes".into(),
     }

@@ -170,7 +170,7 @@ fn prestress_level_barely_changes_flexural_strength() {
 /// Common practice, no source: a longer span never raises a member's
 /// capacity — every load-driven ratio grows with the span. (Bottom-fibre
 /// compression near the ends comes from prestress and is relieved by load,
-/// so it is not among them.)
+/// so the compression checks, which include that fibre, are not among them.)
 #[test]
 fn longer_spans_never_relieve_a_check() {
     let cat = demo();
@@ -183,7 +183,7 @@ fn longer_spans_never_relieve_a_check() {
         let mut last: Vec<f64> = Vec::new();
         for span in (16..=48).step_by(4) {
             let ev = evaluate(&c, &case(span as f64, 15.0, 50.0));
-            let now: Vec<f64> = ["flexure", "service_tension", "service_compression_sustained", "shear"]
+            let now: Vec<f64> = ["flexure", "service_tension", "defl_live", "shear"]
                 .iter()
                 .map(|id| ev.check(id).unwrap().ratio)
                 .collect();
@@ -404,9 +404,10 @@ fn mirrored_half_agrees_with_every_station() {
             kind: LoadKind::Dead,
         });
         let (a, b) = (analyse(&c, &sym), analyse(&c, &asym));
-        assert_eq!(a.stations.len(), b.stations.len(), "{s}");
-        for (x, y) in a.stations.iter().zip(&b.stations) {
-            assert!((x.x_in - y.x_in).abs() < 1e-9, "{s}: {} vs {}", x.x_in, y.x_in);
+        // the line load adds its two sides as stations, and their mirrors
+        assert_eq!(a.stations.len() + 4, b.stations.len(), "{s}");
+        for x in &a.stations {
+            let y = b.stations.iter().find(|y| (x.x_in - y.x_in).abs() < 1e-9).expect("the same station");
             assert_relative_eq!(x.mu_lbin, y.mu_lbin, max_relative = 1e-9, epsilon = 1e-6);
             assert_relative_eq!(x.vu_lbf, y.vu_lbf, max_relative = 1e-9, epsilon = 1e-6);
             assert_relative_eq!(x.effects.v_live, y.effects.v_live, max_relative = 1e-9, epsilon = 1e-6);
@@ -448,12 +449,11 @@ fn brief_and_full_evaluations_agree() {
             assert_eq!(full.checks.len(), brief.checks.len());
             for (a, b) in full.checks.iter().zip(&brief.checks) {
                 assert_eq!(a.info.id, b.info.id);
-                assert_eq!(
-                    (a.demand, a.capacity, a.ratio, a.pass),
-                    (b.demand, b.capacity, b.ratio, b.pass),
-                    "{}",
-                    a.info.id
-                );
+                assert_eq!(a.pass, b.pass, "{}", a.info.id);
+                // the right half's own search may land a rounding away
+                for (x, y) in [(a.demand, b.demand), (a.capacity, b.capacity), (a.ratio, b.ratio)] {
+                    assert_relative_eq!(x, y, max_relative = 1e-9, epsilon = 1e-12);
+                }
                 let l = k.span.get() / 12.0;
                 if let (Some(x), Some(y)) = (a.station_ft, b.station_ft) {
                     assert!((x - y).abs() < 1e-9 || (x - (l - y)).abs() < 1e-9, "{}: {x} vs {y}", a.info.id);

@@ -70,7 +70,7 @@ fn all_finite(ev: &plankwise::checks::Evaluation) -> Result<(), String> {
             s.service.bottom_total_psi,
             s.service.top_total_psi,
         ];
-        if vals.iter().any(|v| !v.is_finite()) || s.shear.is_some_and(|v| !v.phi_vc_lbf.is_finite()) {
+        if vals.iter().any(|v| !v.is_finite()) || s.shear.is_some_and(|v| !v.phi_vn_lbf().is_finite()) {
             return Err(format!("station {} not finite", s.x_in));
         }
     }
@@ -142,8 +142,12 @@ proptest! {
         let k = case(&cat, span, sdl, live, topped, line);
         let (full, brief) = (evaluate(&cand, &k), plankwise::checks::evaluate_brief(&cand, &k));
         prop_assert_eq!(full.checks.len(), brief.checks.len());
+        // the full evaluation also searches the mirrored half, which may
+        // land a rounding away
+        let near = |x: f64, y: f64| (x - y).abs() <= 1e-9 * x.abs().max(y.abs()) + 1e-12;
         for (a, b) in full.checks.iter().zip(&brief.checks) {
-            prop_assert_eq!((a.info.id, a.demand, a.capacity, a.ratio, a.pass), (b.info.id, b.demand, b.capacity, b.ratio, b.pass));
+            prop_assert_eq!((a.info.id, a.pass), (b.info.id, b.pass));
+            prop_assert!(near(a.demand, b.demand) && near(a.capacity, b.capacity) && near(a.ratio, b.ratio), "{}: {:?} vs {:?}", a.info.id, a, b);
         }
         prop_assert_eq!((full.viable, full.governing), (brief.viable, brief.governing));
         let prep = plankwise::checks::Prepared::new(&cand, &k);

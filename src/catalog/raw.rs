@@ -233,6 +233,8 @@ pub struct RawPattern {
     pub row: Option<Vec<Spanned<RawRow>>>,
     /// Mild reinforcement.
     pub bar: Option<Vec<Spanned<RawBar>>>,
+    /// Shear reinforcement in each stem of a double tee.
+    pub web_steel: Option<Spanned<RawWebSteel>>,
     /// Price per plan area (overrides the section's).
     pub price: Option<S>,
     /// Longest member (overrides the section's).
@@ -255,6 +257,19 @@ pub struct RawRow {
     pub x: Option<Spanned<Vec<S>>>,
     /// Debonded (shielded) length at each end.
     pub debond: Option<S>,
+}
+
+/// `web_steel = { area, spacing, fy }` of a pattern: the shear
+/// reinforcement of one stem.
+#[derive(Debug, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct RawWebSteel {
+    /// Area of the legs crossing a crack in one stem, at each spacing.
+    pub area: S,
+    /// Spacing along the member.
+    pub spacing: S,
+    /// Yield strength.
+    pub fy: S,
 }
 
 /// `[[section.pattern.bar]]`.

@@ -61,6 +61,10 @@ pub mod limits {
     pub const BAR_A_IN2: (f64, f64) = (0.05, 2.5);
     /// fy, ksi.
     pub const FY_KSI: (f64, f64) = (40.0, 100.0);
+    /// Area of the shear legs in one stem per spacing, in².
+    pub const WEB_A_IN2: (f64, f64) = (0.005, 2.0);
+    /// Spacing of shear reinforcement, in.
+    pub const WEB_S_IN: (f64, f64) = (1.0, 48.0);
     /// Production length, ft.
     pub const LENGTH_FT: (f64, f64) = (5.0, 200.0);
     /// Longest text value, characters.

@@ -19,6 +19,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 20.5.1.3.3; IBC 2021 Table 722.2.3(1)",
     unit: "in",
     group: Group::Cover,
+    load_driven: false,
 };
 
 /// Run the check: demand is the cover required, capacity the least given.

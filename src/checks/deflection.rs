@@ -19,6 +19,7 @@ pub const LIVE: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 24.2.2 (floor l/360, flat roof l/180)",
     unit: "in",
     group: Group::Deflection,
+    load_driven: true,
 };
 
 /// Registry entry: deflection after attachment.
@@ -28,6 +29,7 @@ pub const AFTER: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 24.2.2 (l/480 or l/240)",
     unit: "in",
     group: Group::Deflection,
+    load_driven: true,
 };
 
 /// Immediate live deflection.

@@ -29,6 +29,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "IBC 2021 722.2.2.1, 722.2.3 (Tables 722.2.2.1, 722.2.3(1), 722.2.3(4)); ACI 216.1",
     unit: "h",
     group: Group::Fire,
+    load_driven: false,
 };
 
 /// The fire assessment.

@@ -29,6 +29,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 22.2, 22.3, 21.2.2, 21.2.3, 25.4.8.3; ASCE 7-16 2.3.1",
     unit: "kip-ft",
     group: Group::Strength,
+    load_driven: true,
 };
 
 /// Flexure at one station.
@@ -78,7 +79,7 @@ fn layers<'m>(m: &'m Member, d: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>
 fn layers_into<'m>(m: &'m Member, d: f64, pre: Effective, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
     out.clear();
     let fse = m.history.fse_psi;
-    let ec = m.mix.ec().get();
+    let ec = m.ec;
     let (pe, y) = (pre.pe, pre.y);
     let e = m.bare.yb_in - y;
     out.extend(m.layers.iter().enumerate().map(|(i, layer)| {
@@ -143,13 +144,14 @@ fn phi_development(m: &Member, d: f64, full: &[f64]) -> (f64, bool) {
 /// Mcr = Sb (fr + Pe/A + Pe e/Sb) bare, or for an unshored topping
 /// Mcr = Sbc (fr + Pe/A + Pe e/Sb − Mnc/Sb) + Mnc (PCI Design Handbook form;
 /// reference sheet §4.5, from memory, high confidence), Mnc the moment of
-/// self-weight and topping at midspan.
+/// self-weight and topping at the same section (their loads are uniform,
+/// so it is the same at either end's distance `d`).
 pub fn mcr(m: &Member, d: f64) -> f64 {
-    mcr_with(m, m.effective_at(d))
+    mcr_with(m, d, m.effective_at(d))
 }
 
 /// [`mcr`] with the effective prestress at the station already found.
-fn mcr_with(m: &Member, pre: Effective) -> f64 {
+fn mcr_with(m: &Member, d: f64, pre: Effective) -> f64 {
     let (pe, y) = (pre.pe, pre.y);
     let e = m.bare.yb_in - y;
     let fr = m.mix.fr().get();
@@ -157,8 +159,8 @@ fn mcr_with(m: &Member, pre: Effective) -> f64 {
     match m.comp {
         None => m.bare.sb_in3 * (fr + pre),
         Some(c) => {
-            let eff = m.effects(m.l / 2.0);
-            let mnc = eff.m_self + eff.m_topping;
+            let x = (d - (m.lm - m.l) / 2.0).clamp(0.0, m.l);
+            let mnc = crate::case::uniform(m.w[0] + m.w[1], m.l, x).0;
             c.sb_in3 * (fr + pre - mnc / m.bare.sb_in3) + mnc
         }
     }
@@ -178,6 +180,17 @@ pub struct Memo<'m> {
 }
 
 impl<'m> Memo<'m> {
+    /// A memo that starts empty, given the strand stresses with full
+    /// development already found (what [`Memo::new`] would find again).
+    pub fn with_full(m: &'m Member, full: &[f64]) -> Memo<'m> {
+        Memo {
+            full: full.to_vec(),
+            entries: Vec::new(),
+            conc: concrete(m),
+            scratch: Vec::new(),
+        }
+    }
+
     /// The memo of a member, holding its midspan answer.
     pub fn new(m: &'m Member) -> Memo<'m> {
         let conc = concrete(m);
@@ -240,7 +253,7 @@ pub fn at<'m>(m: &'m Member, d: f64, pre: Effective, memo: &mut Memo<'m>) -> AtS
         eps_t: f.eps_t,
         c_in: f.c,
         developed,
-        mcr_lbin: mcr_with(m, pre),
+        mcr_lbin: mcr_with(m, d, pre),
     }
 }
 
@@ -253,18 +266,92 @@ pub fn approximate_mn(m: &Member) -> (f64, f64) {
     (mn_fixed_stress(&conc, m.aps, fps, dp).0, fps)
 }
 
-/// Run the check: the station with the highest Mu/φMn.
+/// The point of greatest Mu/φMn.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Worst {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// Factored moment there, lbf·in.
+    pub mu_lbin: f64,
+    /// Its combination.
+    pub combo: &'static str,
+    /// Design strength there, lbf·in.
+    pub phi_mn_lbin: f64,
+    /// Flexure there.
+    pub at: AtStation,
+}
+
+/// The greatest Mu/φMn over the member. Mu is concave between stations
+/// and greatest at the zero-shear stations, so it is monotone in every
+/// segment; φMn is constant where the strand is developed and its profile
+/// straight, and monotone in the development and drape zones. So in each
+/// segment Mu/φMn is bounded by the larger Mu at its ends over the smaller
+/// φMn; a segment whose bound exceeds the worst station is searched by
+/// successive parabolas ([`super::refine_max`]) with strain compatibility
+/// at each point tried.
+pub fn worst(an: &Analysis) -> Option<Worst> {
+    *an.flexure_worst.get_or_init(|| search(an))
+}
+
+fn search(an: &Analysis) -> Option<Worst> {
+    let ratio = |s: &super::Station| s.mu_lbin / s.flexure.phi_mn_lbin;
+    let pts: Vec<&super::Station> = an.stations.iter().filter(|s| s.mu_lbin > 0.0).collect();
+    let s = pts.iter().copied().max_by(|a, b| ratio(a).total_cmp(&ratio(b)))?;
+    let mut best = Worst {
+        x_in: s.x_in,
+        mu_lbin: s.mu_lbin,
+        combo: s.mu_combo,
+        phi_mn_lbin: s.flexure.phi_mn_lbin,
+        at: s.flexure,
+    };
+    let m = &an.member;
+    let mut memo: Option<Memo> = None;
+    for w in pts.windows(2) {
+        let (a, b) = (w[0], w[1]);
+        let cap = a.flexure.phi_mn_lbin.min(b.flexure.phi_mn_lbin);
+        let bound = a.mu_lbin.max(b.mu_lbin) / cap;
+        if bound <= best.mu_lbin / best.phi_mn_lbin * (1.0 + 1e-12) || b.x_in - a.x_in < 1e-6 {
+            continue;
+        }
+        let memo = memo.get_or_insert_with(|| Memo::with_full(m, &an.full));
+        let mut state = |x: f64| {
+            let d = m.end_distance(x);
+            let f = at(m, d, m.effective_at(d), memo);
+            let (mu, combo, _, _) = crate::case::factored(&m.effects(x));
+            (f, mu, combo)
+        };
+        let (x, rx) = super::refine_max(
+            |x| {
+                let (f, mu, _) = state(x);
+                mu / f.phi_mn_lbin
+            },
+            a.x_in,
+            ratio(a),
+            b.x_in,
+            ratio(b),
+        );
+        if rx > best.mu_lbin / best.phi_mn_lbin {
+            let (f, mu, combo) = state(x);
+            best = Worst {
+                x_in: x,
+                mu_lbin: mu,
+                combo,
+                phi_mn_lbin: f.phi_mn_lbin,
+                at: f,
+            };
+        }
+    }
+    Some(best)
+}
+
+/// Run the check: the point with the highest Mu/φMn ([`worst`]).
 pub fn run(an: &Analysis) -> Option<CheckResult> {
-    let s = an
-        .stations
-        .iter()
-        .filter(|s| s.mu_lbin > 0.0)
-        .max_by(|a, b| (a.mu_lbin / a.flexure.phi_mn_lbin).total_cmp(&(b.mu_lbin / b.flexure.phi_mn_lbin)))?;
+    let w = worst(an)?;
     let (mn_aci, fps_aci) = if an.brief { (0.0, 0.0) } else { approximate_mn(&an.member) };
-    let f = &s.flexure;
+    let f = &w.at;
     let note = an.note(format_args!(
         "{}; φ = {:.2}, εt = {:.4}{}; c = {:.2} in; Mn by ACI Eq. 20.3.2.3.1 at midspan {:.1} kip-ft (fps {:.1} ksi)",
-        s.mu_combo,
+        w.combo,
         f.phi,
         f.eps_t,
         if f.developed { "" } else { ", strand not fully developed here" },
@@ -272,5 +359,5 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         kipft(mn_aci),
         fps_aci / 1000.0
     ));
-    Some(CheckResult::new(&INFO, kipft(s.mu_lbin), kipft(f.phi_mn_lbin), Some(s.x_in), note))
+    Some(CheckResult::new(&INFO, kipft(w.mu_lbin), kipft(w.phi_mn_lbin), Some(w.x_in), note))
 }

@@ -17,6 +17,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 16.4.4.2 (80 bv d, roughened, no ties); φ 0.75",
     unit: "kip",
     group: Group::Shear,
+    load_driven: true,
 };
 
 /// Run the check (topped members only).

@@ -13,6 +13,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 20.3.2.5.1",
     unit: "ksi",
     group: Group::Strand,
+    load_driven: false,
 };
 
 /// Run the check.

@@ -12,6 +12,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "catalog max_length (producer's limit)",
     unit: "ft",
     group: Group::Production,
+    load_driven: false,
 };
 
 /// Run the check (only when the catalog gives a limit).

@@ -9,10 +9,18 @@
 //! its ends. "Ends" are taken as within one transfer length of the member
 //! end (reference sheet §3.1, from memory, medium).
 //!
+//! Both fibres are checked in both checks. Where the worst point lies: the
+//! stresses are quadratic in x between stations (prestress and eccentricity
+//! linear, self-weight moment quadratic), so the maximum of each fibre's
+//! ratio is at a station or at the vertex of its segment ([`super::peak`]).
+//! The end region ends at ℓtr, which is a station; that station is held to
+//! the stricter limit (0.60 f′ci, 3√f′ci), because the stress just beyond
+//! it is the same and must meet the limit of the region it enters.
+//!
 //! Does not cover: bonded reinforcement that resists the tension force
 //! (§24.5.3.2.1), which would allow the tension limit to be exceeded.
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Peak, peak};
 use crate::member::Member;
 
 /// Registry entry: compression.
@@ -22,6 +30,7 @@ pub const COMPRESSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.3.1 (Table 24.5.3.1)",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: false,
 };
 
 /// Registry entry: tension.
@@ -31,6 +40,7 @@ pub const TENSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.3.2 (Table 24.5.3.2)",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: false,
 };
 
 /// (top, bottom) fibre stress at release at distance `d` from the end, psi,
@@ -46,52 +56,68 @@ pub fn at(m: &Member, d: f64) -> (f64, f64) {
     )
 }
 
-fn in_end(an: &Analysis, d: f64) -> bool {
-    d <= an.member.ltr + 1e-9
+/// Whether `d` lies in the end region (within ℓtr of the member end). A
+/// point exactly on the boundary is not: it takes the stricter limit.
+fn in_end(an: &Analysis, d: f64, at_station: bool) -> bool {
+    if at_station {
+        d < an.member.ltr - 1e-9
+    } else {
+        d < an.member.ltr
+    }
 }
 
-/// Compression check.
+/// The worst point of one fibre: `pick` chooses top (0) or bottom (1),
+/// `sign` is +1 for compression, −1 for tension; `end` and `other` are the
+/// limits (positive) of the end region and elsewhere.
+fn fibre(an: &Analysis, pick: usize, sign: f64, end: f64, other: f64) -> Option<Peak> {
+    let m = &an.member;
+    let get = move |r: (f64, f64)| sign * if pick == 0 { r.0 } else { r.1 };
+    peak(
+        an,
+        move |_, r| get(r),
+        |d, at_station| if in_end(an, d, at_station) { end } else { other },
+        |_, d| get(at(m, d)),
+    )
+}
+
+fn zone(an: &Analysis, p: &Peak, end: &str, other: &str) -> String {
+    if in_end(an, p.d_in, true) { end.into() } else { other.into() }
+}
+
+/// Compression check: the greater ratio of the top and bottom fibres.
 pub fn run_compression(an: &Analysis) -> Option<CheckResult> {
     let fci = an.member.mix.fci.get();
-    let worst = an
-        .stations
-        .iter()
-        .map(|s| {
-            let limit = if in_end(an, s.d_in) { 0.70 * fci } else { 0.60 * fci };
-            (s, s.release_psi.0.max(s.release_psi.1), limit)
-        })
-        .max_by(|a, b| (a.1 / a.2).total_cmp(&(b.1 / b.2)))?;
-    let (s, f, lim) = worst;
-    let fibre = if s.release_psi.1 >= s.release_psi.0 { "bottom" } else { "top" };
-    let zone = if in_end(an, s.d_in) { "end region, 0.70 f'ci" } else { "0.60 f'ci" };
-    Some(CheckResult::new(
+    let top = fibre(an, 0, 1.0, 0.70 * fci, 0.60 * fci)?;
+    let bot = fibre(an, 1, 1.0, 0.70 * fci, 0.60 * fci)?;
+    let (p, name) = if bot.ratio >= top.ratio { (bot, "bottom") } else { (top, "top") };
+    let z = zone(an, &p, "end region, 0.70 f'ci", "0.60 f'ci");
+    Some(CheckResult::compression(
         &COMPRESSION,
-        f,
-        lim,
-        Some(s.x_in),
-        an.note(format_args!("{fibre} fibre; {zone}; f'ci = {fci:.0} psi")),
+        p.value,
+        p.limit,
+        Some(p.x_in),
+        an.note(format_args!("{name} fibre; {z}; f'ci = {fci:.0} psi")),
     ))
 }
 
-/// Tension check.
+/// Tension check: the greater ratio of the top and bottom fibres.
 pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
     let r = an.member.mix.fci.get().sqrt();
-    let worst = an
-        .stations
-        .iter()
-        .map(|s| {
-            let limit = if in_end(an, s.d_in) { 6.0 * r } else { 3.0 * r };
-            (s, -s.release_psi.0.min(s.release_psi.1), limit)
-        })
-        .max_by(|a, b| (a.1 / a.2).total_cmp(&(b.1 / b.2)))?;
-    let (s, f, lim) = worst;
-    let fibre = if s.release_psi.0 <= s.release_psi.1 { "top" } else { "bottom" };
-    let zone = if in_end(an, s.d_in) { "end region, 6√f'ci" } else { "3√f'ci" };
-    Some(CheckResult::new(
-        &TENSION,
-        f,
-        lim,
-        Some(s.x_in),
-        an.note(format_args!("{fibre} fibre tension; {zone}")),
-    ))
+    let top = fibre(an, 0, -1.0, 6.0 * r, 3.0 * r)?;
+    let bot = fibre(an, 1, -1.0, 6.0 * r, 3.0 * r)?;
+    let (p, name) = if bot.ratio > top.ratio || (bot.ratio == top.ratio && bot.value > top.value) {
+        (bot, "bottom")
+    } else {
+        (top, "top")
+    };
+    let z = zone(an, &p, "end region, 6√f'ci", "3√f'ci");
+    let what = if p.value > 0.0 {
+        an.note(format_args!("{name} fibre tension; {z}"))
+    } else {
+        an.note(format_args!(
+            "no tension at release: both fibres in compression (least {:.0} psi, {name} fibre); ratio 0",
+            -p.value
+        ))
+    };
+    Some(CheckResult::tension(&TENSION, -p.value, p.limit, Some(p.x_in), what))
 }

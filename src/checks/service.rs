@@ -8,12 +8,18 @@
 //! transformed section; the uncracked section throughout (§24.5.2.2, valid
 //! for classes U and T). Service loads per [`crate::case::service_moments`].
 //!
+//! Every extreme fibre is checked: the precast top and bottom under both
+//! the sustained and the total load, and the top of a topping. Where the
+//! worst point lies: between stations the stresses are quadratic in x, so
+//! each fibre's maximum is at a station or at its segment's vertex
+//! ([`super::peak`]); the transfer zones are inside the station set.
+//!
 //! Does not cover: cracked-section stresses and crack control of class C
 //! members (§24.5.2.3, §24.3).
 
 use serde::Serialize;
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Peak, peak};
 use crate::case::{Effects, ServiceClass, service_moments};
 use crate::member::{Effective, Member};
 
@@ -24,6 +30,7 @@ pub const TENSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.2.1 (Table 24.5.2.1)",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: true,
 };
 /// Registry entry: compression, sustained.
 pub const SUSTAINED: CheckInfo = CheckInfo {
@@ -32,6 +39,7 @@ pub const SUSTAINED: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), 0.45 f'c",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: true,
 };
 /// Registry entry: compression, total.
 pub const TOTAL: CheckInfo = CheckInfo {
@@ -40,6 +48,7 @@ pub const TOTAL: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), 0.60 f'c",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: true,
 };
 /// Registry entry: topping compression.
 pub const TOPPING: CheckInfo = CheckInfo {
@@ -48,6 +57,7 @@ pub const TOPPING: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), topping f'c",
     unit: "psi",
     group: Group::Stresses,
+    load_driven: true,
 };
 
 /// Service stresses at one station, psi, compression positive.
@@ -57,6 +67,8 @@ pub struct AtStation {
     pub bottom_total_psi: f64,
     /// Precast top fibre, total load.
     pub top_total_psi: f64,
+    /// Precast bottom fibre, sustained load.
+    pub bottom_sustained_psi: f64,
     /// Precast top fibre, sustained load.
     pub top_sustained_psi: f64,
     /// Topping top fibre, total load (0 untopped).
@@ -80,6 +92,7 @@ pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
             AtStation {
                 bottom_total_psi: pre_bot - mnc / b.sb_in3 - mt / c.sb_in3,
                 top_total_psi: pre_top + mnc / b.st_in3 + mt / c.st_precast_in3,
+                bottom_sustained_psi: pre_bot - mnc / b.sb_in3 - ms / c.sb_in3,
                 top_sustained_psi: pre_top + mnc / b.st_in3 + ms / c.st_precast_in3,
                 topping_total_psi: mt / c.st_topping_in3,
                 topping_sustained_psi: ms / c.st_topping_in3,
@@ -88,6 +101,7 @@ pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
         None => AtStation {
             bottom_total_psi: pre_bot - tot / b.sb_in3,
             top_total_psi: pre_top + tot / b.st_in3,
+            bottom_sustained_psi: pre_bot - sus / b.sb_in3,
             top_sustained_psi: pre_top + sus / b.st_in3,
             topping_total_psi: 0.0,
             topping_sustained_psi: 0.0,
@@ -106,24 +120,34 @@ pub fn class_of(ft: f64, fc: f64) -> ServiceClass {
     }
 }
 
-fn max_tension<'s>(an: &'s Analysis) -> Option<(&'s super::Station, f64)> {
-    an.stations
-        .iter()
-        .map(|s| (s, -s.service.bottom_total_psi))
-        .max_by(|a, b| a.1.total_cmp(&b.1))
+/// The service stresses at any x, for the vertex of a segment.
+fn exact(m: &Member, x: f64, d: f64) -> AtStation {
+    at(m, m.effective_at(d), &m.effects(x))
+}
+
+/// One service fibre's worst point against a constant limit.
+fn worst(an: &Analysis, pick: fn(&AtStation) -> f64, limit: f64) -> Option<Peak> {
+    let m = &an.member;
+    peak(an, move |s, _| pick(s), |_, _| limit, |x, d| pick(&exact(m, x, d)))
+}
+
+/// The greatest bottom-fibre tension under total service load (psi,
+/// tension positive) and where it is: stations and segment vertices.
+pub fn max_tension(an: &Analysis) -> Option<Peak> {
+    worst(an, |s| -s.bottom_total_psi, 1.0)
 }
 
 /// The class the member reaches.
 pub fn class_reached(an: &Analysis) -> ServiceClass {
-    max_tension(an).map_or(ServiceClass::U, |(_, ft)| class_of(ft, an.member.mix.fc.get()))
+    max_tension(an).map_or(ServiceClass::U, |p| class_of(p.value, an.member.mix.fc.get()))
 }
 
-/// Tension: the bottom-fibre tension against the limit of the class allowed.
+/// Tension: the bottom-fibre tension (the precompressed tension zone)
+/// against the limit of the class allowed. The maximum is at a station or
+/// a segment vertex ([`super::peak`]).
 pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
-    let (s, ft) = max_tension(an)?;
     let fc = an.member.mix.fc.get();
     let allowed = an.case_class();
-    let class = class_of(ft, fc);
     let (limit, what) = match allowed {
         ServiceClass::U => (7.5 * fc.sqrt(), "class U allowed: 7.5√f'c"),
         ServiceClass::T => (12.0 * fc.sqrt(), "class T allowed: 12√f'c"),
@@ -133,13 +157,17 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
             "class C allowed: no tension limit (12√f'c shown is where class C begins); crack control (24.3) not checked",
         ),
     };
-    let mut r = CheckResult::new(
-        &TENSION,
-        ft,
-        limit,
-        Some(s.x_in),
-        an.note(format_args!("precast bottom fibre, class {} reached; {what}", class.name())),
-    );
+    let p = worst(an, |s| -s.bottom_total_psi, limit)?;
+    let class = class_of(p.value, fc);
+    let note = if p.value > 0.0 {
+        an.note(format_args!("precast bottom fibre, class {} reached; {what}", class.name()))
+    } else {
+        an.note(format_args!(
+            "precast bottom fibre in compression everywhere (least {:.0} psi): no tension, class U; ratio 0",
+            -p.value
+        ))
+    };
+    let mut r = CheckResult::tension(&TENSION, -p.value, limit, Some(p.x_in), note);
     if allowed == ServiceClass::C {
         r.ratio = r.ratio.min(1.0);
         r.pass = true;
@@ -147,70 +175,79 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
     Some(r)
 }
 
-fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, pick: fn(&AtStation) -> f64, fibre: &str) -> Option<CheckResult> {
-    let fc = an.member.mix.fc.get();
-    let (s, f) = an
-        .stations
+/// The worse of several fibres in compression against `k` f′c; each fibre
+/// says whether load raises it (the top fibres) or relieves it (the bottom
+/// fibre, compressed by prestress): the result governs as a load limit
+/// only when such a fibre is the worse.
+fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, fc: f64, fibres: &[(fn(&AtStation) -> f64, &str, bool)]) -> Option<CheckResult> {
+    let (p, name, loaded) = fibres
         .iter()
-        .map(|s| (s, pick(&s.service)))
-        .max_by(|a, b| a.1.total_cmp(&b.1))?;
-    Some(CheckResult::new(
+        .filter_map(|&(pick, name, loaded)| worst(an, pick, k * fc).map(|p| (p, name, loaded)))
+        .max_by(|a, b| a.0.ratio.total_cmp(&b.0.ratio).then(a.0.value.total_cmp(&b.0.value)))?;
+    let mut r = CheckResult::compression(
         info,
-        f,
-        k * fc,
-        Some(s.x_in),
-        an.note(format_args!("{fibre}; f'c = {fc:.0} psi")),
-    ))
+        p.value,
+        p.limit,
+        Some(p.x_in),
+        an.note(format_args!(
+            "{name}; {k:.2} f'c = {:.0} psi (f'c = {fc:.0} psi){}",
+            k * fc,
+            if loaded { "" } else { "; compression from prestress, which load relieves: not a load limit" }
+        )),
+    );
+    r.governs = loaded;
+    Some(r)
 }
 
-/// Compression under prestress + sustained load.
+/// Compression under prestress + sustained load: the precast top and
+/// bottom fibres (near the ends the bottom fibre carries the most), at
+/// every station and segment vertex.
 pub fn run_sustained(an: &Analysis) -> Option<CheckResult> {
-    compression(an, &SUSTAINED, 0.45, |a| a.top_sustained_psi, "precast top fibre")
+    compression(
+        an,
+        &SUSTAINED,
+        0.45,
+        an.member.mix.fc.get(),
+        &[
+            (|a| a.top_sustained_psi, "precast top fibre", true),
+            (|a| a.bottom_sustained_psi, "precast bottom fibre", false),
+        ],
+    )
 }
 
-/// Compression under prestress + total load (top or bottom fibre).
+/// Compression under prestress + total load: the precast top and bottom fibres.
 pub fn run_total(an: &Analysis) -> Option<CheckResult> {
     compression(
         an,
         &TOTAL,
         0.60,
-        |a| a.top_total_psi.max(a.bottom_total_psi),
-        "precast top or bottom fibre",
+        an.member.mix.fc.get(),
+        &[
+            (|a| a.top_total_psi, "precast top fibre", true),
+            (|a| a.bottom_total_psi, "precast bottom fibre", false),
+        ],
     )
 }
 
-/// Topping compression: the worse of sustained (0.45) and total (0.60).
+/// Topping compression: the top of the topping against its own f′c, the
+/// worse of sustained (0.45) and total (0.60) load.
 pub fn run_topping(an: &Analysis) -> Option<CheckResult> {
     let t = an.member.case.topping.as_ref()?;
     let fc = t.mix.fc.get();
-    let sus = an
-        .stations
-        .iter()
-        .map(|s| (s, s.service.topping_sustained_psi))
-        .max_by(|a, b| a.1.total_cmp(&b.1))?;
-    let tot = an
-        .stations
-        .iter()
-        .map(|s| (s, s.service.topping_total_psi))
-        .max_by(|a, b| a.1.total_cmp(&b.1))?;
-    let r = if sus.1 / (0.45 * fc) >= tot.1 / (0.60 * fc) {
-        CheckResult::new(
-            &TOPPING,
-            sus.1,
-            0.45 * fc,
-            Some(sus.0.x_in),
-            an.note(format_args!("sustained load, 0.45 f'c of the topping ({fc:.0} psi)")),
-        )
+    let sus = worst(an, |s| s.topping_sustained_psi, 0.45 * fc)?;
+    let tot = worst(an, |s| s.topping_total_psi, 0.60 * fc)?;
+    let (p, what) = if sus.ratio >= tot.ratio {
+        (sus, "sustained load, 0.45 f'c")
     } else {
-        CheckResult::new(
-            &TOPPING,
-            tot.1,
-            0.60 * fc,
-            Some(tot.0.x_in),
-            an.note(format_args!("total load, 0.60 f'c of the topping ({fc:.0} psi)")),
-        )
+        (tot, "total load, 0.60 f'c")
     };
-    Some(r)
+    Some(CheckResult::compression(
+        &TOPPING,
+        p.value,
+        p.limit,
+        Some(p.x_in),
+        an.note(format_args!("top of the topping, {what} of the topping ({fc:.0} psi)")),
+    ))
 }
 
 impl Analysis<'_> {

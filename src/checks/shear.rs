@@ -1,18 +1,41 @@
-//! One-way shear strength without shear reinforcement, Vu ≤ φVc, at every
-//! station from h/2 off the support face (ACI 318-19 §7.4.3.2 / §9.4.3.2).
+//! One-way shear strength, Vu ≤ φVn, from h/2 off each support face to the
+//! other (ACI 318-19 §7.4.3.2 / §9.4.3.2).
 //!
 //! Clauses: ACI 318-19 §22.5.6.3: Vc the lesser of flexure-shear
 //! Vci = 0.6λ√f′c bw dp + Vd + Vi·Mcre/Mmax ≥ 1.7λ√f′c bw dp (Eq.
 //! 22.5.6.3.1a/b), Mcre = (I/yt)(6λ√f′c + fpe − fd) (Eq. 22.5.6.3.1c), and
 //! web-shear Vcw = (3.5λ√f′c + 0.3 fpc) bw dp + Vp (Eq. 22.5.6.3.2);
-//! dp ≥ 0.8h; √f′c ≤ 100 psi (§22.5.3.1); prestress built up linearly over
-//! 50 db (§22.5.9); φ = 0.75 (Table 21.2.1). Vi = Vu − Vd and Mmax = Mu − Md
-//! (commentary R22.5.6.3.1, reference sheet from memory, medium). bw is the
-//! least summed web width. Hollow-core (a one-way slab) passes with
-//! Vu ≤ φVc (§7.6.3.1); untopped units deeper than 12.5 in also need
-//! Vu ≤ 0.5φVcw ([`DEEP_INFO`]). Double-tee stems are beams: the note names
-//! where Av,min is needed (Vu > 0.5φVc, §9.6.3.1); Vu > φVc fails as it
-//! would need designed stirrups, which are not checked.
+//! dp ≥ 0.8h (§22.5.2.1); √f′c ≤ 100 psi (§22.5.3.1); prestress built up
+//! linearly over 50 db in the transfer zone (§22.5.7 in 318-19 numbering,
+//! §22.5.9 in 318-14 — the 318-19 number from memory, medium); φ = 0.75
+//! (Table 21.2.1). Vi = Vu − Vd and Mmax = Mu − Md (commentary
+//! R22.5.6.3.1, reference sheet from memory, medium). bw is the least
+//! summed web width.
+//!
+//! Hollow-core (a one-way slab) passes with Vu ≤ φVc (§7.6.3.1); untopped
+//! units deeper than 12.5 in also need Vu ≤ 0.5φVcw ([`DEEP_INFO`]).
+//! Double-tee stems are beams (§9.6.3.1): Vn = Vc + Vs (§22.5.1.1), with
+//! Vs = Av fyt d / s (§22.5.8.5.3), fyt ≤ 60 ksi (§20.2.2.4, from memory,
+//! medium), Vs ≤ 8√f′c bw d (§22.5.1.2). A pattern that gives its stem
+//! reinforcement (`web_steel`) is credited with it and checked for Av,min
+//! and spacing by [`super::web_steel`]; a pattern that does not is taken
+//! to receive the ordinary stem reinforcement the producer details (stems
+//! are always reinforced), counted as Vs ≤ 4√f′c bw d — the most before
+//! §9.7.6.2.2 halves the spacing — and the note names the Av/s needed
+//! along the member.
+//!
+//! Where the worst point lies: Vu is piecewise linear (both sides of each
+//! line load are stations) and the parts of Vc are monotone between
+//! stations, so in each segment and combination Vu/φVn is bounded by the
+//! largest Vu at its ends over the least φVn at its ends. Each segment
+//! whose bound exceeds the worst station is searched: the points where Vci
+//! meets its lower bound and where Mcre reaches zero (corners where Vci
+//! stops falling, so the ratio can peak there) are found by root search;
+//! where Vci meets Vcw, Vc = min(Vci, Vcw) has a ridge and the ratio a
+//! trough, never a peak. In each smooth piece the parabola through its
+//! ends and midpoint says whether a peak near the worst point lies inside,
+//! which is then searched by successive parabolas ([`super::refine_max`]). Vci is found per
+//! combination, since Vi and Mmax must occur together.
 
 use serde::Serialize;
 
@@ -21,13 +44,14 @@ use crate::case::Effects;
 use crate::member::{Effective, Member};
 use crate::section::Family;
 
-/// Registry entry: Vu ≤ φVc.
+/// Registry entry: Vu ≤ φVn.
 pub const INFO: CheckInfo = CheckInfo {
     id: "shear",
-    title: "Shear strength (Vci, Vcw)",
-    clause: "ACI 318-19 22.5.6.3, 22.5.9, 7.6.3.1 / 9.6.3.1; φ 21.2.1",
+    title: "Shear strength (Vci, Vcw, Vs)",
+    clause: "ACI 318-19 22.5.6.3, 22.5.7, 22.5.8.5.3, 22.5.1.2, 7.6.3.1 / 9.6.3.1; φ 21.2.1",
     unit: "kip",
     group: Group::Shear,
+    load_driven: true,
 };
 
 /// Registry entry: deep untopped hollow-core.
@@ -37,26 +61,94 @@ pub const DEEP_INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 7.6.3.1",
     unit: "kip",
     group: Group::Shear,
+    load_driven: true,
 };
 
-/// Shear strength at one station, lbf.
+/// Shear strength under one load combination at one point, lbf.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
-pub struct AtStation {
-    /// Flexure-shear strength.
+pub struct Combo {
+    /// Which combination (index into [`crate::case::COMBINATIONS`]).
+    pub combo: u8,
+    /// Factored shear.
+    pub vu_lbf: f64,
+    /// Flexure-shear strength by Eq. 22.5.6.3.1a, before its lower bound,
+    /// with Vi and Mmax of this combination.
+    pub vci_raw_lbf: f64,
+    /// Its lower bound 1.7λ√f′c bw dp (Eq. 22.5.6.3.1b).
+    pub vci_min_lbf: f64,
+    /// Flexure-shear strength (with the lower bound).
     pub vci_lbf: f64,
     /// Web-shear strength.
     pub vcw_lbf: f64,
-    /// φVc.
+    /// φVc, concrete alone.
     pub phi_vc_lbf: f64,
-    /// Factored shear.
-    pub vu_lbf: f64,
+    /// Shear reinforcement strength counted, Vs.
+    pub vs_lbf: f64,
+    /// φVn = φ(Vc + Vs).
+    pub phi_vn_lbf: f64,
+    /// Effective depth dp (≥ 0.8h), in.
+    pub dp_in: f64,
+    /// Mcre of Eq. 22.5.6.3.1c before it is floored at 0 (negative where
+    /// the dead load alone would crack the section), lbf·in.
+    pub mcre_raw_lbin: f64,
 }
 
-const PHI: f64 = 0.75;
+/// Shear at one station: each combination (Vi and Mmax of Eq.
+/// 22.5.6.3.1a occur together, so Vci is found per combination), the one
+/// with the highest Vu/φVn first in `gov`.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct AtStation {
+    /// Every combination, in the order of [`crate::case::COMBINATIONS`].
+    pub combos: [Combo; 3],
+    /// Index of the combination with the highest Vu/φVn.
+    pub gov: u8,
+}
 
-/// Shear strength at distance `d` from the end, with the station's effects
-/// and factored Mu, Vu.
-pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects, mu: f64, vu: f64) -> AtStation {
+impl AtStation {
+    /// The combination with the highest Vu/φVn.
+    pub fn gov(&self) -> &Combo {
+        &self.combos[self.gov as usize]
+    }
+    /// Factored shear of the governing combination, lbf.
+    pub fn vu_lbf(&self) -> f64 {
+        self.gov().vu_lbf
+    }
+    /// φVn of the governing combination, lbf.
+    pub fn phi_vn_lbf(&self) -> f64 {
+        self.gov().phi_vn_lbf
+    }
+}
+
+impl Combo {
+    /// The name of its combination, as printed.
+    pub fn name(&self) -> &'static str {
+        crate::case::COMBINATIONS[self.combo as usize].name
+    }
+}
+
+/// Strength reduction factor for shear, Table 21.2.1.
+pub const PHI: f64 = 0.75;
+/// Largest yield strength counted in shear reinforcement, psi (ACI 318-19
+/// §20.2.2.4, Table 20.2.2.4(a); from memory, medium).
+pub const FYT_MAX_PSI: f64 = 60_000.0;
+
+/// Whether the member's shear strength may count stem reinforcement (a
+/// stemmed member: double tee).
+pub fn stemmed(m: &Member) -> bool {
+    m.section.family == Family::DoubleTee
+}
+
+/// Vs the given stem reinforcement provides (all stems), before the
+/// §22.5.1.2 cap, lbf.
+pub fn vs_provided(m: &Member, dp: f64) -> Option<f64> {
+    let w = m.pattern.web_steel?;
+    let n = m.section.geometry.stems.len().max(1) as f64;
+    Some(n * w.area.get() * w.fy.get().min(FYT_MAX_PSI) * dp / w.spacing.get())
+}
+
+/// Shear strength at distance `d` from the end, from the station's
+/// unfactored effects: every combination of ASCE 7-16 §2.3.1.
+pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects) -> AtStation {
     let lam = m.mix.aggregate.lambda();
     let rt = m.mix.fc.get().sqrt().min(100.0);
     let b = m.bare;
@@ -70,56 +162,251 @@ pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects, mu: f64, vu: f64) -
         Some(c) => {
             // stress at the composite centroid (or the web–flange junction
             // when that centroid lies in the flange) from prestress and the
-            // moments the precast carries alone
-            let y_web_top = b.depth_in - b.top_flange_in;
+            // moments the precast carries alone; a solid section has no
+            // flange apart from its web, so its centroid is used as it is
+            let solid = b.top_flange_in >= b.depth_in - 1e-9;
+            let y_web_top = if solid { f64::INFINITY } else { b.depth_in - b.top_flange_in };
             let yr = c.yb_in.min(y_web_top) - b.yb_in;
             let fpc = pe / b.area_in2 - pe * e * yr / b.ix_in4 + mnc * yr / b.ix_in4;
             (c.sb_in3, mnc / b.sb_in3 + eff.m_sdl / c.sb_in3, fpc)
         }
         None => (b.sb_in3, eff.m_dead() / b.sb_in3, pe / b.area_in2),
     };
-    let mcre = s_ext * (6.0 * lam * rt + fpe - fd);
+    let mcre_raw = s_ext * (6.0 * lam * rt + fpe - fd);
+    let mcre = mcre_raw.max(0.0);
     let vd = eff.v_dead().abs();
-    let vi = (vu - vd).max(0.0);
-    let mmax = (mu - eff.m_dead()).max(1e-6);
-    let vci = (0.6 * lam * rt * bw * dp + vd + vi * mcre.max(0.0) / mmax).max(1.7 * lam * rt * bw * dp);
     let vcw = (3.5 * lam * rt + 0.3 * fpc) * bw * dp + m.vp_at(d);
-    AtStation {
-        vci_lbf: vci,
-        vcw_lbf: vcw,
-        phi_vc_lbf: PHI * vci.min(vcw),
-        vu_lbf: vu,
+    let vci_min = 1.7 * lam * rt * bw * dp;
+    // §22.5.1.2: Vs counted at most 8√f′c bw d; stems whose reinforcement
+    // the catalog does not give are taken to receive ordinary stem
+    // reinforcement, at most 4√f′c bw d (beyond it §9.7.6.2.2 halves the
+    // spacing)
+    let rfc = m.mix.fc.get().sqrt();
+    let vs = if stemmed(m) {
+        vs_provided(m, dp).map_or(4.0 * rfc * bw * dp, |v| v.min(8.0 * rfc * bw * dp))
+    } else {
+        0.0
+    };
+    let mut k = 0u8;
+    let combos = crate::case::COMBINATIONS.map(|c| {
+        let (mu, v) = c.apply(eff);
+        k += 1;
+        let vu = v.abs();
+        let vi = (vu - vd).max(0.0);
+        let mmax = (mu - eff.m_dead()).max(1e-6);
+        let vci_raw = 0.6 * lam * rt * bw * dp + vd + vi * mcre / mmax;
+        let vci = vci_raw.max(vci_min);
+        let vc = vci.min(vcw).max(0.0);
+        Combo {
+            combo: k - 1,
+            vu_lbf: vu,
+            vci_raw_lbf: vci_raw,
+            vci_min_lbf: vci_min,
+            vci_lbf: vci,
+            vcw_lbf: vcw,
+            phi_vc_lbf: PHI * vc,
+            vs_lbf: vs,
+            phi_vn_lbf: PHI * (vc + vs),
+            dp_in: dp,
+            mcre_raw_lbin: mcre_raw,
+        }
+    });
+    let gov = combos
+        .iter()
+        .max_by(|a, b| (a.vu_lbf * b.phi_vn_lbf).total_cmp(&(b.vu_lbf * a.phi_vn_lbf)))
+        .map_or(0, |c| c.combo);
+    AtStation { combos, gov }
+}
+
+/// Shear strength at any x of the span.
+pub fn at_x(m: &Member, x: f64) -> AtStation {
+    let d = m.end_distance(x);
+    at(m, d, m.effective_at(d), &m.effects(x))
+}
+
+/// The worst point of a shear ratio over the member.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Worst {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// The combination there that gives the ratio.
+    pub combo: Combo,
+    /// The ratio.
+    pub ratio: f64,
+}
+
+/// The greatest of demand ÷ capacity over the shear range and the
+/// combinations, at the stations and between them (see the module comment
+/// for why this finds it).
+pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f64) -> Option<Worst> {
+    let m = &an.member;
+    let ratio = |c: &Combo| {
+        let cap = capacity(c);
+        if cap > 0.0 { demand(c) / cap } else { super::RATIO_NONE }
+    };
+    let top = |a: &AtStation| -> (usize, f64) {
+        (0..3).map(|i| (i, ratio(&a.combos[i]))).max_by(|a, b| a.1.total_cmp(&b.1)).expect("three")
+    };
+    let pts: Vec<(f64, AtStation)> = an.stations.iter().filter_map(|s| s.shear.map(|v| (s.x_in, v))).collect();
+    let mut best = pts
+        .iter()
+        .map(|(x, a)| {
+            let (i, r) = top(a);
+            Worst { x_in: *x, combo: a.combos[i], ratio: r }
+        })
+        .max_by(|a, b| a.ratio.total_cmp(&b.ratio))?;
+    // a point is searched further only when a first estimate comes within
+    // this fraction of the worst point found
+    const SCREEN: f64 = 2e-3;
+    for w in pts.windows(2) {
+        let ((x0, a0), (x1, a1)) = (w[0], w[1]);
+        if x1 - x0 < 1e-6 {
+            continue;
+        }
+        let mut mid: Option<AtStation> = None;
+        for i in 0..3 {
+            let (c0, c1) = (a0.combos[i], a1.combos[i]);
+            let cap = capacity(&c0).min(capacity(&c1));
+            let bound = if cap > 0.0 {
+                demand(&c0).max(demand(&c1)) / cap
+            } else {
+                super::RATIO_NONE
+            };
+            if bound <= best.ratio * (1.0 + 1e-12) {
+                continue;
+            }
+            let combo_at = |x: f64| at_x(m, x).combos[i];
+            let keep = |best: &mut Worst, x: f64, c: Combo| {
+                let r = ratio(&c);
+                if r > best.ratio {
+                    *best = Worst { x_in: x, combo: c, ratio: r };
+                }
+            };
+            // the kinks of Vc inside the segment where the ratio can peak —
+            // Vci meeting its lower bound and Mcre reaching zero, both
+            // corners where Vci stops falling — split it into smooth pieces;
+            // the ratio at a kink is taken as it is. (Where Vci meets Vcw,
+            // Vc = min(Vci, Vcw) has a ridge, so Vu/φVn has a trough there:
+            // never a maximum.)
+            let mut cuts = [(x0, c0), (x1, c1), (x1, c1), (x1, c1)];
+            let mut n = 2;
+            for g in [
+                (|c: &Combo| c.vci_raw_lbf - c.vci_min_lbf) as fn(&Combo) -> f64,
+                |c: &Combo| c.mcre_raw_lbin,
+            ] {
+                let (g0, g1) = (g(&c0), g(&c1));
+                if g0 * g1 < 0.0 {
+                    let xk = super::root(|x| g(&combo_at(x)), x0, g0, x1, g1);
+                    let ck = combo_at(xk);
+                    keep(&mut best, xk, ck);
+                    cuts[n] = (xk, ck);
+                    n += 1;
+                }
+            }
+            let cuts = &mut cuts[..n];
+            cuts.sort_by(|a, b| a.0.total_cmp(&b.0));
+            // each smooth piece: the parabola through its ends and midpoint
+            // says whether a peak near the worst point lies inside; only
+            // then is it searched
+            for piece in cuts.windows(2) {
+                let ((xa, ca), (xb, cb)) = (piece[0], piece[1]);
+                if xb - xa < 1e-6 {
+                    continue;
+                }
+                let xm = 0.5 * (xa + xb);
+                let cm = if n == 2 {
+                    mid.get_or_insert_with(|| at_x(m, xm)).combos[i]
+                } else {
+                    combo_at(xm)
+                };
+                keep(&mut best, xm, cm);
+                let (r0, rm, r1) = (ratio(&ca), ratio(&cm), ratio(&cb));
+                let (b, c) = (4.0 * rm - 3.0 * r0 - r1, 2.0 * r0 + 2.0 * r1 - 4.0 * rm);
+                if c < 0.0 {
+                    let t = -b / (2.0 * c);
+                    let est = r0 + b * t + c * t * t;
+                    if t > 0.0 && t < 1.0 && est > best.ratio * (1.0 - SCREEN) {
+                        let (x, _) = super::refine_max(|x| ratio(&combo_at(x)), xa, r0, xb, r1);
+                        keep(&mut best, x, combo_at(x));
+                    }
+                }
+            }
+        }
     }
+    Some(best)
+}
+
+/// Av/s the member needs at a point (all stems, in²/in), fyt = 60 ksi:
+/// Av,min/s where Vu > 0.5φVc (§9.6.3.1, Table 9.6.3.4), and enough for
+/// Vs = Vu/φ − Vc where Vu > φVc (§22.5.8.5.3); 0 elsewhere.
+pub fn av_s_needed(m: &Member, a: &Combo) -> f64 {
+    if a.vu_lbf <= 0.5 * a.phi_vc_lbf {
+        return 0.0;
+    }
+    let min = av_min_per_length(m, a.dp_in, FYT_MAX_PSI);
+    let vc = a.phi_vc_lbf / PHI;
+    let strength = ((a.vu_lbf / PHI - vc) / (FYT_MAX_PSI * a.dp_in)).max(0.0);
+    min.max(strength)
+}
+
+/// Av,min ÷ s for the whole member (in²/in), ACI 318-19 Table 9.6.3.4
+/// (9.6.3.3 in 318-14; numbering and expressions from memory, medium): for
+/// prestressed members with Aps fse ≥ 0.4 Aps fpu, the lesser of the
+/// greater of 0.75√f′c bw/fyt and 50 bw/fyt, and Aps fpu/(80 fyt d)·√(d/bw);
+/// otherwise the first.
+pub fn av_min_per_length(m: &Member, d: f64, fyt: f64) -> f64 {
+    let bw = m.bare.web_width_min_in;
+    let fc = m.mix.fc.get();
+    let general = (0.75 * fc.sqrt() * bw / fyt).max(50.0 * bw / fyt);
+    let fpu = m.strand.fpu.get();
+    if m.history.fse_psi >= 0.4 * fpu {
+        general.min(m.aps * fpu / (80.0 * fyt * d) * (d / bw).sqrt())
+    } else {
+        general
+    }
+}
+
+/// The greatest Vu/φVn (found once per analysis).
+pub fn worst_vn(an: &Analysis) -> Option<Worst> {
+    *an.shear_worst.get_or_init(|| worst(an, |a| a.vu_lbf, |a| a.phi_vn_lbf))
 }
 
 /// Run the check.
 pub fn run(an: &Analysis) -> Option<CheckResult> {
-    let shear: Vec<(&super::Station, &AtStation)> = an.stations.iter().filter_map(|s| s.shear.as_ref().map(|v| (s, v))).collect();
-    let (s, v) = shear
-        .iter()
-        .copied()
-        .max_by(|a, b| (a.1.vu_lbf / a.1.phi_vc_lbf).total_cmp(&(b.1.vu_lbf / b.1.phi_vc_lbf)))?;
+    let w = worst_vn(an)?;
+    let v = w.combo;
+    let m = &an.member;
     let governs = if v.vci_lbf <= v.vcw_lbf {
         "Vci (flexure-shear)"
     } else {
         "Vcw (web-shear)"
     };
-    let mut note = an.note(format_args!("{governs} governs; {}", s.vu_combo));
-    if an.member.section.family == Family::DoubleTee {
-        let need: Vec<f64> = shear
+    let mut note = an.note(format_args!("{governs} governs; {}", v.name()));
+    if stemmed(m) && !an.brief {
+        let n = m.section.geometry.stems.len().max(1) as f64;
+        let need: Vec<(f64, f64)> = an
+            .stations
             .iter()
-            .filter(|(_, v)| v.vu_lbf > 0.5 * v.phi_vc_lbf)
-            .map(|(s, _)| s.x_in / 12.0)
+            .filter_map(|s| s.shear.map(|a| (s.x_in / 12.0, a.combos.iter().map(|c| av_s_needed(m, c)).fold(0.0, f64::max))))
+            .filter(|&(_, r)| r > 0.0)
             .collect();
-        if let (Some(a), Some(b)) = (need.first(), need.last()) {
-            note.push_str(&an.note(format_args!(
-                "; stems need Av,min (9.6.3.1, Vu > 0.5φVc) over {a:.1}–{b:.1} ft; designed stirrups beyond φVc are not checked"
-            )));
-        } else {
-            note.push_str("; Vu ≤ 0.5φVc throughout: no web reinforcement required (9.6.3.1)");
+        let most = need.iter().map(|n| n.1).fold(0.0, f64::max) * 12.0 / n;
+        match (m.pattern.web_steel, need.first(), need.last()) {
+            (Some(ws), _, _) => note.push_str(&format!(
+                "; stem reinforcement {:.3} in² at {:.1} in per stem (fyt {:.0} ksi counted): Vs = {:.1} kip",
+                ws.area.get(),
+                ws.spacing.get(),
+                ws.fy.get().min(FYT_MAX_PSI) / 1000.0,
+                kip(v.vs_lbf)
+            )),
+            (None, Some(a), Some(b)) => note.push_str(&format!(
+                "; no stem reinforcement in the catalog: the stems need Av/s up to {most:.3} in²/ft per stem (fyt 60 ksi) over {:.1}–{:.1} ft (Av,min where Vu > 0.5φVc, §9.6.3.1; more where Vu > φVc); ordinary stem reinforcement assumed, Vs counted up to 4√f'c bw d",
+                a.0, b.0
+            )),
+            (None, _, _) => note.push_str("; Vu ≤ 0.5φVc throughout: no stem reinforcement required (9.6.3.1)"),
         }
     }
-    Some(CheckResult::new(&INFO, kip(v.vu_lbf), kip(v.phi_vc_lbf), Some(s.x_in), note))
+    Some(CheckResult::new(&INFO, kip(v.vu_lbf), kip(v.phi_vn_lbf), Some(w.x_in), note))
 }
 
 /// Untopped hollow-core deeper than 12.5 in: Vu ≤ 0.5φVcw (§7.6.3.1).
@@ -128,16 +415,12 @@ pub fn run_deep(an: &Analysis) -> Option<CheckResult> {
     if m.section.family != Family::HollowCore || m.comp.is_some() || m.bare.depth_in <= 12.5 * (1.0 + 1e-9) {
         return None;
     }
-    let (s, v) = an
-        .stations
-        .iter()
-        .filter_map(|s| s.shear.as_ref().map(|v| (s, v)))
-        .max_by(|a, b| (a.1.vu_lbf / a.1.vcw_lbf).total_cmp(&(b.1.vu_lbf / b.1.vcw_lbf)))?;
+    let w = worst(an, |a| a.vu_lbf, |a| 0.5 * PHI * a.vcw_lbf)?;
     Some(CheckResult::new(
         &DEEP_INFO,
-        kip(v.vu_lbf),
-        kip(0.5 * PHI * v.vcw_lbf),
-        Some(s.x_in),
+        kip(w.combo.vu_lbf),
+        kip(0.5 * PHI * w.combo.vcw_lbf),
+        Some(w.x_in),
         an.note(format_args!(
             "untopped depth {:.1} in > 12.5 in; no stirrups in hollow-core",
             m.bare.depth_in

@@ -15,6 +15,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 25.2.3",
     unit: "in",
     group: Group::Strand,
+    load_driven: false,
 };
 
 /// Run the check; demand is the required spacing, capacity the least given.

@@ -19,13 +19,14 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "simply supported beam, f = (π/2)√(gEI/wL⁴); threshold by the case",
     unit: "Hz",
     group: Group::Deflection,
+    load_driven: true,
 };
 
 /// The frequency, Hz.
 pub fn frequency(m: &Member) -> f64 {
     let w = m.w[0] + m.w[1] + m.w[2] + 0.1 * m.w[3];
     let i = m.comp.map_or(m.bare.ix_in4, |c| c.ix_in4);
-    let e = m.mix.ec().get();
+    let e = m.ec;
     std::f64::consts::FRAC_PI_2 * (G_IN_PER_S2 * e * i / (w * m.l.powi(4))).sqrt()
 }
 

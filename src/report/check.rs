@@ -247,7 +247,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
                 phi_mn_kipft: kipft(s.flexure.phi_mn_lbin),
                 mcr_kipft: kipft(s.flexure.mcr_lbin),
                 vu_kip: kip(s.vu_lbf),
-                phi_vc_kip: s.shear.map(|v| kip(v.phi_vc_lbf)),
+                phi_vc_kip: s.shear.map(|v| kip(v.phi_vn_lbf())),
                 f_top_release_psi: s.release_psi.0,
                 f_bottom_release_psi: s.release_psi.1,
                 f_top_service_psi: s.service.top_total_psi,
@@ -378,7 +378,7 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
             } else {
                 "none".into()
             },
-            c.info.unit,
+            c.unit,
             c.ratio,
             if c.pass { "yes" } else { "NO" },
             c.station_ft.map_or("-".into(), |x| format!("{x:.2}"))

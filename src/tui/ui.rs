@@ -261,7 +261,7 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             ),
             Span::raw(format!(
                 "{:<34.34} {:>9.2} / {:>9.2} {:<6} {:>5.2}",
-                ch.info.title, ch.demand, ch.capacity, ch.info.unit, ch.ratio
+                ch.info.title, ch.demand, ch.capacity, ch.unit, ch.ratio
             )),
         ];
         if wide {

@@ -5,7 +5,7 @@ use toml::Spanned;
 use super::{Ctx, PUBLISHED_TOLERANCE, Refs, join, limits, span};
 use crate::catalog::diag::suggestion;
 use crate::catalog::raw::{self, RawPattern, S};
-use crate::catalog::{Bar, FamilySpec, Pattern, Published, Row, Section};
+use crate::catalog::{Bar, FamilySpec, Pattern, Published, Row, Section, WebSteel};
 use crate::material::{Mix, builtin_strand, builtin_strand_names};
 use crate::section::Family;
 use crate::section::family::fmt;
@@ -336,7 +336,28 @@ pub(super) fn pattern(
             _ => rows_ok = false,
         }
     }
-    let (strand, jacking, hold_down, price, max_length) = (strand?, jacking?, hold_down?, price?, max_length?);
+    let web_steel = match &r.web_steel {
+        None => Some(None),
+        Some(w) => {
+            let wpath = join(path, "web_steel");
+            if family != Family::DoubleTee {
+                cx.rep.error(
+                    Some(w.span()),
+                    &wpath,
+                    format!("web_steel is the shear reinforcement of double-tee stems; a {} section has no stems", family.name()),
+                );
+            }
+            let rw = w.get_ref();
+            let area = cx.ranged::<crate::units::AreaK>(&rw.area, &wpath, "area", limits::WEB_A_IN2, "in2");
+            let spacing = cx.ranged::<crate::units::LengthK>(&rw.spacing, &wpath, "spacing", limits::WEB_S_IN, "in");
+            let fy = cx.ranged::<crate::units::StressK>(&rw.fy, &wpath, "fy", limits::FY_KSI, "ksi");
+            match (area, spacing, fy) {
+                (Some(area), Some(spacing), Some(fy)) if family == Family::DoubleTee => Some(Some(WebSteel { area, spacing, fy })),
+                _ => None,
+            }
+        }
+    };
+    let (strand, jacking, hold_down, price, max_length, web_steel) = (strand?, jacking?, hold_down?, price?, max_length?, web_steel?);
     if !rows_ok || rows.is_empty() {
         return None;
     }
@@ -348,6 +369,7 @@ pub(super) fn pattern(
         hold_down: if depressed { hold_down } else { None },
         rows,
         bars,
+        web_steel,
         price,
         max_length,
         remarks,
