@@ -20,6 +20,7 @@ pub mod service;
 pub mod shear;
 pub mod spacing;
 pub mod vibration;
+pub mod web_steel;
 
 use serde::Serialize;
 
@@ -50,6 +51,21 @@ pub enum Group {
     Production,
 }
 
+/// How a check's numbers read when it fails.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Reads {
+    /// A demand against a capacity: "53.8 kip-ft against 41.0 kip-ft".
+    Demand,
+    /// A fibre stress against its limit, in the sign convention
+    /// (compression positive, tension negative).
+    Stress,
+    /// Something needed against what the member has: "needs 1.25 in, has 0.75 in".
+    Need,
+    /// A fire rating in hours: "needs 2 h, reaches 1½ h".
+    Hours,
+}
+
 /// What a check is, independent of any member: the registry entry.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct CheckInfo {
@@ -63,6 +79,8 @@ pub struct CheckInfo {
     pub unit: &'static str,
     /// Group, for the failure order.
     pub group: Group,
+    /// How its numbers read in a failure reason.
+    pub reads: Reads,
     /// Whether the check limits the load a member carries: only such a
     /// check can govern (a requirement the load cannot change — release
     /// stresses, cover, fire, strand sanity, length — passes or fails but
@@ -98,7 +116,7 @@ pub struct CheckResult {
 impl Serialize for CheckResult {
     fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
         use serde::ser::SerializeStruct;
-        let mut m = s.serialize_struct("CheckResult", 11)?;
+        let mut m = s.serialize_struct("CheckResult", 12)?;
         m.serialize_field("id", self.info.id)?;
         m.serialize_field("title", self.info.title)?;
         m.serialize_field("clause", self.info.clause)?;
@@ -110,6 +128,7 @@ impl Serialize for CheckResult {
         m.serialize_field("station_ft", &self.station_ft)?;
         m.serialize_field("note", &self.note)?;
         m.serialize_field("group", &self.info.group)?;
+        m.serialize_field("governs", &self.governs)?;
         m.end()
     }
 }
@@ -159,6 +178,36 @@ impl CheckResult {
     }
 }
 
+impl CheckResult {
+    /// By how much it falls short, in words a reader of the check expects:
+    /// a rating is in hours and a requirement is "needs / has", never a
+    /// percentage.
+    pub fn shortfall(&self) -> String {
+        let u = self.unit;
+        match self.info.reads {
+            Reads::Hours => format!(
+                "needs {} h, reaches {}",
+                fire::fmt_h(self.demand),
+                if self.capacity < 1.0 {
+                    "less than 1 h".to_string()
+                } else {
+                    format!("{} h", fire::fmt_h(self.capacity))
+                }
+            ),
+            Reads::Need => format!("needs {:.2} {u}, has {:.2} {u}", self.demand, self.capacity),
+            Reads::Stress if self.capacity < 0.0 => format!(
+                "tension {:.0} {u} against the {:.0} {u} allowed (ratio {:.2})",
+                -self.demand, -self.capacity, self.ratio
+            ),
+            Reads::Stress => format!(
+                "compression {:.0} {u} against the {:.0} {u} allowed (ratio {:.2})",
+                self.demand, self.capacity, self.ratio
+            ),
+            Reads::Demand => format!("{:.2} {u} against {:.2} {u} (ratio {:.2})", self.demand, self.capacity, self.ratio),
+        }
+    }
+}
+
 /// The ratio reported when there is no capacity at all (kept finite for output).
 pub const RATIO_NONE: f64 = 999.0;
 
@@ -189,6 +238,10 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: shear::DEEP_INFO,
         run: shear::run_deep,
+    },
+    Check {
+        info: web_steel::INFO,
+        run: web_steel::run,
     },
     Check {
         info: horizontal_shear::INFO,
@@ -348,27 +401,37 @@ pub fn peak(
     };
     for s in &an.stations {
         let (v, lim) = (q(&s.service, s.release_psi), limit(s.d_in, true));
-        keep(&mut best, Peak {
-            x_in: s.x_in,
-            d_in: s.d_in,
-            value: v,
-            limit: lim,
-            ratio: ratio(v, lim),
-        });
+        keep(
+            &mut best,
+            Peak {
+                x_in: s.x_in,
+                d_in: s.d_in,
+                value: v,
+                limit: lim,
+                ratio: ratio(v, lim),
+            },
+        );
     }
     for (w, m) in an.stations.windows(2).zip(&an.mids) {
-        let (v0, v1, vm) = (q(&w[0].service, w[0].release_psi), q(&w[1].service, w[1].release_psi), q(&m.service, m.release_psi));
+        let (v0, v1, vm) = (
+            q(&w[0].service, w[0].release_psi),
+            q(&w[1].service, w[1].release_psi),
+            q(&m.service, m.release_psi),
+        );
         let lim = limit(m.d_in, false);
         // f(t) = v0 + b t + c t², t from 0 to 1 over the segment
         let b = 4.0 * vm - 3.0 * v0 - v1;
         let c = 2.0 * v0 + 2.0 * v1 - 4.0 * vm;
-        keep(&mut best, Peak {
-            x_in: m.x_in,
-            d_in: m.d_in,
-            value: vm,
-            limit: lim,
-            ratio: ratio(vm, lim),
-        });
+        keep(
+            &mut best,
+            Peak {
+                x_in: m.x_in,
+                d_in: m.d_in,
+                value: vm,
+                limit: lim,
+                ratio: ratio(vm, lim),
+            },
+        );
         if c < 0.0 {
             let t = -b / (2.0 * c);
             let top = v0 + b * t + c * t * t;
@@ -376,13 +439,16 @@ pub fn peak(
                 let x = w[0].x_in + t * (w[1].x_in - w[0].x_in);
                 let d = an.member.end_distance(x);
                 let v = exact(x, d);
-                keep(&mut best, Peak {
-                    x_in: x,
-                    d_in: d,
-                    value: v,
-                    limit: lim,
-                    ratio: ratio(v, lim),
-                });
+                keep(
+                    &mut best,
+                    Peak {
+                        x_in: x,
+                        d_in: d,
+                        value: v,
+                        limit: lim,
+                        ratio: ratio(v, lim),
+                    },
+                );
             }
         }
     }
@@ -447,7 +513,11 @@ pub fn refine_max(mut f: impl FnMut(f64) -> f64, a: f64, fa: f64, b: f64, fb: f6
         let fv = f(v);
         // keep a bracket around the best point
         p = if v < x1 {
-            if fv >= y1 { [(x0, y0), (v, fv), (x1, y1)] } else { [(v, fv), (x1, y1), (x2, y2)] }
+            if fv >= y1 {
+                [(x0, y0), (v, fv), (x1, y1)]
+            } else {
+                [(v, fv), (x1, y1), (x2, y2)]
+            }
         } else if fv >= y1 {
             [(x1, y1), (v, fv), (x2, y2)]
         } else {
@@ -742,7 +812,10 @@ fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure
 /// The analysis from its stations: camber and frequency added.
 fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: fire::Fire, brief: bool, full: Vec<f64>) -> Analysis<'a> {
     let frequency_hz = vibration::frequency(&member);
-    let mids = stations.windows(2).map(|w| Mid::at(&member, (w[0].x_in + w[1].x_in) / 2.0)).collect();
+    let mids = stations
+        .windows(2)
+        .map(|w| Mid::at(&member, (w[0].x_in + w[1].x_in) / 2.0))
+        .collect();
     let mut an = Analysis {
         member,
         stations,

@@ -21,7 +21,7 @@ pub enum Objective {
     Lightest,
     /// Least overall depth (topping included).
     Shallowest,
-    /// Least prestressing steel per plan area.
+    /// Least strand area per foot of member width.
     LeastSteel,
     /// Lowest price per plan area (entries without a price last).
     Cheapest,

@@ -54,7 +54,7 @@ pub struct Effective {
     pub pe: f64,
     /// Its height, in.
     pub y: f64,
-    /// Force transferred over 50 db (shear, ACI 318-19 §22.5.9.1), lbf.
+    /// Force transferred over 50 db (shear, ACI 318-19 §22.5.7), lbf.
     pub pe_shear: f64,
     /// Its height, in.
     pub y_shear: f64,

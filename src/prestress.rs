@@ -170,8 +170,9 @@ pub fn transfer_length(fse: f64, db: f64) -> f64 {
     fse / 3000.0 * db
 }
 
-/// Transfer length for shear: 50 db for strand, ACI 318-19 §22.5.9.1
-/// (reference sheet §4.6, from memory, high confidence), in.
+/// Transfer length for shear: 50 db for strand, ACI 318-19 §22.5.7 (§22.5.9
+/// in 318-14; the 318-19 number from memory, medium)
+/// (reference sheet §4.6, the 50 db from memory, high confidence), in.
 pub fn transfer_length_shear(db: f64) -> f64 {
     50.0 * db
 }

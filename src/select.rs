@@ -57,8 +57,8 @@ pub struct Metrics {
     pub weight_psf: f64,
     /// Depth with topping, in.
     pub depth_in: f64,
-    /// Prestressing steel, in² per ft² of plan.
-    pub steel_in2_per_ft2: f64,
+    /// Prestressing strand area per foot of member width, in²/ft.
+    pub strand_in2_per_ft: f64,
     /// Price per ft² (None when the catalog gives none).
     pub price_per_ft2: Option<f64>,
     /// Governing ratio.
@@ -178,7 +178,7 @@ pub fn metrics(e: &Entry, case: &DesignCase, ev: &Evaluation) -> Metrics {
     Metrics {
         weight_psf: self_psf + top_psf,
         depth_in: e.section.props.depth_in + e.topping.map_or(0.0, |t| t.get()),
-        steel_in2_per_ft2: e.pattern.aps() / b * 144.0,
+        strand_in2_per_ft: e.pattern.aps() / b * 12.0,
         price_per_ft2: price,
         governing_ratio: ev.governing().ratio,
     }
@@ -188,7 +188,7 @@ fn key(o: Objective, m: &Metrics) -> f64 {
     match o {
         Objective::Lightest => m.weight_psf,
         Objective::Shallowest => m.depth_in,
-        Objective::LeastSteel => m.steel_in2_per_ft2,
+        Objective::LeastSteel => m.strand_in2_per_ft,
         Objective::Cheapest => m.price_per_ft2.unwrap_or(f64::MAX),
         Objective::MostReserve => m.governing_ratio,
     }
@@ -294,17 +294,12 @@ pub fn rank_bay<'c>(cat: &'c Catalog, bay: &Bay, objective: Option<Objective>) -
     BayRanking { viable, failing }
 }
 
-/// "Flexural strength 1.18" — the first failure in order of importance and by how much.
+/// "Flexural strength: 53.8 kip-ft against 41.0 kip-ft (ratio 1.31)" —
+/// the first failure in order of importance and by how much, in the
+/// check's own terms ([`crate::checks::CheckResult::shortfall`]).
 pub fn failure_reason(r: &Ranked) -> String {
     match r.verdict.first_failure() {
-        Some(f) => format!(
-            "{} ({:.0} % over: {:.2} vs {:.2} {})",
-            f.info.title,
-            (f.ratio - 1.0) * 100.0,
-            f.demand,
-            f.capacity,
-            f.unit
-        ),
+        Some(f) => format!("{}: {}", f.info.title, f.shortfall()),
         None => "passes".into(),
     }
 }
@@ -327,7 +322,7 @@ mod tests {
             assert!(w[0].metrics.weight_psf <= w[1].metrics.weight_psf + 1e-9);
         }
         for f in &r.failing {
-            assert!(failure_reason(f).contains("% over"));
+            assert!(failure_reason(f).contains(f.verdict.first_failure().unwrap().info.title));
         }
     }
 

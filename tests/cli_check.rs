@@ -72,7 +72,7 @@ fn json_keys_carry_units() {
         "loss_cr_ksi",
         "loss_sh_ksi",
         "loss_re_ksi",
-        "phi_vc_kip",
+        "phi_vn_kip",
         "vu_kip",
         "transfer_length_in",
         "member_length_ft",

@@ -108,7 +108,7 @@ fn objectives_and_tie_breaks_on_a_small_catalog() {
     let r = rank_bay(&cat, bay, None);
     let f = r.failing.iter().find(|x| x.entry.pattern.id == "p1").unwrap();
     assert_eq!(f.verdict.first_failure().unwrap().info.id, "flexure");
-    assert!(plankwise::select::failure_reason(f).starts_with("Flexural strength ("));
+    assert!(plankwise::select::failure_reason(f).starts_with("Flexural strength: "));
 }
 
 #[test]

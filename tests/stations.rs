@@ -20,8 +20,17 @@ const TOL: f64 = 0.005;
 const DENSE: usize = 1200;
 
 fn compare(cat: &Catalog, entry: usize, k: &DesignCase) -> Result<(), String> {
-    let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
-    let cand = Candidate { section: s, pattern: p, mix: s.mix(cat) };
+    let (s, p) = cat
+        .sections
+        .iter()
+        .flat_map(|s| s.patterns.iter().map(move |p| (s, p)))
+        .nth(entry)
+        .unwrap();
+    let cand = Candidate {
+        section: s,
+        pattern: p,
+        mix: s.mix(cat),
+    };
     let normal = evaluate(&cand, k);
     let l = k.span.get();
     let xs: Vec<f64> = (0..=DENSE).map(|i| l * i as f64 / DENSE as f64).collect();
@@ -79,33 +88,79 @@ fn survey() {
     let mut worst: BTreeMap<&str, (f64, String)> = BTreeMap::new();
     let mut count: BTreeMap<&str, usize> = BTreeMap::new();
     let mut seed: u64 = std::env::var("SEED").map_or(12345, |v| v.parse().unwrap());
-    let mut rnd = || { seed ^= seed << 13; seed ^= seed >> 7; seed ^= seed << 17; (seed % 1_000_000) as f64 / 1e6 };
+    let mut rnd = || {
+        seed ^= seed << 13;
+        seed ^= seed >> 7;
+        seed ^= seed << 17;
+        (seed % 1_000_000) as f64 / 1e6
+    };
     for _ in 0..std::env::var("CASES").map_or(3000, |v| v.parse().unwrap()) {
         let entry = (rnd() * 33.0) as usize;
         let span = 6.0 + 84.0 * rnd();
         let mut k = DesignCase::new(Length::from_unit(span, "ft"));
         k.sdl = AreaLoad::from_unit(150.0 * rnd(), "psf");
         k.live = AreaLoad::from_unit(400.0 * rnd(), "psf");
-        if rnd() < 0.5 { k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() }); }
-        if rnd() < 0.5 { k.line_loads.push(LineLoadSpec { w: LineLoad::from_unit(3.0 * rnd(), "klf"), at: Length::from_unit(span * rnd(), "ft"), kind: LoadKind::Dead }); }
-        let (s, p) = cat.sections.iter().flat_map(|s| s.patterns.iter().map(move |p| (s, p))).nth(entry).unwrap();
-        let cand = Candidate { section: s, pattern: p, mix: s.mix(&cat) };
+        if rnd() < 0.5 {
+            k.topping = Some(Topping {
+                thickness: Length::new(2.0),
+                mix: cat.mixes[3].clone(),
+            });
+        }
+        if rnd() < 0.5 {
+            k.line_loads.push(LineLoadSpec {
+                w: LineLoad::from_unit(3.0 * rnd(), "klf"),
+                at: Length::from_unit(span * rnd(), "ft"),
+                kind: LoadKind::Dead,
+            });
+        }
+        let (s, p) = cat
+            .sections
+            .iter()
+            .flat_map(|s| s.patterns.iter().map(move |p| (s, p)))
+            .nth(entry)
+            .unwrap();
+        let cand = Candidate {
+            section: s,
+            pattern: p,
+            mix: s.mix(&cat),
+        };
         let normal = evaluate(&cand, &k);
         let l = k.span.get();
         let xs: Vec<f64> = (0..=DENSE).map(|i| l * i as f64 / DENSE as f64).collect();
         let dense = evaluate_on_stations(&cand, &k, &xs);
         for d in &dense.checks {
             let n = normal.check(d.info.id).unwrap();
-            if d.ratio.abs() < 0.05 { continue; }
+            if d.ratio.abs() < 0.05 {
+                continue;
+            }
             let miss = (d.ratio - n.ratio) / d.ratio.abs();
             if miss > TOL {
                 *count.entry(d.info.id).or_default() += 1;
                 let e = worst.entry(d.info.id).or_insert((0.0, String::new()));
-                if miss > e.0 { *e = (miss, format!("{} / {} span {span:.1} sdl {:.1} live {:.1} top {} line {:?}: n {:.4} at {:?} d {:.4} at {:?}", s.id, p.id, k.sdl.in_unit("psf"), k.live.in_unit("psf"), k.topping.is_some(), k.line_loads.first().map(|l| (l.w.in_unit("klf"), l.at.in_unit("ft"))), n.ratio, n.station_ft, d.ratio, d.station_ft)); }
+                if miss > e.0 {
+                    *e = (
+                        miss,
+                        format!(
+                            "{} / {} span {span:.1} sdl {:.1} live {:.1} top {} line {:?}: n {:.4} at {:?} d {:.4} at {:?}",
+                            s.id,
+                            p.id,
+                            k.sdl.in_unit("psf"),
+                            k.live.in_unit("psf"),
+                            k.topping.is_some(),
+                            k.line_loads.first().map(|l| (l.w.in_unit("klf"), l.at.in_unit("ft"))),
+                            n.ratio,
+                            n.station_ft,
+                            d.ratio,
+                            d.station_ft
+                        ),
+                    );
+                }
             }
         }
     }
-    for (k, v) in &worst { println!("{k}: {} misses, worst {:.2} % {}", count[k], v.0 * 100.0, v.1); }
+    for (k, v) in &worst {
+        println!("{k}: {} misses, worst {:.2} % {}", count[k], v.0 * 100.0, v.1);
+    }
 }
 
 #[test]
@@ -114,23 +169,59 @@ fn dbg_one() {
     let cat = demo();
     let s = cat.section("plank-10in-4ft").unwrap();
     let p = s.patterns.iter().find(|p| p.id == "7x0.6").unwrap();
-    let cand = Candidate { section: s, pattern: p, mix: s.mix(&cat) };
+    let cand = Candidate {
+        section: s,
+        pattern: p,
+        mix: s.mix(&cat),
+    };
     let mut k = DesignCase::new(Length::from_unit(73.7, "ft"));
     k.sdl = AreaLoad::from_unit(8.3, "psf");
     k.live = AreaLoad::from_unit(254.7, "psf");
-    k.topping = Some(Topping { thickness: Length::new(2.0), mix: cat.mixes[3].clone() });
-    k.line_loads.push(LineLoadSpec { w: LineLoad::from_unit(1.5456, "klf"), at: Length::from_unit(16.77, "ft"), kind: LoadKind::Dead });
+    k.topping = Some(Topping {
+        thickness: Length::new(2.0),
+        mix: cat.mixes[3].clone(),
+    });
+    k.line_loads.push(LineLoadSpec {
+        w: LineLoad::from_unit(1.5456, "klf"),
+        at: Length::from_unit(16.77, "ft"),
+        kind: LoadKind::Dead,
+    });
     let l = k.span.get();
     let xs: Vec<f64> = (0..=DENSE).map(|i| l * i as f64 / DENSE as f64).collect();
     let an = plankwise::checks::evaluate_on_stations(&cand, &k, &xs);
     let n = plankwise::checks::evaluate(&cand, &k);
-    for st in an.stations.iter().filter(|s| s.x_in > 61.0 * 12.0 && s.x_in < 63.5 * 12.0).step_by(4) {
+    for st in an
+        .stations
+        .iter()
+        .filter(|s| s.x_in > 61.0 * 12.0 && s.x_in < 63.5 * 12.0)
+        .step_by(4)
+    {
         let v = *st.shear.unwrap().gov();
-        println!("D {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}", st.x_in / 12.0, v.name(), v.vu_lbf / v.phi_vn_lbf, v.vu_lbf, v.vci_lbf, v.vci_raw_lbf, v.vci_min_lbf, v.vcw_lbf);
+        println!(
+            "D {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}",
+            st.x_in / 12.0,
+            v.name(),
+            v.vu_lbf / v.phi_vn_lbf,
+            v.vu_lbf,
+            v.vci_lbf,
+            v.vci_raw_lbf,
+            v.vci_min_lbf,
+            v.vcw_lbf
+        );
     }
     for st in n.stations.iter().filter(|s| s.x_in > 58.0 * 12.0 && s.x_in < 66.5 * 12.0) {
         let v = *st.shear.unwrap().gov();
-        println!("N {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}", st.x_in / 12.0, v.name(), v.vu_lbf / v.phi_vn_lbf, v.vu_lbf, v.vci_lbf, v.vci_raw_lbf, v.vci_min_lbf, v.vcw_lbf);
+        println!(
+            "N {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}",
+            st.x_in / 12.0,
+            v.name(),
+            v.vu_lbf / v.phi_vn_lbf,
+            v.vu_lbf,
+            v.vci_lbf,
+            v.vci_raw_lbf,
+            v.vci_min_lbf,
+            v.vcw_lbf
+        );
     }
     println!("{:?}", n.check("shear"));
 }
@@ -140,7 +231,11 @@ fn dbg_one() {
 fn profile_loop() {
     let cat = demo();
     let s = cat.section("plank-8in-4ft").unwrap();
-    let cand = Candidate { section: s, pattern: &s.patterns[1], mix: s.mix(&cat) };
+    let cand = Candidate {
+        section: s,
+        pattern: &s.patterns[1],
+        mix: s.mix(&cat),
+    };
     let mut k = DesignCase::new(Length::from_unit(24.0, "ft"));
     k.sdl = AreaLoad::from_unit(20.0, "psf");
     k.live = AreaLoad::from_unit(40.0, "psf");

@@ -8,7 +8,7 @@
 //! stems to their side faces too — at the ends and at midspan; the cores
 //! and the grouted joints between planks are not exposed surfaces.
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::fire::{durability_cover, slab_cover_for};
 use crate::section::Family;
 
@@ -19,6 +19,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 20.5.1.3.3; IBC 2021 Table 722.2.3(1)",
     unit: "in",
     group: Group::Cover,
+    reads: Reads::Need,
     load_driven: false,
 };
 

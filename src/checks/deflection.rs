@@ -9,7 +9,7 @@
 //! gross section for class U, bilinear effective inertia for classes T and
 //! C (PCI Design Handbook method). Ponding of roofs is not checked.
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::case::{Attachment, Use};
 
 /// Registry entry: immediate live deflection.
@@ -19,6 +19,7 @@ pub const LIVE: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 24.2.2 (floor l/360, flat roof l/180)",
     unit: "in",
     group: Group::Deflection,
+    reads: Reads::Demand,
     load_driven: true,
 };
 
@@ -29,6 +30,7 @@ pub const AFTER: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 24.2.2 (l/480 or l/240)",
     unit: "in",
     group: Group::Deflection,
+    reads: Reads::Demand,
     load_driven: true,
 };
 

@@ -4,21 +4,31 @@
 //! hollow-core: net area ÷ width, §722.2.2.1.1; double tee: the flange, by
 //! the ribbed-soffit rule §722.2.2.1.3; a topping of the same aggregate adds
 //! its thickness), §722.2.3 (slab cover, Table 722.2.3(1); beam and stem
-//! cover, Tables 722.2.3(4)/(5) with the averaging rules of §722.2.3.3:
-//! the average of individual covers, a corner strand at half its cover,
-//! strands on the stem centre line by their centroid, no strand below half
-//! the table value nor below 1 in); ACI 216.1. The rating reached is the
-//! least of the criteria, each the largest tabulated rating met.
+//! cover, Tables 722.2.3(4) for beams 8 in wide or more and 722.2.3(5) for
+//! stems of any width by area, the smaller value where both apply);
+//! §722.2.3.3 and §722.2.3.3.1 (the average of the strands' covers, a
+//! corner strand at half its cover, strands on the stem centre line by their
+//! centroid; and every strand's own cover — the least concrete between it
+//! and any fire-exposed face, soffit, chamfer or stem side — at least the
+//! greater of half the table value for the rating and 1 in); ACI 216.1.
+//! The rating reached is the least of the criteria, each the largest
+//! tabulated rating met; the strand that limits it is named.
+//!
+//! The beam and stem tables are held from memory: every rating that rests
+//! on them says so ([`crate::fire::BEAM_TABLES_MARK`]). The cells of
+//! footnote c (stirrups at no more than the member depth) count only for
+//! patterns that give such stem reinforcement. The flange strip a stem's
+//! area may count is the precast flange, not a topping.
 //!
 //! Does not cover: two-course floors of different aggregates (§722.2.2.2),
-//! insulation or roofing (§722.2.2.3), stems narrower than 8 in (Table
-//! 722.2.3(5) is not in plankwise's data: such stems are reported as not
-//! rated), and the reduced-cover strength rule of §721.1.5.
+//! insulation or roofing (§722.2.2.3), the ¾ in relief for restrained
+//! beams 4 ft apart or closer (not transcribed), and the reduced-cover
+//! strength rule of §721.1.5.
 
 use serde::Serialize;
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
-use crate::fire::{rating_by_beam_cover, rating_by_slab_cover, rating_by_thickness};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
+use crate::fire::{BEAM_TABLES_MARK, RATINGS, rating_by_slab_cover, rating_by_thickness, stem_requirement};
 use crate::member::Member;
 use crate::section::Family;
 
@@ -26,9 +36,10 @@ use crate::section::Family;
 pub const INFO: CheckInfo = CheckInfo {
     id: "fire",
     title: "Fire rating reached",
-    clause: "IBC 2021 722.2.2.1, 722.2.3 (Tables 722.2.2.1, 722.2.3(1), 722.2.3(4)); ACI 216.1",
+    clause: "IBC 2021 722.2.2.1, 722.2.3, 722.2.3.3.1 (Tables 722.2.2.1, 722.2.3(1), 722.2.3(4), 722.2.3(5)); ACI 216.1",
     unit: "h",
     group: Group::Fire,
+    reads: Reads::Hours,
     load_driven: false,
 };
 
@@ -39,46 +50,60 @@ pub struct Fire {
     pub equiv_thickness_in: f64,
     /// Rating by heat transmission, h.
     pub rating_thickness_h: f64,
-    /// Cover the cover criterion used (least slab cover, or average stem cover), in.
+    /// Cover the cover criterion used (least slab cover, or the least
+    /// average stem cover), in.
     pub cover_in: f64,
     /// Rating by strand cover, h (None: not rated by plankwise's tables).
     pub rating_cover_h: Option<f64>,
     /// Overall rating, h (None when the cover criterion is not rated).
     pub rating_h: Option<f64>,
+    /// The least cover of any one strand to a fire-exposed face, in.
+    pub least_strand_cover_in: f64,
+    /// Whether the rating rests on the beam and stem tables held from memory.
+    pub from_memory: bool,
     /// What decided it.
     pub note: String,
 }
 
-/// Average cover of the strands of one stem by IBC §722.2.3.3, in.
-fn stem_average_cover(m: &Member, xc: f64, half_width: impl Fn(f64) -> f64) -> Option<f64> {
+/// One strand of a stem and what it counts in the average.
+struct StemStrand {
+    /// Its contribution to the average (a corner strand at half), in.
+    in_average: f64,
+    x: f64,
+    y: f64,
+}
+
+/// The strands of the stem centred at `xc` and their average cover by IBC
+/// §722.2.3.3 (strands on the centre line: the distance from the bottom to
+/// their centroid).
+fn stem_strands(m: &Member, xc: f64, half_width: impl Fn(f64) -> f64) -> Option<(Vec<StemStrand>, f64)> {
     let db = m.db();
-    let strands: Vec<(f64, f64)> = m
+    let strands: Vec<StemStrand> = m
         .layers
         .iter()
         .flat_map(|l| l.x.iter().map(move |&x| (x, l.y_mid)))
         .filter(|&(x, y)| (x - xc).abs() <= half_width(y))
+        .map(|(x, y)| {
+            let bottom = y - db / 2.0;
+            let side = half_width(y) - (x - xc).abs() - db / 2.0;
+            // a corner strand, about equidistant from bottom and side, counts at half
+            let corner = (bottom - side).abs() <= 0.1 * bottom.max(side);
+            StemStrand {
+                in_average: if corner { bottom.min(side) / 2.0 } else { bottom.min(side) },
+                x,
+                y,
+            }
+        })
         .collect();
     if strands.is_empty() {
         return None;
     }
-    if strands.len() >= 2 && strands.iter().all(|(x, _)| (x - xc).abs() < 1e-6) {
-        // on the stem centre line: distance from the bottom to their centroid
-        return Some(strands.iter().map(|s| s.1).sum::<f64>() / strands.len() as f64);
-    }
-    let covers: Vec<f64> = strands
-        .iter()
-        .map(|&(x, y)| {
-            let bottom = y - db / 2.0;
-            let side = half_width(y) - (x - xc).abs() - db / 2.0;
-            // a corner strand, about equidistant from bottom and side, counts at half
-            if (bottom - side).abs() <= 0.1 * bottom.max(side) {
-                bottom.min(side) / 2.0
-            } else {
-                bottom.min(side)
-            }
-        })
-        .collect();
-    Some(covers.iter().sum::<f64>() / covers.len() as f64)
+    let avg = if strands.len() >= 2 && strands.iter().all(|s| (s.x - xc).abs() < 1e-6) {
+        strands.iter().map(|s| s.y).sum::<f64>() / strands.len() as f64
+    } else {
+        strands.iter().map(|s| s.in_average).sum::<f64>() / strands.len() as f64
+    };
+    Some((strands, avg))
 }
 
 /// Assess the member.
@@ -104,48 +129,89 @@ pub fn assess(m: &Member, brief: bool) -> Fire {
             ""
         }
     ));
-    let (cover, r_c) = match m.section.family {
-        Family::DoubleTee => {
+    let mut from_memory = false;
+    let (cover, r_c, least) = match (m.section.family, &m.section.spec) {
+        (Family::DoubleTee, crate::catalog::FamilySpec::DoubleTee(dt)) => {
+            from_memory = true;
             let g = &m.section.geometry;
-            let bw = |y: f64| g.width_at(y.max(g.chamfer + 1e-6)) / g.stems.len().max(1) as f64;
-            let covers: Vec<f64> = g
-                .stems
-                .iter()
-                .filter_map(|&xc| stem_average_cover(m, xc, |y| bw(y) / 2.0))
-                .collect();
-            let least_individual = m.layers.iter().map(|l| l.y_mid - db / 2.0).fold(f64::INFINITY, f64::min);
-            let avg = covers.iter().copied().fold(f64::INFINITY, f64::min);
-            // strands in no stem (all in the flange) are rated by their own least cover
-            let avg = if avg.is_finite() { avg } else { least_individual };
-            let width = bw(0.0);
-            let r = rating_by_beam_cover(agg, restrained, width, avg);
-            if least_individual < 1.0 {
-                note.push_str(&say(format_args!(
-                    "; a strand has {least_individual:.2} in cover, below the 1 in minimum of 722.2.3.3"
-                )));
-                (avg, Some(0.0))
-            } else {
-                if r.is_none() {
-                    note.push_str(&say(format_args!(
-                        "; stems {width:.2} in wide fall under IBC Table 722.2.3(5), not in plankwise's data: average stem cover {avg:.2} in, verify by hand"
-                    )));
-                }
-                (avg, r)
-            }
-        }
-        _ => {
-            let least = m
+            let n = g.stems.len().max(1) as f64;
+            let bw = |y: f64| g.width_at(y.max(g.chamfer + 1e-6)) / n;
+            // the narrower (bottom) width of a stem decides Table (4)
+            let width = dt.stem_width_bottom.min(dt.stem_width_top);
+            // Table (5): a stem's area below the flange, with a strip of
+            // flange up to three average stem widths (precast flange only)
+            let avg_w = 0.5 * (dt.stem_width_top + dt.stem_width_bottom);
+            let stem_area = (m.bare.area_in2 - dt.flange_width * dt.flange_thickness) / n;
+            let strip = (3.0 * avg_w).min(dt.flange_width / n) * dt.flange_thickness;
+            let area = stem_area + strip;
+            let stirrups = m.pattern.web_steel.is_some_and(|w| w.spacing.get() <= m.h_total);
+            let stems: Vec<(Vec<StemStrand>, f64)> = g.stems.iter().filter_map(|&xc| stem_strands(m, xc, |y| bw(y) / 2.0)).collect();
+            let avg = stems.iter().map(|s| s.1).fold(f64::INFINITY, f64::min);
+            // the strand with the least cover of its own, in any stem or the flange
+            let all: Vec<(f64, f64, f64)> = m
                 .layers
                 .iter()
-                .map(|l| l.y_mid.min(l.y_end) - db / 2.0)
-                .fold(f64::INFINITY, f64::min);
-            (least, Some(rating_by_slab_cover(agg, restrained, least)))
+                .flat_map(|l| l.x.iter().map(move |&x| (x, l.y_mid)))
+                .map(|(x, y)| (g.clear_cover(x, y, db), x, y))
+                .collect();
+            let (least, lx, ly) = all
+                .iter()
+                .copied()
+                .fold((f64::INFINITY, 0.0, 0.0), |a, b| if b.0 < a.0 { b } else { a });
+            let avg = if avg.is_finite() { avg } else { least };
+            let mut reached = 0.0;
+            let mut why = String::new();
+            for (i, &r) in RATINGS.iter().enumerate() {
+                let Some(need) = stem_requirement(agg, restrained, width, area, i, stirrups) else {
+                    why = say(format_args!(
+                        "{} h is not permitted for stems {width:.2} in wide, {area:.0} in² (Tables 722.2.3(4)/(5))",
+                        crate::checks::fire::fmt_h(r)
+                    ));
+                    break;
+                };
+                let own_min = (0.5 * need).max(1.0);
+                if avg < need - 1e-9 {
+                    why = say(format_args!(
+                        "{} h needs an average cover of {need:.2} in; the stems give {avg:.2} in",
+                        fmt_h(r)
+                    ));
+                    break;
+                }
+                if least < own_min - 1e-9 {
+                    why = say(format_args!(
+                        "{} h needs every strand at {own_min:.2} in from a fire-exposed face (722.2.3.3.1); the strand at x = {lx:.2} in, y = {ly:.2} in has {least:.2} in",
+                        fmt_h(r)
+                    ));
+                    break;
+                }
+                reached = r;
+            }
+            note.push_str(&say(format_args!(
+                "; stems {width:.2} in wide, {area:.0} in² with the flange strip (Tables 722.2.3(4)/(5), {BEAM_TABLES_MARK}); average stem cover {avg:.2} in, least strand cover {least:.2} in"
+            )));
+            if !why.is_empty() {
+                note.push_str("; ");
+                note.push_str(&why);
+            }
+            (avg, Some(reached), least)
+        }
+        _ => {
+            // slabs: each strand's own cover to the soffit against Table 722.2.3(1)
+            let (least, lx, ly) = m
+                .layers
+                .iter()
+                .flat_map(|l| l.x.iter().map(move |&x| (l.y_mid.min(l.y_end) - db / 2.0, x, l.y_mid.min(l.y_end))))
+                .fold((f64::INFINITY, 0.0, 0.0), |a, b| if b.0 < a.0 { b } else { a });
+            note.push_str(&say(format_args!(
+                "; least strand cover {least:.2} in (the strand at x = {lx:.2} in, y = {ly:.2} in)"
+            )));
+            (least, Some(rating_by_slab_cover(agg, restrained, least)), least)
         }
     };
     let rating = r_c.map(|c| c.min(r_t));
     if let Some(c) = r_c {
         note.push_str(&say(format_args!(
-            "; heat transmission {} h, cover {cover:.2} in gives {} h ({})",
+            "; heat transmission {} h, cover gives {} h ({})",
             fmt_h(r_t),
             fmt_h(c),
             if restrained { "restrained" } else { "unrestrained" }
@@ -157,6 +223,8 @@ pub fn assess(m: &Member, brief: bool) -> Fire {
         cover_in: cover,
         rating_cover_h: r_c,
         rating_h: rating,
+        least_strand_cover_in: least,
+        from_memory,
         note,
     }
 }
@@ -180,19 +248,30 @@ impl std::fmt::Display for Hours {
     }
 }
 
-/// Run only when the case requires a rating.
+/// Run only when the case requires a rating. Demand is the rating needed,
+/// capacity the rating reached, both in hours; a rating is not a
+/// percentage, so the output says "needs 2 h, reaches 1½ h".
 pub fn run(an: &Analysis) -> Option<CheckResult> {
     let need = an.member.case.fire_rating?;
     let f = &an.fire;
     let reached = f.rating_h.unwrap_or(0.0);
     let mut r = CheckResult::new(&INFO, need, reached, None, f.note.clone());
     if reached < 1.0 {
-        // below the lowest tabulated rating: counted as ½ h to keep the ratio finite
+        // below the lowest tabulated rating: the ratio only orders failures
         r.ratio = need / 0.5;
-        r.note.push_str("; below 1 h, counted as ½ h in the ratio");
+        r.pass = false;
     }
-    if f.rating_h.is_none() {
-        r.note.push_str("; not rated, so not passed");
+    if !an.brief {
+        r.note = format!(
+            "needs {} h, reaches {} h; {}",
+            fmt_h(need),
+            if reached < 1.0 {
+                "less than 1".to_string()
+            } else {
+                fmt_h(reached).to_string()
+            },
+            f.note
+        );
     }
     Some(r)
 }

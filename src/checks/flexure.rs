@@ -16,7 +16,7 @@
 
 use serde::Serialize;
 
-use super::{Analysis, CheckInfo, CheckResult, Group, kipft};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kipft};
 use crate::material::beta1;
 use crate::member::{Effective, Member};
 use crate::prestress::{developed_stress, development_length};
@@ -29,6 +29,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 22.2, 22.3, 21.2.2, 21.2.3, 25.4.8.3; ASCE 7-16 2.3.1",
     unit: "kip-ft",
     group: Group::Strength,
+    reads: Reads::Demand,
     load_driven: true,
 };
 

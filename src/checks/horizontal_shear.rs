@@ -8,7 +8,7 @@
 //!
 //! Does not cover: ties across the interface, shear friction (§22.9).
 
-use super::{Analysis, CheckInfo, CheckResult, Group, kip};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kip};
 
 /// Registry entry.
 pub const INFO: CheckInfo = CheckInfo {
@@ -17,6 +17,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 16.4.4.2 (80 bv d, roughened, no ties); φ 0.75",
     unit: "kip",
     group: Group::Shear,
+    reads: Reads::Demand,
     load_driven: true,
 };
 

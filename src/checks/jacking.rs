@@ -4,7 +4,7 @@
 //! 0.94 fpy and 0.80 fpu (and the manufacturer's recommendation, which the
 //! catalog does not give) (reference sheet §1.2, indirect).
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 
 /// Registry entry.
 pub const INFO: CheckInfo = CheckInfo {
@@ -13,6 +13,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 Table 20.3.2.5.1",
     unit: "ksi",
     group: Group::Strand,
+    reads: Reads::Demand,
     load_driven: false,
 };
 

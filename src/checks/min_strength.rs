@@ -25,7 +25,7 @@
 //! 2Vu against φVn, and it governs as a load limit: more load ends the
 //! waiver), or failed.
 
-use super::{Analysis, CheckInfo, CheckResult, Group, kip, kipft};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kip, kipft};
 use crate::section::Family;
 
 /// Registry entry.
@@ -35,6 +35,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 7.6.2.1 / 9.6.2.1 (exception 7.6.2.2 / 9.6.2.2)",
     unit: "kip-ft",
     group: Group::Strength,
+    reads: Reads::Demand,
     load_driven: false,
 };
 
@@ -84,12 +85,20 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
             Some(v) if v_ratio > m_ratio => (
                 2.0 * v.combo.vu_lbf,
                 v.combo.phi_vn_lbf,
-                format!("2Vu = {:.2} kip ≤ φVn = {:.2} kip governs the waiver", kip(2.0 * v.combo.vu_lbf), kip(v.combo.phi_vn_lbf)),
+                format!(
+                    "2Vu = {:.2} kip ≤ φVn = {:.2} kip governs the waiver",
+                    kip(2.0 * v.combo.vu_lbf),
+                    kip(v.combo.phi_vn_lbf)
+                ),
             ),
             _ => (
                 2.0 * fl.mu_lbin,
                 fl.phi_mn_lbin,
-                format!("2Mu = {:.1} kip-ft ≤ φMn = {:.1} kip-ft governs the waiver", kipft(2.0 * fl.mu_lbin), kipft(fl.phi_mn_lbin)),
+                format!(
+                    "2Mu = {:.1} kip-ft ≤ φMn = {:.1} kip-ft governs the waiver",
+                    kipft(2.0 * fl.mu_lbin),
+                    kipft(fl.phi_mn_lbin)
+                ),
             ),
         };
         let note = an.note(format_args!(

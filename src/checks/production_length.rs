@@ -3,7 +3,7 @@
 //! Not a code clause: the producer's limit from the catalog (`max_length`,
 //! per pattern or per section). Member length = span + bearing length.
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 
 /// Registry entry.
 pub const INFO: CheckInfo = CheckInfo {
@@ -12,6 +12,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "catalog max_length (producer's limit)",
     unit: "ft",
     group: Group::Production,
+    reads: Reads::Demand,
     load_driven: false,
 };
 

@@ -20,7 +20,7 @@
 //! Does not cover: bonded reinforcement that resists the tension force
 //! (§24.5.3.2.1), which would allow the tension limit to be exceeded.
 
-use super::{Analysis, CheckInfo, CheckResult, Group, Peak, peak};
+use super::{Analysis, CheckInfo, CheckResult, Group, Peak, Reads, peak};
 use crate::member::Member;
 
 /// Registry entry: compression.
@@ -30,6 +30,7 @@ pub const COMPRESSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.3.1 (Table 24.5.3.1)",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: false,
 };
 
@@ -40,6 +41,7 @@ pub const TENSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.3.2 (Table 24.5.3.2)",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: false,
 };
 
@@ -59,11 +61,7 @@ pub fn at(m: &Member, d: f64) -> (f64, f64) {
 /// Whether `d` lies in the end region (within ℓtr of the member end). A
 /// point exactly on the boundary is not: it takes the stricter limit.
 fn in_end(an: &Analysis, d: f64, at_station: bool) -> bool {
-    if at_station {
-        d < an.member.ltr - 1e-9
-    } else {
-        d < an.member.ltr
-    }
+    if at_station { d < an.member.ltr - 1e-9 } else { d < an.member.ltr }
 }
 
 /// The worst point of one fibre: `pick` chooses top (0) or bottom (1),

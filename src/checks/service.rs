@@ -19,7 +19,7 @@
 
 use serde::Serialize;
 
-use super::{Analysis, CheckInfo, CheckResult, Group, Peak, peak};
+use super::{Analysis, CheckInfo, CheckResult, Group, Peak, Reads, peak};
 use crate::case::{Effects, ServiceClass, service_moments};
 use crate::member::{Effective, Member};
 
@@ -30,6 +30,7 @@ pub const TENSION: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.2.1 (Table 24.5.2.1)",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: true,
 };
 /// Registry entry: compression, sustained.
@@ -39,6 +40,7 @@ pub const SUSTAINED: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), 0.45 f'c",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: true,
 };
 /// Registry entry: compression, total.
@@ -48,6 +50,7 @@ pub const TOTAL: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), 0.60 f'c",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: true,
 };
 /// Registry entry: topping compression.
@@ -57,6 +60,7 @@ pub const TOPPING: CheckInfo = CheckInfo {
     clause: "ACI 318-19 24.5.4.1 (Table 24.5.4.1), topping f'c",
     unit: "psi",
     group: Group::Stresses,
+    reads: Reads::Stress,
     load_driven: true,
 };
 
@@ -175,11 +179,14 @@ pub fn run_tension(an: &Analysis) -> Option<CheckResult> {
     Some(r)
 }
 
+/// A fibre: how to read its stress, its name, and whether load raises it.
+type Fibre = (fn(&AtStation) -> f64, &'static str, bool);
+
 /// The worse of several fibres in compression against `k` f′c; each fibre
 /// says whether load raises it (the top fibres) or relieves it (the bottom
 /// fibre, compressed by prestress): the result governs as a load limit
 /// only when such a fibre is the worse.
-fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, fc: f64, fibres: &[(fn(&AtStation) -> f64, &str, bool)]) -> Option<CheckResult> {
+fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, fc: f64, fibres: &[Fibre]) -> Option<CheckResult> {
     let (p, name, loaded) = fibres
         .iter()
         .filter_map(|&(pick, name, loaded)| worst(an, pick, k * fc).map(|p| (p, name, loaded)))
@@ -192,7 +199,11 @@ fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, fc: f64, fibres:
         an.note(format_args!(
             "{name}; {k:.2} f'c = {:.0} psi (f'c = {fc:.0} psi){}",
             k * fc,
-            if loaded { "" } else { "; compression from prestress, which load relieves: not a load limit" }
+            if loaded {
+                ""
+            } else {
+                "; compression from prestress, which load relieves: not a load limit"
+            }
         )),
     );
     r.governs = loaded;

@@ -39,7 +39,7 @@
 
 use serde::Serialize;
 
-use super::{Analysis, CheckInfo, CheckResult, Group, kip};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kip};
 use crate::case::Effects;
 use crate::member::{Effective, Member};
 use crate::section::Family;
@@ -47,10 +47,11 @@ use crate::section::Family;
 /// Registry entry: Vu ≤ φVn.
 pub const INFO: CheckInfo = CheckInfo {
     id: "shear",
-    title: "Shear strength (Vci, Vcw, Vs)",
+    title: "Shear strength Vu ≤ φVn",
     clause: "ACI 318-19 22.5.6.3, 22.5.7, 22.5.8.5.3, 22.5.1.2, 7.6.3.1 / 9.6.3.1; φ 21.2.1",
     unit: "kip",
     group: Group::Shear,
+    reads: Reads::Demand,
     load_driven: true,
 };
 
@@ -61,6 +62,7 @@ pub const DEEP_INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 7.6.3.1",
     unit: "kip",
     group: Group::Shear,
+    reads: Reads::Demand,
     load_driven: true,
 };
 
@@ -245,14 +247,21 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
         if cap > 0.0 { demand(c) / cap } else { super::RATIO_NONE }
     };
     let top = |a: &AtStation| -> (usize, f64) {
-        (0..3).map(|i| (i, ratio(&a.combos[i]))).max_by(|a, b| a.1.total_cmp(&b.1)).expect("three")
+        (0..3)
+            .map(|i| (i, ratio(&a.combos[i])))
+            .max_by(|a, b| a.1.total_cmp(&b.1))
+            .expect("three")
     };
     let pts: Vec<(f64, AtStation)> = an.stations.iter().filter_map(|s| s.shear.map(|v| (s.x_in, v))).collect();
     let mut best = pts
         .iter()
         .map(|(x, a)| {
             let (i, r) = top(a);
-            Worst { x_in: *x, combo: a.combos[i], ratio: r }
+            Worst {
+                x_in: *x,
+                combo: a.combos[i],
+                ratio: r,
+            }
         })
         .max_by(|a, b| a.ratio.total_cmp(&b.ratio))?;
     // a point is searched further only when a first estimate comes within
@@ -279,7 +288,11 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
             let keep = |best: &mut Worst, x: f64, c: Combo| {
                 let r = ratio(&c);
                 if r > best.ratio {
-                    *best = Worst { x_in: x, combo: c, ratio: r };
+                    *best = Worst {
+                        x_in: x,
+                        combo: c,
+                        ratio: r,
+                    };
                 }
             };
             // the kinks of Vc inside the segment where the ratio can peak —
@@ -290,10 +303,9 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
             // never a maximum.)
             let mut cuts = [(x0, c0), (x1, c1), (x1, c1), (x1, c1)];
             let mut n = 2;
-            for g in [
-                (|c: &Combo| c.vci_raw_lbf - c.vci_min_lbf) as fn(&Combo) -> f64,
-                |c: &Combo| c.mcre_raw_lbin,
-            ] {
+            for g in [(|c: &Combo| c.vci_raw_lbf - c.vci_min_lbf) as fn(&Combo) -> f64, |c: &Combo| {
+                c.mcre_raw_lbin
+            }] {
                 let (g0, g1) = (g(&c0), g(&c1));
                 if g0 * g1 < 0.0 {
                     let xk = super::root(|x| g(&combo_at(x)), x0, g0, x1, g1);
@@ -387,7 +399,10 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         let need: Vec<(f64, f64)> = an
             .stations
             .iter()
-            .filter_map(|s| s.shear.map(|a| (s.x_in / 12.0, a.combos.iter().map(|c| av_s_needed(m, c)).fold(0.0, f64::max))))
+            .filter_map(|s| {
+                s.shear
+                    .map(|a| (s.x_in / 12.0, a.combos.iter().map(|c| av_s_needed(m, c)).fold(0.0, f64::max)))
+            })
             .filter(|&(_, r)| r > 0.0)
             .collect();
         let most = need.iter().map(|n| n.1).fold(0.0, f64::max) * 12.0 / n;

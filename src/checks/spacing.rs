@@ -6,7 +6,7 @@
 //! 318-19 clause number from memory, medium). Checked at the end and
 //! hold-down positions of every row.
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 
 /// Registry entry.
 pub const INFO: CheckInfo = CheckInfo {
@@ -15,6 +15,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "ACI 318-19 25.2.3",
     unit: "in",
     group: Group::Strand,
+    reads: Reads::Need,
     load_driven: false,
 };
 

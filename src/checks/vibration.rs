@@ -8,7 +8,7 @@
 //! A walking-comfort threshold of about 3–4 Hz is commonly quoted (common
 //! practice, no source).
 
-use super::{Analysis, CheckInfo, CheckResult, Group};
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::member::Member;
 use crate::units::G_IN_PER_S2;
 
@@ -19,6 +19,7 @@ pub const INFO: CheckInfo = CheckInfo {
     clause: "simply supported beam, f = (π/2)√(gEI/wL⁴); threshold by the case",
     unit: "Hz",
     group: Group::Deflection,
+    reads: Reads::Need,
     load_driven: true,
 };
 

@@ -161,7 +161,7 @@ struct EntryJson {
     topping_in: f64,
     weight_psf: f64,
     depth_in: f64,
-    steel_in2_per_ft2: f64,
+    strand_in2_per_ft: f64,
     price_per_ft2: Option<f64>,
     governing: String,
     governing_ratio: f64,
@@ -180,7 +180,7 @@ fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
         topping_in: r.entry.topping.map_or(0.0, |t| t.get()),
         weight_psf: r.metrics.weight_psf,
         depth_in: r.metrics.depth_in,
-        steel_in2_per_ft2: r.metrics.steel_in2_per_ft2,
+        strand_in2_per_ft: r.metrics.strand_in2_per_ft,
         price_per_ft2: r.metrics.price_per_ft2,
         governing: r.verdict.governing().info.id.to_string(),
         governing_ratio: r.verdict.governing().ratio,
@@ -234,7 +234,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
     } else if a.csv {
         writeln!(
             out,
-            "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,steel_in2_per_ft2,governing,governing_ratio,first_failure,first_failure_ratio"
+            "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,strand_in2_per_ft,governing,governing_ratio,first_failure,first_failure_ratio"
         )?;
         for (b, r) in &ranked {
             for (i, x) in r.viable.iter().take(a.top).chain(r.failing.iter().take(a.top)).enumerate() {
@@ -250,7 +250,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                     e.topping_in,
                     e.weight_psf,
                     e.depth_in,
-                    e.steel_in2_per_ft2,
+                    e.strand_in2_per_ft,
                     e.governing,
                     e.governing_ratio,
                     e.first_failure.unwrap_or_default(),

@@ -8,7 +8,7 @@ use crate::case::DesignCase;
 use crate::checks::{Candidate, CheckResult, Evaluation, kip, kipft};
 
 /// The sign convention, printed with every stress.
-pub const SIGN_CONVENTION: &str = "stresses: compression positive, tension negative (psi)";
+pub const SIGN_CONVENTION: &str = "stresses: compression positive, tension negative (psi); a tension check shows the fibre stress against its limit written as a stress (both negative), ratio = tension / limit, 0 when the fibre is in compression; no ratio is ever negative";
 
 /// One station of the JSON output, units in the key names.
 #[derive(Debug, Clone, Serialize)]
@@ -23,8 +23,8 @@ pub struct StationJson {
     pub mcr_kipft: f64,
     /// Factored shear, kip.
     pub vu_kip: f64,
-    /// Design shear strength, kip (absent inside the critical section).
-    pub phi_vc_kip: Option<f64>,
+    /// Design shear strength φVn = φ(Vc + Vs), kip (absent inside the critical section).
+    pub phi_vn_kip: Option<f64>,
     /// Top fibre at release, psi.
     pub f_top_release_psi: f64,
     /// Bottom fibre at release, psi.
@@ -116,8 +116,8 @@ pub struct CheckJson {
     pub mcr_kipft: f64,
     /// Factored shear at the governing shear station, kip.
     pub vu_kip: f64,
-    /// φVc there, kip.
-    pub phi_vc_kip: f64,
+    /// φVn = φ(Vc + Vs) there, kip.
+    pub phi_vn_kip: f64,
     /// Precast bottom fibre at service, at the greatest moment, psi.
     pub f_bottom_service_psi: f64,
     /// Precast top fibre at service, at the greatest moment, psi.
@@ -146,6 +146,10 @@ pub struct CheckJson {
     pub equiv_thickness_in: f64,
     /// Cover used for the fire rating, in.
     pub fire_cover_in: f64,
+    /// The least cover of any one strand to a fire-exposed face, in.
+    pub fire_least_strand_cover_in: f64,
+    /// Whether the fire rating rests on tables held from memory.
+    pub fire_tables_from_memory: bool,
     /// Natural frequency, Hz.
     pub frequency_hz: f64,
     /// Service moment (total) at the section of greatest factored moment, kip-ft.
@@ -201,7 +205,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         mn_kipft: kipft(mid.flexure.mn_lbin),
         mcr_kipft: kipft(mid.flexure.mcr_lbin),
         vu_kip: shear.map_or(0.0, |c| c.demand),
-        phi_vc_kip: shear.map_or(0.0, |c| c.capacity),
+        phi_vn_kip: shear.map_or(0.0, |c| c.capacity),
         f_bottom_service_psi: mid.service.bottom_total_psi,
         f_top_service_psi: mid.service.top_total_psi,
         camber_prestress_release_in: ev.camber.prestress_release_in,
@@ -216,6 +220,8 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         fire_rating_thickness_h: ev.fire.rating_thickness_h,
         equiv_thickness_in: ev.fire.equiv_thickness_in,
         fire_cover_in: ev.fire.cover_in,
+        fire_least_strand_cover_in: ev.fire.least_strand_cover_in,
+        fire_tables_from_memory: ev.fire.from_memory,
         frequency_hz: ev.frequency_hz,
         m_service_total_kipft: kipft(crate::case::service_moments(&mid.effects, case.sustained_live).1),
         strands: cand
@@ -247,7 +253,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
                 phi_mn_kipft: kipft(s.flexure.phi_mn_lbin),
                 mcr_kipft: kipft(s.flexure.mcr_lbin),
                 vu_kip: kip(s.vu_lbf),
-                phi_vc_kip: s.shear.map(|v| kip(v.phi_vn_lbf())),
+                phi_vn_kip: s.shear.map(|v| kip(v.phi_vn_lbf())),
                 f_top_release_psi: s.release_psi.0,
                 f_bottom_release_psi: s.release_psi.1,
                 f_top_service_psi: s.service.top_total_psi,

@@ -224,7 +224,7 @@ fn text_raw(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
             )?;
             writeln!(
                 w,
-                "     governs: {} {:.2}; φMn/Mu {:.2}; Vu/φVc {:.2}; class {}",
+                "     governs: {} {:.2}; φMn/Mu {:.2}; Vu/φVn {:.2}; class {}",
                 x.governing, x.ratio, x.phi_mn_over_mu, x.shear_ratio, x.class
             )?;
             writeln!(
@@ -279,7 +279,7 @@ fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
         }
         writeln!(
             w,
-            "| # | member | topping | psf | depth in | governs | ratio | φMn/Mu | Vu/φVc | class | camber erection in | camber final in | live defl in | fire | length | pieces |"
+            "| # | member | topping | psf | depth in | governs | ratio | φMn/Mu | Vu/φVn | class | camber erection in | camber final in | live defl in | fire | length | pieces |"
         )?;
         writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {

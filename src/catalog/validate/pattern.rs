@@ -344,7 +344,10 @@ pub(super) fn pattern(
                 cx.rep.error(
                     Some(w.span()),
                     &wpath,
-                    format!("web_steel is the shear reinforcement of double-tee stems; a {} section has no stems", family.name()),
+                    format!(
+                        "web_steel is the shear reinforcement of double-tee stems; a {} section has no stems",
+                        family.name()
+                    ),
                 );
             }
             let rw = w.get_ref();
