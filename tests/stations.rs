@@ -80,6 +80,9 @@ proptest! {
     }
 }
 
+/// A longer survey than the property test, reporting every miss above the
+/// tolerance by check: `SEED=1 CASES=20000 cargo test --release --test
+/// stations survey -- --ignored --nocapture` (recorded in DEVELOPERS.md).
 #[test]
 #[ignore]
 fn survey() {
@@ -161,87 +164,4 @@ fn survey() {
     for (k, v) in &worst {
         println!("{k}: {} misses, worst {:.2} % {}", count[k], v.0 * 100.0, v.1);
     }
-}
-
-#[test]
-#[ignore]
-fn dbg_one() {
-    let cat = demo();
-    let s = cat.section("plank-10in-4ft").unwrap();
-    let p = s.patterns.iter().find(|p| p.id == "7x0.6").unwrap();
-    let cand = Candidate {
-        section: s,
-        pattern: p,
-        mix: s.mix(&cat),
-    };
-    let mut k = DesignCase::new(Length::from_unit(73.7, "ft"));
-    k.sdl = AreaLoad::from_unit(8.3, "psf");
-    k.live = AreaLoad::from_unit(254.7, "psf");
-    k.topping = Some(Topping {
-        thickness: Length::new(2.0),
-        mix: cat.mixes[3].clone(),
-    });
-    k.line_loads.push(LineLoadSpec {
-        w: LineLoad::from_unit(1.5456, "klf"),
-        at: Length::from_unit(16.77, "ft"),
-        kind: LoadKind::Dead,
-    });
-    let l = k.span.get();
-    let xs: Vec<f64> = (0..=DENSE).map(|i| l * i as f64 / DENSE as f64).collect();
-    let an = plankwise::checks::evaluate_on_stations(&cand, &k, &xs);
-    let n = plankwise::checks::evaluate(&cand, &k);
-    for st in an
-        .stations
-        .iter()
-        .filter(|s| s.x_in > 61.0 * 12.0 && s.x_in < 63.5 * 12.0)
-        .step_by(4)
-    {
-        let v = *st.shear.unwrap().gov();
-        println!(
-            "D {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}",
-            st.x_in / 12.0,
-            v.name(),
-            v.vu_lbf / v.phi_vn_lbf,
-            v.vu_lbf,
-            v.vci_lbf,
-            v.vci_raw_lbf,
-            v.vci_min_lbf,
-            v.vcw_lbf
-        );
-    }
-    for st in n.stations.iter().filter(|s| s.x_in > 58.0 * 12.0 && s.x_in < 66.5 * 12.0) {
-        let v = *st.shear.unwrap().gov();
-        println!(
-            "N {:.3} {} r {:.4} vu {:.0} vci {:.0} raw {:.0} lb {:.0} vcw {:.0}",
-            st.x_in / 12.0,
-            v.name(),
-            v.vu_lbf / v.phi_vn_lbf,
-            v.vu_lbf,
-            v.vci_lbf,
-            v.vci_raw_lbf,
-            v.vci_min_lbf,
-            v.vcw_lbf
-        );
-    }
-    println!("{:?}", n.check("shear"));
-}
-
-#[test]
-#[ignore]
-fn profile_loop() {
-    let cat = demo();
-    let s = cat.section("plank-8in-4ft").unwrap();
-    let cand = Candidate {
-        section: s,
-        pattern: &s.patterns[1],
-        mix: s.mix(&cat),
-    };
-    let mut k = DesignCase::new(Length::from_unit(24.0, "ft"));
-    k.sdl = AreaLoad::from_unit(20.0, "psf");
-    k.live = AreaLoad::from_unit(40.0, "psf");
-    let mut n = 0.0;
-    for _ in 0..std::env::var("N").map_or(200_000, |v| v.parse().unwrap()) {
-        n += plankwise::checks::evaluate_brief(&cand, &k).checks[0].ratio;
-    }
-    println!("{n}");
 }
