@@ -4,10 +4,9 @@
 //! that only parses ([`raw`]), then [`validate`] into this model, which holds
 //! only sound values with units read. Every problem in the file is reported
 //! at once, each with file, line, column, field path, what was found and what
-//! is allowed; see [`diag::Problem`]. The key reference is
+//! is allowed; see [`crate::input::diag::Problem`]. The key reference is
 //! `catalog/README.md`.
 
-pub mod diag;
 pub mod raw;
 pub mod validate;
 
@@ -18,7 +17,7 @@ use serde::Serialize;
 use crate::material::{Mix, StrandKind};
 use crate::section::{DoubleTee, Family, Generic, Geometry, HollowCore, Properties};
 use crate::units::{Area, Length, PricePerArea, Stress};
-pub use diag::{Problem, Problems, Severity};
+pub use crate::input::diag::{self, Problem, Problems, Severity};
 
 /// Largest catalog or job file plankwise reads, bytes (16 MiB); a 10 000-entry
 /// catalog is a few MB.

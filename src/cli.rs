@@ -6,7 +6,7 @@ use std::path::PathBuf;
 use clap::{Parser, Subcommand};
 use serde::Serialize;
 
-use plankwise::catalog::diag::suggestion;
+use plankwise::input::diag::suggestion;
 use plankwise::catalog::{Catalog, DEMO_US, Problems, SectionSummary, Severity};
 use plankwise::checks::{Candidate, evaluate};
 use plankwise::report;

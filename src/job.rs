@@ -6,8 +6,8 @@ use serde::Deserialize;
 use toml::Spanned;
 
 use crate::case::{Attachment, DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Use};
-use crate::catalog::diag::suggestion;
-use crate::catalog::validate::{Ctx, de, join, span, tables};
+use crate::input::diag::suggestion;
+use crate::input::{Ctx, de, join, span, tables};
 use crate::catalog::{Problems, content_hash, raw::S};
 use crate::fire::Exposure;
 use crate::section::Family;
@@ -478,7 +478,7 @@ impl Job {
 
     /// Validate job text; `file` names it in messages.
     pub fn from_str(text: &str, file: &str) -> Result<Job, Problems> {
-        let (mut cx, root) = crate::catalog::validate::parse(text, file)?;
+        let (mut cx, root) = crate::input::parse(text, file)?;
         let root_span = root.span();
         let root = root.into_inner();
         let mut meta = None;

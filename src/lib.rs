@@ -18,6 +18,7 @@ pub mod case;
 pub mod catalog;
 pub mod checks;
 pub mod fire;
+pub mod input;
 pub mod job;
 pub mod material;
 pub mod member;

@@ -110,7 +110,7 @@ pub fn cross_check(cat: &Catalog, bays: &[Bay]) -> Vec<String> {
                 out.push(format!(
                     "bay '{}': topping_mix '{id}' is not a mix of the catalog{}; it has: {}",
                     b.name,
-                    crate::catalog::diag::suggestion(id, ids.iter().copied()),
+                    crate::input::diag::suggestion(id, ids.iter().copied()),
                     ids.join(", ")
                 ));
             }

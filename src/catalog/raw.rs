@@ -9,7 +9,7 @@ use serde::Deserialize;
 use toml::Spanned;
 
 /// A string field with its position.
-pub type S = Spanned<String>;
+pub use crate::input::S;
 /// A point given as two quantity strings, [x, y].
 pub type Point = Spanned<Vec<S>>;
 

@@ -2,7 +2,7 @@
 
 use plankwise::case::{Attachment, DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Use};
 use plankwise::catalog::Catalog;
-use plankwise::catalog::diag::suggestion;
+use plankwise::input::diag::suggestion;
 use plankwise::fire::Exposure;
 use plankwise::job::{Bay, Objective};
 use plankwise::units::{Kind, Length, Q, Stress};

@@ -423,7 +423,7 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
             job.bays.iter().find(|b| &b.name == name).cloned().ok_or_else(|| {
                 Failure::Message(format!(
                     "--bay: no bay '{name}'{}; the job has: {}",
-                    plankwise::catalog::diag::suggestion(name, names.iter().copied()),
+                    plankwise::input::diag::suggestion(name, names.iter().copied()),
                     names.join(", ")
                 ))
             })?

@@ -185,7 +185,7 @@ impl Keymap {
                 let names: Vec<&str> = km.bindings.iter().map(|b| b.name).collect();
                 problems.push(format!(
                     "keys file: unknown action '{name}'{}",
-                    crate::catalog::diag::suggestion(&name, names.iter().copied())
+                    crate::input::diag::suggestion(&name, names.iter().copied())
                 ));
                 continue;
             };

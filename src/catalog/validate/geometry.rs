@@ -3,7 +3,7 @@
 use toml::Spanned;
 
 use super::{Ctx, join, limits, span};
-use crate::catalog::diag::suggestion;
+use crate::input::diag::suggestion;
 use crate::catalog::raw::{self, S};
 use crate::section::family::fmt;
 use crate::section::{CoreShape, Cores, DoubleTee, Generic, HollowCore, Keyway, VoidSpec};

@@ -1,7 +1,7 @@
 //! Mixes and strand kinds.
 
 use super::{Ctx, join, limits, span};
-use crate::catalog::diag::suggestion;
+use crate::input::diag::suggestion;
 use crate::catalog::raw;
 use crate::material::{Aggregate, Mix, Modulus, Relaxation, StrandKind};
 use crate::section::family::fmt;

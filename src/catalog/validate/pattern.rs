@@ -3,7 +3,7 @@
 use toml::Spanned;
 
 use super::{Ctx, PUBLISHED_TOLERANCE, Refs, join, limits, span};
-use crate::catalog::diag::suggestion;
+use crate::input::diag::suggestion;
 use crate::catalog::raw::{self, RawPattern, S};
 use crate::catalog::{Bar, FamilySpec, Pattern, Published, Row, Section, WebSteel};
 use crate::material::{Mix, builtin_strand, builtin_strand_names};
