@@ -1,85 +1,24 @@
 //! The job file: a project's bays and the criteria they share, read from
 //! TOML and validated like the catalog (every problem at once, with file,
-//! line and column). Keys are documented in `catalog/README.md`.
+//! line and column, every field of an entry even after one fails), through
+//! the one definition of each criterion in [`crate::criteria`]. Saving a job
+//! that came from a file edits that file in place with a format-preserving
+//! TOML editor: comments, `[defaults]`, key order and every untouched value
+//! stay as the user typed them; an edited value is written in the unit it
+//! was typed in. Keys are documented in `catalog/README.md`.
+
+use std::collections::BTreeMap;
 
 use serde::Deserialize;
 use toml::Spanned;
+use toml::de::{DeTable, DeValue};
 
-use crate::case::{Attachment, DesignCase, LineLoadSpec, LoadKind, LossMethod, ServiceClass, Use};
+pub use crate::bay::{Bay, Objective};
+use crate::catalog::{Problems, content_hash};
+use crate::criteria::{CRITERIA, Criterion, Form, Value, check_text, find, line_load};
 use crate::input::diag::suggestion;
-use crate::input::{Ctx, de, join, span, tables};
-use crate::catalog::{Problems, content_hash, raw::S};
-use crate::fire::Exposure;
-use crate::section::Family;
-use crate::units::{Area, AreaLoad, Duration, Length, LineLoad, Stress};
-
-/// The ranking objectives, in the fixed order used to break ties.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, serde::Serialize)]
-#[serde(rename_all = "kebab-case")]
-pub enum Objective {
-    /// Least self-weight per plan area (topping included).
-    Lightest,
-    /// Least overall depth (topping included).
-    Shallowest,
-    /// Least strand area per foot of member width.
-    LeastSteel,
-    /// Lowest price per plan area (entries without a price last).
-    Cheapest,
-    /// Lowest governing ratio.
-    MostReserve,
-}
-
-impl Objective {
-    /// All, in tie-break order.
-    pub const ALL: [Objective; 5] = [
-        Objective::Lightest,
-        Objective::Shallowest,
-        Objective::LeastSteel,
-        Objective::Cheapest,
-        Objective::MostReserve,
-    ];
-    /// Catalog spelling.
-    pub fn name(self) -> &'static str {
-        match self {
-            Objective::Lightest => "lightest",
-            Objective::Shallowest => "shallowest",
-            Objective::LeastSteel => "least-steel",
-            Objective::Cheapest => "cheapest",
-            Objective::MostReserve => "most-reserve",
-        }
-    }
-    /// From a spelling.
-    pub fn from_name(s: &str) -> Option<Objective> {
-        Objective::ALL.into_iter().find(|o| o.name() == s)
-    }
-    /// The next one, cycling (for the UI).
-    pub fn next(self) -> Objective {
-        let i = Objective::ALL.iter().position(|&o| o == self).unwrap_or(0);
-        Objective::ALL[(i + 1) % Objective::ALL.len()]
-    }
-}
-
-/// A bay: its design case (without topping), the topping options to try and
-/// how to rank.
-#[derive(Debug, Clone, PartialEq)]
-pub struct Bay {
-    /// Name.
-    pub name: String,
-    /// The design case; `topping` is filled per option.
-    pub case: DesignCase,
-    /// Topping thicknesses to try (None = no topping).
-    pub toppings: Vec<Option<Length>>,
-    /// Topping mix id in the catalog (None = the default 4000 psi mix).
-    pub topping_mix: Option<String>,
-    /// Ranking objective.
-    pub objective: Objective,
-    /// Families allowed (empty = all).
-    pub families: Vec<Family>,
-    /// Plan area, for totals.
-    pub area: Option<Area>,
-    /// Number of pieces, for totals (otherwise from the area).
-    pub pieces: Option<u32>,
-}
+use crate::input::{Ctx, S, de, join, span, tables};
+use crate::units::{Length, System};
 
 /// A validated job.
 #[derive(Debug, Clone, PartialEq)]
@@ -94,10 +33,17 @@ pub struct Job {
     pub code: String,
     /// Notes for the shortlist.
     pub notes: Vec<String>,
+    /// Display units the job asks for, if it names them.
+    pub units: Option<System>,
     /// Bays.
     pub bays: Vec<Bay>,
     /// Content hash of the file.
     pub hash: String,
+    /// The text it was read from, kept so that saving edits it in place.
+    pub source: Option<String>,
+    /// Text typed for a value since loading, by (bay, key): the unit it is
+    /// saved in.
+    pub typed: BTreeMap<(usize, &'static str), String>,
 }
 
 /// The demo job, embedded like the demo catalog.
@@ -111,362 +57,178 @@ struct RawJobMeta {
     date: Option<S>,
     code: Option<S>,
     notes: Option<Vec<S>>,
-}
-
-/// Criteria that a bay may override; the same keys as `[defaults]`.
-#[derive(Debug, Deserialize, Default, Clone)]
-#[serde(deny_unknown_fields)]
-struct RawCriteria {
-    #[serde(rename = "use")]
-    member_use: Option<S>,
-    class: Option<S>,
-    humidity: Option<Spanned<f64>>,
-    fire: Option<S>,
-    restrained: Option<bool>,
-    exposure: Option<S>,
-    attached: Option<S>,
-    toppings: Option<Vec<S>>,
-    topping_mix: Option<S>,
-    objective: Option<S>,
-    bearing: Option<S>,
-    sustained: Option<Spanned<f64>>,
-    families: Option<Vec<S>>,
-    lump_loss: Option<S>,
-    min_frequency: Option<Spanned<f64>>,
-}
-
-#[derive(Debug, Deserialize)]
-#[serde(deny_unknown_fields)]
-struct RawLine {
-    w: S,
-    at: S,
-    kind: Option<S>,
-}
-
-#[derive(Debug, Deserialize)]
-#[serde(deny_unknown_fields)]
-struct RawBay {
-    name: S,
-    span: S,
-    sdl: Option<S>,
-    live: Option<S>,
-    roof_live: Option<S>,
-    snow: Option<S>,
-    line: Option<Vec<Spanned<RawLine>>>,
-    area: Option<S>,
-    pieces: Option<Spanned<i64>>,
-    // the criteria a bay may override (the keys of [defaults]); serde's
-    // flatten cannot be combined with deny_unknown_fields, so listed again
-    #[serde(rename = "use")]
-    member_use: Option<S>,
-    class: Option<S>,
-    humidity: Option<Spanned<f64>>,
-    fire: Option<S>,
-    restrained: Option<bool>,
-    exposure: Option<S>,
-    attached: Option<S>,
-    toppings: Option<Vec<S>>,
-    topping_mix: Option<S>,
-    objective: Option<S>,
-    bearing: Option<S>,
-    sustained: Option<Spanned<f64>>,
-    families: Option<Vec<S>>,
-    lump_loss: Option<S>,
-    min_frequency: Option<Spanned<f64>>,
-}
-
-impl RawBay {
-    fn criteria(&self) -> RawCriteria {
-        macro_rules! take {
-            ($($f:ident),*) => { RawCriteria { $($f: self.$f.clone(),)* } };
-        }
-        take!(
-            member_use,
-            class,
-            humidity,
-            fire,
-            restrained,
-            exposure,
-            attached,
-            toppings,
-            topping_mix,
-            objective,
-            bearing,
-            sustained,
-            families,
-            lump_loss,
-            min_frequency
-        )
-    }
+    units: Option<S>,
 }
 
 const TOP_KEYS: &[&str] = &["job", "defaults", "bay"];
+/// Bay keys that are not criteria: line loads and the shortlist marks.
+const BAY_EXTRA: &[&str] = &["line", "marked"];
 
-fn merge(base: &RawCriteria, over: &RawCriteria) -> RawCriteria {
-    macro_rules! pick {
-        ($($f:ident),*) => { RawCriteria { $($f: over.$f.clone().or_else(|| base.$f.clone()),)* } };
-    }
-    pick!(
-        member_use,
-        class,
-        humidity,
-        fire,
-        restrained,
-        exposure,
-        attached,
-        toppings,
-        topping_mix,
-        objective,
-        bearing,
-        sustained,
-        families,
-        lump_loss,
-        min_frequency
-    )
+/// A value as the criteria read it: its text, and where it is.
+#[derive(Debug, Clone)]
+struct Given {
+    text: String,
+    at: std::ops::Range<usize>,
 }
 
-fn choice<T: Copy>(cx: &mut Ctx, s: &Option<S>, path: &str, field: &str, options: &[(&str, T)], default: T) -> Option<T> {
-    let Some(s) = s else { return Some(default) };
-    match options.iter().find(|(n, _)| *n == s.get_ref()) {
-        Some(&(_, v)) => Some(v),
-        None => {
-            let names: Vec<&str> = options.iter().map(|o| o.0).collect();
-            cx.rep.error(
-                span(s),
-                &join(path, field),
-                format!(
-                    "'{}' is not allowed{}; use one of: {}",
-                    s.get_ref(),
-                    suggestion(s.get_ref(), names.iter().copied()),
-                    names.join(", ")
-                ),
-            );
-            None
-        }
-    }
-}
-
-fn bay(cx: &mut Ctx, b: &Spanned<RawBay>, defaults: &RawCriteria) -> Option<Bay> {
-    let r = b.get_ref();
-    let path = format!("bay '{}'", r.name.get_ref());
-    let c = merge(defaults, &r.criteria());
-    let span_len = cx.ranged::<crate::units::LengthK>(&r.span, &path, "span", (2.0, 200.0), "ft");
-    let mut load = |v: &Option<S>, key: &str| -> Option<AreaLoad> {
-        match v {
-            None => Some(AreaLoad::new(0.0)),
-            Some(s) => cx.ranged::<crate::units::AreaLoadK>(s, &path, key, (0.0, 2000.0), "psf"),
-        }
-    };
-    let (sdl, live, roof_live, snow) = (
-        load(&r.sdl, "sdl"),
-        load(&r.live, "live"),
-        load(&r.roof_live, "roof_live"),
-        load(&r.snow, "snow"),
-    );
-    let mut lines = Vec::new();
-    let mut lines_ok = true;
-    for (i, l) in r.line.iter().flatten().enumerate() {
-        let lp = join(&path, &format!("line {}", i + 1));
-        let w = cx.ranged::<crate::units::LineLoadK>(&l.get_ref().w, &lp, "w", (0.0, 100.0), "klf");
-        let at = cx.q::<crate::units::LengthK>(&l.get_ref().at, &lp, "at");
-        let kind = choice(
-            cx,
-            &l.get_ref().kind,
-            &lp,
-            "kind",
-            &[("dead", LoadKind::Dead), ("live", LoadKind::Live)],
-            LoadKind::Dead,
-        );
-        match (w, at, kind, span_len) {
-            (Some(w), Some(at), Some(kind), Some(sp)) => {
-                if at.get() < 0.0 || at.get() > sp.get() {
-                    cx.rep.error(
-                        span(&l.get_ref().at),
-                        &join(&lp, "at"),
-                        format!("'{}' is not within the {:.2} ft span", l.get_ref().at.get_ref(), sp.get() / 12.0),
-                    );
-                    lines_ok = false;
-                } else {
-                    lines.push(LineLoadSpec {
-                        w: LineLoad::new(w.get()),
-                        at,
-                        kind,
-                    });
+/// The text of a TOML value for a criterion of `form`, or what is wrong.
+fn text_of(form: Form, v: &Spanned<DeValue>) -> Result<String, String> {
+    let found = v.get_ref().type_str();
+    let want = |what: &str| Err(format!("found {found}; {what}"));
+    match (form, v.get_ref()) {
+        (Form::Number { .. }, DeValue::Integer(i)) | (Form::Count { .. }, DeValue::Integer(i)) => Ok(i.to_string()),
+        (Form::Number { .. }, DeValue::Float(f)) => Ok(f.to_string()),
+        (Form::Number { .. }, _) => want("a number is needed, e.g. 70"),
+        (Form::Count { .. }, _) => want("a whole number is needed, e.g. 14"),
+        (Form::Flag, DeValue::Boolean(b)) => Ok(b.to_string()),
+        (Form::Flag, _) => want("true or false is needed"),
+        (Form::QuantityList { .. } | Form::ChoiceList(_), DeValue::Array(a)) => {
+            let mut parts = Vec::with_capacity(a.len());
+            for e in a.iter() {
+                match e.get_ref().as_str() {
+                    Some(t) if !t.contains(',') => parts.push(t.to_string()),
+                    Some(t) => return Err(format!("'{}' holds a comma; give each item as its own string", t.escape_debug())),
+                    None => return Err(format!("a list of strings is needed; an item is {}", e.get_ref().type_str())),
                 }
             }
-            _ => lines_ok = false,
+            Ok(parts.join(", "))
+        }
+        (Form::QuantityList { .. } | Form::ChoiceList(_), _) => want("a list of strings is needed, e.g. [\"none\", \"2 in\"]"),
+        (_, DeValue::String(t)) => Ok(t.to_string()),
+        (Form::Quantity { .. }, _) => want("quantities are quoted strings with a unit, e.g. \"8 in\""),
+        _ => want("a quoted string is needed"),
+    }
+}
+
+/// The criteria a table gives, by key, and its other keys; unknown keys
+/// are reported with the nearest allowed one.
+#[allow(clippy::type_complexity)]
+fn walk<'t, 'a>(cx: &mut Ctx, t: &'t DeTable<'a>, path: &str, defaults: bool) -> (BTreeMap<&'static str, Given>, Vec<(String, &'t Spanned<DeValue<'a>>)>) {
+    let allowed: Vec<&str> = CRITERIA
+        .iter()
+        .filter(|c| !defaults || c.inherit)
+        .map(|c| c.key)
+        .chain(if defaults { &[][..] } else { BAY_EXTRA }.iter().copied())
+        .collect();
+    let mut given = BTreeMap::new();
+    let mut extra = Vec::new();
+    for (k, v) in t.iter() {
+        let key = k.get_ref().as_ref();
+        match find(key).filter(|c| allowed.contains(&c.key)) {
+            Some(c) => match text_of(c.form, v) {
+                Ok(text) => {
+                    given.insert(c.key, Given { text, at: v.span() });
+                }
+                Err(e) => cx.rep.error(Some(v.span()), &join(path, key), e),
+            },
+            None if allowed.contains(&key) => extra.push((key.to_string(), v)),
+            None => {
+                let why = if defaults && find(key).is_some() {
+                    format!("'{key}' belongs to each [[bay]], not to [defaults]")
+                } else {
+                    format!(
+                        "unknown key '{key}'{}; allowed here: {}",
+                        suggestion(key, allowed.iter().copied()),
+                        allowed.join(", ")
+                    )
+                };
+                cx.rep.error(Some(k.span()), path, why);
+            }
         }
     }
-    let member_use = choice(
-        cx,
-        &c.member_use,
-        &path,
-        "use",
-        &[("floor", Use::Floor), ("roof", Use::Roof)],
-        Use::Floor,
-    );
-    let class = choice(
-        cx,
-        &c.class,
-        &path,
-        "class",
-        &[("U", ServiceClass::U), ("T", ServiceClass::T), ("C", ServiceClass::C)],
-        ServiceClass::U,
-    );
-    let exposure = choice(
-        cx,
-        &c.exposure,
-        &path,
-        "exposure",
-        &[("interior", Exposure::Interior), ("weather", Exposure::Weather)],
-        Exposure::Interior,
-    );
-    let attached = choice(
-        cx,
-        &c.attached,
-        &path,
-        "attached",
-        &[
-            ("none", Attachment::None),
-            ("tolerant", Attachment::Tolerant),
-            ("sensitive", Attachment::Sensitive),
-        ],
-        Attachment::None,
-    );
-    let objective_opts: Vec<(&str, Objective)> = Objective::ALL.iter().map(|o| (o.name(), *o)).collect();
-    let objective = choice(cx, &c.objective, &path, "objective", &objective_opts, Objective::Lightest);
-    let fire = match &c.fire {
-        None => Some(None),
-        Some(f) => cx.q::<crate::units::TimeK>(f, &path, "fire").and_then(|h: Duration| {
-            if crate::fire::RATINGS.iter().any(|r| (r - h.get()).abs() < 1e-9) {
-                Some(Some(h.get()))
-            } else {
-                cx.rep.error(
-                    span(f),
-                    &join(&path, "fire"),
-                    format!("'{}' is not a tabulated rating; use 1, 1.5, 2, 3 or 4 h", f.get_ref()),
-                );
-                None
+    (given, extra)
+}
+
+/// One bay from its table, the defaults filling what it does not give.
+fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str, Given>, index: usize) -> Option<Bay> {
+    let DeValue::Table(t) = table.get_ref() else { return None };
+    let name = t
+        .iter()
+        .find(|(k, _)| k.get_ref() == "name")
+        .and_then(|(_, v)| v.get_ref().as_str())
+        .map_or(format!("bay {}", index + 1), |n| format!("bay '{}'", n.escape_debug()));
+    let (own, extra) = walk(cx, t, &name, false);
+    let mut b = Bay::new("", Length::new(0.0));
+    let mut ok = true;
+    for c in CRITERIA {
+        let given = own.get(c.key).or_else(|| defaults.get(c.key));
+        match given {
+            Some(g) => {
+                if let Err(e) = c.apply(&mut b, &g.text) {
+                    cx.rep.error(Some(g.at.clone()), &join(&name, c.key), e);
+                    ok = false;
+                }
             }
-        }),
-    };
-    let humidity = match &c.humidity {
-        None => Some(crate::case::DEFAULT_HUMIDITY),
-        Some(h) if (20.0..=100.0).contains(h.get_ref()) => Some(*h.get_ref()),
-        Some(h) => {
-            cx.rep.error(
-                span(h),
-                &join(&path, "humidity"),
-                format!("{} is outside 20 to 100 (%)", h.get_ref()),
-            );
-            None
+            None if c.required => {
+                cx.rep.error(Some(table.span().start..table.span().start), &join(&name, c.key), format!("missing key '{}': {}", c.key, c.help));
+                ok = false;
+            }
+            None if !c.default.is_empty() => {
+                c.apply(&mut b, c.default).expect("defaults are valid");
+            }
+            None => {}
         }
-    };
-    let sustained = match &c.sustained {
-        None => Some(crate::case::DEFAULT_SUSTAINED_LIVE),
-        Some(h) if (0.0..=1.0).contains(h.get_ref()) => Some(*h.get_ref()),
-        Some(h) => {
-            cx.rep.error(
-                span(h),
-                &join(&path, "sustained"),
-                format!("{} is outside 0 to 1 (a fraction of the live load)", h.get_ref()),
-            );
-            None
-        }
-    };
-    let min_frequency = match &c.min_frequency {
-        None => Some(None),
-        Some(h) if (0.5..=50.0).contains(h.get_ref()) => Some(Some(*h.get_ref())),
-        Some(h) => {
-            cx.rep.error(
-                span(h),
-                &join(&path, "min_frequency"),
-                format!("{} is outside 0.5 to 50 (Hz)", h.get_ref()),
-            );
-            None
-        }
-    };
-    let bearing = match &c.bearing {
-        None => Some(Length::new(crate::case::DEFAULT_BEARING_IN)),
-        Some(s) => cx.ranged::<crate::units::LengthK>(s, &path, "bearing", (0.5, 24.0), "in"),
-    };
-    let lump = match &c.lump_loss {
-        None => Some(LossMethod::Zia),
-        Some(s) => cx
-            .ranged::<crate::units::StressK>(s, &path, "lump_loss", (0.0, 100.0), "ksi")
-            .map(|v: Stress| LossMethod::LumpSum(v)),
-    };
-    let mut toppings = Vec::new();
-    let mut top_ok = true;
-    match &c.toppings {
-        None => toppings.push(None),
-        Some(list) => {
-            for t in list {
-                if t.get_ref() == "none" {
-                    toppings.push(None);
-                } else {
-                    match cx.ranged::<crate::units::LengthK>(t, &path, "toppings", (0.5, 12.0), "in") {
-                        Some(v) => toppings.push(Some(v)),
-                        None => top_ok = false,
+    }
+    for (key, v) in extra {
+        match key.as_str() {
+            "line" => {
+                let DeValue::Array(items) = v.get_ref() else {
+                    cx.rep.error(Some(v.span()), &join(&name, "line"), "a list of tables is needed, e.g. [{ w = \"0.6 klf\", at = \"8 ft\" }]");
+                    ok = false;
+                    continue;
+                };
+                for (i, item) in items.iter().enumerate() {
+                    let lp = join(&name, &format!("line {}", i + 1));
+                    let DeValue::Table(lt) = item.get_ref() else {
+                        cx.rep.error(Some(item.span()), &lp, "a table { w, at, kind } is needed");
+                        ok = false;
+                        continue;
+                    };
+                    let field = |f: &str| lt.iter().find(|(k, _)| k.get_ref() == f).map(|(_, v)| v);
+                    for (k, _) in lt.iter() {
+                        if !["w", "at", "kind"].contains(&k.get_ref().as_ref()) {
+                            cx.rep.error(Some(k.span()), &lp, format!("unknown key '{}'; allowed here: w, at, kind", k.get_ref()));
+                            ok = false;
+                        }
+                    }
+                    let text = |f: &str| field(f).and_then(|v| v.get_ref().as_str());
+                    let (Some(w), Some(at)) = (text("w"), text("at")) else {
+                        cx.rep.error(Some(item.span()), &lp, "needs w (a line load, e.g. \"0.6 klf\") and at (a length from the left support) as quoted strings");
+                        ok = false;
+                        continue;
+                    };
+                    match line_load(w, at, text("kind"), b.case.span) {
+                        Ok(l) => b.case.line_loads.push(l),
+                        Err((f, e)) => {
+                            let at = field(f).map_or(item.span(), |v| v.span());
+                            cx.rep.error(Some(at), &join(&lp, f), e);
+                            ok = false;
+                        }
                     }
                 }
             }
-            if list.is_empty() {
-                toppings.push(None);
-            }
+            "marked" => match v.get_ref() {
+                DeValue::Array(a) if a.iter().all(|e| e.get_ref().as_str().is_some()) => {
+                    for e in a.iter() {
+                        let t = e.get_ref().as_str().unwrap_or_default();
+                        match check_text(t) {
+                            Ok(()) => b.marked.push(t.to_string()),
+                            Err(m) => {
+                                cx.rep.error(Some(e.span()), &join(&name, "marked"), m);
+                                ok = false;
+                            }
+                        }
+                    }
+                }
+                _ => {
+                    cx.rep.error(Some(v.span()), &join(&name, "marked"), "a list of entry labels is needed, e.g. [\"plank-8 / 6x1/2\"]");
+                    ok = false;
+                }
+            },
+            _ => {}
         }
     }
-    let mut families = Vec::new();
-    for f in c.families.iter().flatten() {
-        let opts = [
-            ("hollow-core", Family::HollowCore),
-            ("double-tee", Family::DoubleTee),
-            ("generic", Family::Generic),
-        ];
-        match choice(cx, &Some(f.clone()), &path, "families", &opts, Family::Generic) {
-            Some(v) => families.push(v),
-            None => top_ok = false,
-        }
-    }
-    let area = match &r.area {
-        None => Some(None),
-        Some(a) => cx.ranged::<crate::units::AreaK>(a, &path, "area", (1.0, 1.0e7), "ft2").map(Some),
-    };
-    let pieces = match &r.pieces {
-        None => Some(None),
-        Some(p) => cx.count(p, &path, "pieces", (1, 100_000)).map(Some),
-    };
-    let name = cx.text(&Some(r.name.clone()), &path, "name");
-    let mut case = DesignCase::new(span_len?);
-    case.sdl = sdl?;
-    case.live = live?;
-    case.roof_live = roof_live?;
-    case.snow = snow?;
-    case.line_loads = lines;
-    case.member_use = member_use?;
-    case.class_allowed = class?;
-    case.humidity = humidity?;
-    case.sustained_live = sustained?;
-    case.bearing = bearing?;
-    case.losses = lump?;
-    case.fire_rating = fire?;
-    case.restrained = c.restrained.unwrap_or(false);
-    case.exposure = exposure?;
-    case.attachment = attached?;
-    case.min_frequency_hz = min_frequency?;
-    if !lines_ok || !top_ok {
-        return None;
-    }
-    Some(Bay {
-        name,
-        case,
-        toppings,
-        topping_mix: c.topping_mix.map(|s| s.into_inner()),
-        objective: objective?,
-        families,
-        area: area?,
-        pieces: pieces?,
-    })
+    ok.then_some(b)
 }
 
 impl Job {
@@ -482,28 +244,33 @@ impl Job {
         let root_span = root.span();
         let root = root.into_inner();
         let mut meta = None;
-        let mut defaults = RawCriteria::default();
+        let mut defaults = BTreeMap::new();
         let mut raw_bays = Vec::new();
         for (k, v) in root.iter() {
             match k.get_ref().as_ref() {
                 "job" => meta = de::<RawJobMeta>(&mut cx.rep, v, "job"),
-                "defaults" => {
-                    if let Some(d) = de::<RawCriteria>(&mut cx.rep, v, "defaults") {
-                        defaults = d;
+                "defaults" => match v.get_ref() {
+                    DeValue::Table(t) => {
+                        defaults = walk(&mut cx, t, "defaults", true).0;
+                        // a default that does not read is reported once,
+                        // here, and left out of every bay
+                        defaults.retain(|key, g| match find(key).map(|c| c.parse(&g.text)) {
+                            Some(Err(e)) => {
+                                cx.rep.error(Some(g.at.clone()), &join("defaults", key), e);
+                                false
+                            }
+                            _ => true,
+                        });
                     }
-                }
-                "bay" => {
-                    for (i, e) in tables(&mut cx.rep, v, "bay").into_iter().enumerate() {
-                        if let Some(b) = de::<RawBay>(&mut cx.rep, e, &format!("bay {}", i + 1)) {
-                            raw_bays.push(Spanned::new(e.span(), b));
-                        }
-                    }
-                }
+                    other => cx.rep.error(Some(v.span()), "defaults", format!("[defaults] must be a table; found {}", other.type_str())),
+                },
+                "bay" => raw_bays.extend(tables(&mut cx.rep, v, "bay")),
                 other => cx.rep.error(
                     Some(k.span()),
                     "",
                     format!(
-                        "unknown top-level key '{other}'{}; allowed: {}",
+                        "unknown top-level key '{}'{}; allowed: {}",
+                        other.escape_debug(),
                         suggestion(other, TOP_KEYS.iter().copied()),
                         TOP_KEYS.join(", ")
                     ),
@@ -517,17 +284,17 @@ impl Job {
                 "missing [job] table with at least project = \"…\"",
             );
         }
-        let mut bays = Vec::new();
-        for b in &raw_bays {
-            if let Some(bay) = bay(&mut cx, b, &defaults) {
-                if bays.iter().any(|x: &Bay| x.name == bay.name) {
-                    cx.rep.error(
-                        span(&b.get_ref().name),
-                        &format!("bay '{}' / name", bay.name),
-                        "duplicate bay name; each bay needs its own",
-                    );
+        let mut bays: Vec<Bay> = Vec::new();
+        for (i, t) in raw_bays.iter().enumerate() {
+            if let Some(b) = bay(&mut cx, t, &defaults, i) {
+                if bays.iter().any(|x| x.name == b.name) {
+                    let at = match t.get_ref() {
+                        DeValue::Table(tt) => tt.iter().find(|(k, _)| k.get_ref() == "name").map(|(_, v)| v.span()),
+                        _ => None,
+                    };
+                    cx.rep.error(at, &format!("bay '{}' / name", b.name), "duplicate bay name; each bay needs its own");
                 }
-                bays.push(bay);
+                bays.push(b);
             }
         }
         if raw_bays.is_empty() && !cx.rep.has_errors() {
@@ -537,14 +304,30 @@ impl Job {
                 "the job has no bays; add at least one [[bay]] with name and span",
             );
         }
-        let meta = match meta {
-            Some(m) => m,
-            None => return Err(Problems(cx.rep.finish())),
+        let Some(meta) = meta else {
+            return Err(Problems(cx.rep.finish()));
         };
-        let project = cx.text(&Some(meta.project), "job", "project");
+        let project = cx.text(&Some(meta.project.clone()), "job", "project");
+        if project.trim().is_empty() {
+            cx.rep.error(span(&meta.project), "job / project", "is empty; give the project a name");
+        }
         let engineer = cx.text(&meta.engineer, "job", "engineer");
         let date = cx.text(&meta.date, "job", "date");
-        let code = meta.code.map_or("ACI 318-19".to_string(), |c| c.into_inner());
+        let code = match &meta.code {
+            Some(c) => cx.text(&Some(c.clone()), "job", "code"),
+            None => "ACI 318-19".to_string(),
+        };
+        let notes: Vec<String> = meta.notes.iter().flatten().map(|n| cx.text(&Some(n.clone()), "job", "notes")).collect();
+        let units = match &meta.units {
+            None => None,
+            Some(u) => match System::from_name(u.get_ref()) {
+                Some(s) => Some(s),
+                None => {
+                    cx.rep.error(span(u), "job / units", format!("'{}' is not allowed; use one of: us, si", u.get_ref().escape_debug()));
+                    None
+                }
+            },
+        };
         if cx.rep.has_errors() {
             return Err(Problems(cx.rep.finish()));
         }
@@ -553,16 +336,37 @@ impl Job {
             engineer,
             date,
             code,
-            notes: meta.notes.unwrap_or_default().into_iter().map(|n| n.into_inner()).collect(),
+            notes,
+            units,
             bays,
             hash: content_hash(text),
+            source: Some(text.to_string()),
+            typed: BTreeMap::new(),
         })
+    }
+
+    /// A job of one bay, not read from a file (flags, or a catalog opened
+    /// without a job).
+    pub fn single(project: &str, bay: Bay) -> Job {
+        Job {
+            project: project.to_string(),
+            engineer: String::new(),
+            date: String::new(),
+            code: "ACI 318-19".into(),
+            notes: Vec::new(),
+            units: None,
+            bays: vec![bay],
+            hash: String::new(),
+            source: None,
+            typed: BTreeMap::new(),
+        }
     }
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::case::ServiceClass;
 
     #[test]
     fn demo_job_loads() {
@@ -588,108 +392,164 @@ mod tests {
     }
 }
 
-fn q(s: &str) -> String {
-    toml::Value::String(s.to_string()).to_string()
+
+/// A criterion's text as a TOML value of the type its form takes.
+fn toml_value(c: &Criterion, text: &str) -> toml_edit::Value {
+    match c.form {
+        Form::Number { .. } => match text.parse::<i64>() {
+            Ok(i) => i.into(),
+            Err(_) => text.parse::<f64>().map_or_else(|_| text.into(), |f| f.into()),
+        },
+        Form::Count { .. } => text.parse::<i64>().map_or_else(|_| text.into(), |i| i.into()),
+        Form::Flag => (text == "true").into(),
+        Form::QuantityList { .. } | Form::ChoiceList(_) => {
+            let mut a = toml_edit::Array::new();
+            for part in text.split(',').map(str::trim).filter(|p| !p.is_empty()) {
+                a.push(part);
+            }
+            a.into()
+        }
+        _ => text.into(),
+    }
 }
 
-fn num(v: f64) -> String {
-    let s = format!("{v:.6}");
-    let s = s.trim_end_matches('0').trim_end_matches('.');
-    s.to_string()
+/// The text a TOML item holds, for a unit to follow (strings only).
+fn item_text(item: Option<&toml_edit::Item>) -> Option<String> {
+    item.and_then(|i| i.as_str()).map(str::to_string)
+}
+
+/// The line loads of a bay as a TOML array of inline tables.
+fn lines_value(b: &Bay) -> toml_edit::Value {
+    let mut a = toml_edit::Array::new();
+    for l in &b.case.line_loads {
+        let mut t = toml_edit::InlineTable::new();
+        t.insert("w", format!("{} klf", crate::units::trim_number(l.w.in_unit("klf"), 6)).into());
+        t.insert("at", crate::units::fmt_ft_in(l.at).into());
+        t.insert("kind", if l.kind == crate::case::LoadKind::Dead { "dead" } else { "live" }.into());
+        a.push(t);
+    }
+    a.into()
+}
+
+fn strings(items: &[String]) -> toml_edit::Value {
+    let mut a = toml_edit::Array::new();
+    for m in items {
+        a.push(m.as_str());
+    }
+    a.into()
+}
+
+/// Set `key` of `table` to `v`, keeping the place and the comments of a
+/// value that was there.
+fn put(table: &mut toml_edit::Table, key: &str, mut v: toml_edit::Value) {
+    match table.get_mut(key).and_then(|i| i.as_value_mut()) {
+        Some(old) => {
+            *v.decor_mut() = old.decor().clone();
+            *old = v;
+        }
+        None => {
+            table.insert(key, toml_edit::Item::Value(v));
+        }
+    }
 }
 
 impl Job {
-    /// The job as TOML text in the job-file format; loading it again gives
-    /// the same bays (every criterion written out per bay).
-    pub fn to_toml(&self) -> String {
-        let mut o = String::new();
-        o.push_str("# plankwise job file\n\n[job]\n");
-        o.push_str(&format!(
-            "project = {}\nengineer = {}\ndate = {}\ncode = {}\n",
-            q(&self.project),
-            q(&self.engineer),
-            q(&self.date),
-            q(&self.code)
-        ));
+    /// The text to save the job as: its own file edited in place when it
+    /// came from one (only the values that changed are written, each in
+    /// the unit it was typed in; comments, `[defaults]`, key order and the
+    /// rest stay as they were), else a fresh job file.
+    pub fn save_text(&self, sys: System) -> String {
+        self.source
+            .as_deref()
+            .and_then(|src| self.edit_in_place(src, sys))
+            .unwrap_or_else(|| self.to_toml(sys))
+    }
+
+    fn edit_in_place(&self, src: &str, sys: System) -> Option<String> {
+        let was = Job::from_str(src, "").ok()?;
+        if was.bays.len() != self.bays.len() {
+            return None;
+        }
+        let mut doc: toml_edit::DocumentMut = src.parse().ok()?;
+        let defaults: BTreeMap<String, String> = doc
+            .get("defaults")
+            .and_then(|d| d.as_table_like())
+            .map(|t| t.iter().filter_map(|(k, v)| v.as_str().map(|s| (k.to_string(), s.to_string()))).collect())
+            .unwrap_or_default();
+        if self.units != was.units {
+            if let (Some(u), Some(job)) = (self.units, doc.get_mut("job").and_then(|j| j.as_table_mut())) {
+                put(job, "units", u.name().into());
+            }
+        }
+        let bays = doc.get_mut("bay")?.as_array_of_tables_mut()?;
+        for (i, (now, before)) in self.bays.iter().zip(&was.bays).enumerate() {
+            let table = bays.get_mut(i)?;
+            for c in CRITERIA {
+                if c.value(now) == c.value(before) {
+                    continue;
+                }
+                let like = self
+                    .typed
+                    .get(&(i, c.key))
+                    .cloned()
+                    .or_else(|| item_text(table.get(c.key)))
+                    .or_else(|| defaults.get(c.key).cloned());
+                let text = c.write(now, like.as_deref(), sys);
+                put(table, c.key, toml_value(c, &text));
+            }
+            if now.case.line_loads != before.case.line_loads {
+                put(table, "line", lines_value(now));
+            }
+            if now.marked != before.marked {
+                if now.marked.is_empty() {
+                    table.remove("marked");
+                } else {
+                    put(table, "marked", strings(&now.marked));
+                }
+            }
+        }
+        Some(doc.to_string())
+    }
+
+    /// The job as a fresh job file: `[job]`, then each bay with the
+    /// criteria that differ from their defaults (in the display system).
+    pub fn to_toml(&self, sys: System) -> String {
+        let mut doc = toml_edit::DocumentMut::new();
+        let mut job = toml_edit::Table::new();
+        job.insert("project", toml_edit::value(self.project.as_str()));
+        job.insert("engineer", toml_edit::value(self.engineer.as_str()));
+        job.insert("date", toml_edit::value(self.date.as_str()));
+        job.insert("code", toml_edit::value(self.code.as_str()));
         if !self.notes.is_empty() {
-            let n: Vec<String> = self.notes.iter().map(|s| q(s)).collect();
-            o.push_str(&format!("notes = [{}]\n", n.join(", ")));
+            job.insert("notes", toml_edit::Item::Value(strings(&self.notes)));
         }
+        if let Some(u) = self.units {
+            job.insert("units", toml_edit::value(u.name()));
+        }
+        doc.insert("job", toml_edit::Item::Table(job));
+        let mut bays = toml_edit::ArrayOfTables::new();
         for b in &self.bays {
-            let c = &b.case;
-            o.push_str("\n[[bay]]\n");
-            o.push_str(&format!("name = {}\nspan = \"{} in\"\n", q(&b.name), num(c.span.get())));
-            for (k, v) in [("sdl", c.sdl), ("live", c.live), ("roof_live", c.roof_live), ("snow", c.snow)] {
-                if v.get() != 0.0 {
-                    o.push_str(&format!("{k} = \"{} psf\"\n", num(v.in_unit("psf"))));
+            let mut t = toml_edit::Table::new();
+            for c in CRITERIA {
+                let v = c.value(b);
+                let default = if c.default.is_empty() { None } else { c.parse(c.default).ok() };
+                let absent = matches!(v, Value::Num(None) | Value::Count(None) | Value::Text(None))
+                    || matches!(&v, Value::Picks(p) if p.is_empty());
+                if (Some(&v) == default.as_ref() && !c.required) || (absent && !c.required) {
+                    continue;
                 }
+                t.insert(c.key, toml_edit::Item::Value(toml_value(c, &c.write(b, None, sys))));
             }
-            if !c.line_loads.is_empty() {
-                let l: Vec<String> = c
-                    .line_loads
-                    .iter()
-                    .map(|l| {
-                        format!(
-                            "{{ w = \"{} klf\", at = \"{} in\", kind = \"{}\" }}",
-                            num(l.w.in_unit("klf")),
-                            num(l.at.get()),
-                            if l.kind == LoadKind::Dead { "dead" } else { "live" }
-                        )
-                    })
-                    .collect();
-                o.push_str(&format!("line = [{}]\n", l.join(", ")));
+            if !b.case.line_loads.is_empty() {
+                t.insert("line", toml_edit::Item::Value(lines_value(b)));
             }
-            o.push_str(&format!("use = \"{}\"\n", if c.member_use == Use::Roof { "roof" } else { "floor" }));
-            o.push_str(&format!("class = \"{}\"\nhumidity = {}\n", c.class_allowed.name(), num(c.humidity)));
-            if let Some(h) = c.fire_rating {
-                o.push_str(&format!("fire = \"{} h\"\n", num(h)));
+            if !b.marked.is_empty() {
+                t.insert("marked", toml_edit::Item::Value(strings(&b.marked)));
             }
-            o.push_str(&format!("restrained = {}\n", c.restrained));
-            o.push_str(&format!(
-                "exposure = \"{}\"\n",
-                if c.exposure == Exposure::Weather { "weather" } else { "interior" }
-            ));
-            o.push_str(&format!(
-                "attached = \"{}\"\n",
-                match c.attachment {
-                    Attachment::None => "none",
-                    Attachment::Tolerant => "tolerant",
-                    Attachment::Sensitive => "sensitive",
-                }
-            ));
-            let t: Vec<String> = b
-                .toppings
-                .iter()
-                .map(|t| t.map_or("\"none\"".into(), |t| format!("\"{} in\"", num(t.get()))))
-                .collect();
-            o.push_str(&format!("toppings = [{}]\n", t.join(", ")));
-            if let Some(m) = &b.topping_mix {
-                o.push_str(&format!("topping_mix = {}\n", q(m)));
-            }
-            o.push_str(&format!(
-                "objective = \"{}\"\nbearing = \"{} in\"\nsustained = {}\n",
-                b.objective.name(),
-                num(c.bearing.get()),
-                num(c.sustained_live)
-            ));
-            if !b.families.is_empty() {
-                let f: Vec<String> = b.families.iter().map(|f| format!("\"{}\"", f.name())).collect();
-                o.push_str(&format!("families = [{}]\n", f.join(", ")));
-            }
-            if let LossMethod::LumpSum(v) = c.losses {
-                o.push_str(&format!("lump_loss = \"{} ksi\"\n", num(v.in_unit("ksi"))));
-            }
-            if let Some(f) = c.min_frequency_hz {
-                o.push_str(&format!("min_frequency = {}\n", num(f)));
-            }
-            if let Some(a) = b.area {
-                o.push_str(&format!("area = \"{} ft2\"\n", num(a.in_unit("ft2"))));
-            }
-            if let Some(p) = b.pieces {
-                o.push_str(&format!("pieces = {p}\n"));
-            }
+            bays.push(t);
         }
-        o
+        doc.insert("bay", toml_edit::Item::ArrayOfTables(bays));
+        format!("# plankwise job file\n\n{doc}")
     }
 }
 
@@ -700,7 +560,7 @@ mod round_trip {
     #[test]
     fn written_jobs_load_back_the_same() {
         let j = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
-        let text = j.to_toml();
+        let text = j.to_toml(System::Us);
         let k = Job::from_str(&text, "written.toml").unwrap();
         assert_eq!(j.bays.len(), k.bays.len());
         for (a, b) in j.bays.iter().zip(&k.bays) {

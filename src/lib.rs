@@ -13,10 +13,12 @@
 
 #![forbid(unsafe_code)]
 
+pub mod bay;
 pub mod camber;
 pub mod case;
 pub mod catalog;
 pub mod checks;
+pub mod criteria;
 pub mod fire;
 pub mod input;
 pub mod job;

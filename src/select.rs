@@ -11,7 +11,7 @@ use serde::Serialize;
 use crate::case::{DesignCase, Topping};
 use crate::catalog::{Catalog, Pattern, Section};
 use crate::checks::{Candidate, Evaluation, Verdict, evaluate_brief};
-use crate::job::{Bay, Objective};
+use crate::bay::{Bay, Objective};
 use crate::material::{Aggregate, Mix, Modulus};
 use crate::units::{Length, Stress, UnitWeight};
 

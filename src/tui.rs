@@ -16,7 +16,8 @@ use fuzzy_matcher::skim::SkimMatcherV2;
 
 use crate::catalog::Catalog;
 use crate::checks::Evaluation;
-use crate::job::{Bay, Job};
+use crate::bay::Bay;
+use crate::job::Job;
 use crate::report::shortlist::Format;
 use crate::section::Family;
 use crate::select::envelope::{LoadLimit, max_live};
@@ -134,14 +135,8 @@ pub enum View {
     Chart,
 }
 
-/// Display units.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum Units {
-    /// ft, in, psf.
-    Us,
-    /// m, mm, kPa.
-    Si,
-}
+/// Display units: the system every pane shows.
+pub use crate::units::System as Units;
 
 /// A question waiting for an answer.
 #[derive(Debug, Clone, PartialEq)]
@@ -178,19 +173,9 @@ pub enum Mode {
     Help,
 }
 
-/// The bay fields shown and edited in the criteria pane.
-pub const FIELDS: [&str; 10] = [
-    "Span",
-    "Dead (SDL)",
-    "Live",
-    "Roof live",
-    "Snow",
-    "Topping",
-    "Fire",
-    "Restraint",
-    "Class",
-    "Objective",
-];
+/// The bay fields shown and edited in the criteria pane: every bay
+/// criterion, read and written through its one definition.
+pub use crate::criteria::CRITERIA as FIELDS;
 
 /// One ranked candidate, owned (no borrows into the catalog).
 #[derive(Debug, Clone, PartialEq)]
@@ -523,34 +508,18 @@ impl App {
         }
     }
 
-    /// The value of bay field `i` as text.
+    /// The value of bay field `i` as text, in the display units.
     pub fn field_text(&self, i: usize) -> String {
-        let b = self.current_bay();
-        let c = &b.case;
-        match i {
-            0 => self.show_len(c.span),
-            1 => self.show_load(c.sdl),
-            2 => self.show_load(c.live),
-            3 => self.show_load(c.roof_live),
-            4 => self.show_load(c.snow),
-            5 => b
-                .toppings
-                .iter()
-                .map(|t| {
-                    t.map_or("none".into(), |t| match self.units {
-                        Units::Us => format!("{} in", crate::section::family::fmt(t.get())),
-                        Units::Si => format!("{:.0} mm", t.in_unit("mm")),
-                    })
-                })
-                .collect::<Vec<_>>()
-                .join(", "),
-            6 => c
-                .fire_rating
-                .map_or("none".into(), |h| format!("{} h", crate::checks::fire::fmt_h(h))),
-            7 => if c.restrained { "restrained" } else { "unrestrained" }.into(),
-            8 => format!("{} allowed", c.class_allowed.name()),
-            _ => b.objective.name().into(),
-        }
+        FIELDS[i].show(self.current_bay(), self.units)
+    }
+
+    /// Whether field `i` takes one of a few values, stepped with ← → or
+    /// Enter rather than typed.
+    pub fn field_cycles(i: usize) -> bool {
+        matches!(
+            FIELDS[i].form,
+            crate::criteria::Form::Choice(_) | crate::criteria::Form::Flag | crate::criteria::Form::Rating
+        )
     }
 
     fn say(&mut self, msg: impl Into<String>, error: bool) {
@@ -591,91 +560,40 @@ impl App {
 
     /// Cycle an enumerated field forward (`dir` = 1) or back (−1).
     fn cycle_field(&mut self, dir: i32) {
+        use crate::criteria::{Form, Value};
+        let c = &FIELDS[self.field];
         let b = &mut self.job.bays[self.bay];
-        match self.field {
-            6 => {
+        let step = |i: usize, n: usize| (i as i32 + dir).rem_euclid(n as i32) as usize;
+        let v = match (c.form, c.value(b)) {
+            (Form::Choice(choices), Value::Pick(i)) => Value::Pick(step(i, choices.len())),
+            (Form::Flag, Value::Flag(f)) => Value::Flag(!f),
+            (Form::Rating, Value::Num(h)) => {
                 let opts = [None, Some(1.0), Some(1.5), Some(2.0), Some(3.0), Some(4.0)];
-                let i = opts.iter().position(|o| *o == b.case.fire_rating).unwrap_or(0) as i32;
-                b.case.fire_rating = opts[(i + dir).rem_euclid(opts.len() as i32) as usize];
-            }
-            7 => b.case.restrained = !b.case.restrained,
-            8 => {
-                use crate::case::ServiceClass::*;
-                let opts = [U, T, C];
-                let i = opts.iter().position(|o| *o == b.case.class_allowed).unwrap_or(0) as i32;
-                b.case.class_allowed = opts[(i + dir).rem_euclid(3) as usize];
-            }
-            9 => {
-                b.objective = if dir > 0 {
-                    b.objective.next()
-                } else {
-                    let all = crate::job::Objective::ALL;
-                    let i = all.iter().position(|o| *o == b.objective).unwrap_or(0);
-                    all[(i + all.len() - 1) % all.len()]
-                }
+                let i = opts.iter().position(|o| *o == h).unwrap_or(0);
+                Value::Num(opts[step(i, opts.len())])
             }
             _ => return,
-        }
+        };
+        c.set(b, v);
         let t = self.field_text(self.field);
         self.changed();
-        self.say(format!("{}: {t}", FIELDS[self.field]), false);
+        self.say(format!("{}: {t}", c.label), false);
     }
 
     fn apply_edit(&mut self, text: &str) {
+        let c = &FIELDS[self.field];
         let b = &mut self.job.bays[self.bay];
-        let res: Result<(), String> = match self.field {
-            0 => Length::parse(text).map_err(|e| e.to_string()).and_then(|l| {
-                if (48.0..=2400.0).contains(&l.get()) {
-                    b.case.span = l;
-                    Ok(())
-                } else {
-                    Err(format!("'{text}' must lie between 4 ft and 200 ft"))
-                }
-            }),
-            1..=4 => AreaLoad::parse(text).map_err(|e| e.to_string()).and_then(|q| {
-                if !(0.0..=2000.0).contains(&q.in_unit("psf")) {
-                    return Err(format!("'{text}' must lie between 0 and 2000 psf"));
-                }
-                match self.field {
-                    1 => b.case.sdl = q,
-                    2 => b.case.live = q,
-                    3 => b.case.roof_live = q,
-                    _ => b.case.snow = q,
-                }
-                Ok(())
-            }),
-            5 => {
-                let mut v = Vec::new();
-                let mut err = None;
-                for part in text.split(',').map(str::trim).filter(|p| !p.is_empty()) {
-                    if part == "none" {
-                        v.push(None);
-                    } else {
-                        match Length::parse(part) {
-                            Ok(l) if (0.5..=12.0).contains(&l.get()) => v.push(Some(l)),
-                            Ok(_) => err = Some(format!("'{part}' must lie between 0.5 and 12 in")),
-                            Err(e) => err = Some(e.to_string()),
-                        }
-                    }
-                }
-                match err {
-                    Some(e) => Err(e),
-                    None if v.is_empty() => Err("give 'none' or thicknesses such as '2 in', separated by commas".into()),
-                    None => {
-                        b.toppings = v;
-                        Ok(())
-                    }
-                }
-            }
-            _ => Ok(()),
-        };
-        match res {
+        match c.apply(b, text) {
             Ok(()) => {
+                // line loads beyond a shortened span fall away
+                let span = b.case.span.get();
+                b.case.line_loads.retain(|l| l.at.get() <= span);
+                self.job.typed.insert((self.bay, c.key), text.trim().to_string());
                 let t = self.field_text(self.field);
                 self.changed();
-                self.say(format!("{}: {t}", FIELDS[self.field]), false);
+                self.say(format!("{}: {t}", c.label), false);
             }
-            Err(e) => self.say(format!("{}: {e}", FIELDS[self.field]), true),
+            Err(e) => self.say(format!("{}: {e}", c.label), true),
         }
     }
 
@@ -735,7 +653,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         }
         Action::Left | Action::Right => {
             let dir = if action == Action::Right { 1 } else { -1 };
-            if app.focus == Focus::Bay && app.field >= 6 {
+            if app.focus == Focus::Bay && App::field_cycles(app.field) {
                 app.cycle_field(dir);
             } else {
                 return update(app, if dir > 0 { Action::NextPane } else { Action::PrevPane });
@@ -756,7 +674,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         Action::LiveUpFine => app.step_live(1.0),
         Action::LiveDownFine => app.step_live(-1.0),
         Action::Edit => match app.focus {
-            Focus::Bay if app.field >= 6 => app.cycle_field(1),
+            Focus::Bay if App::field_cycles(app.field) => app.cycle_field(1),
             Focus::Bay => {
                 let t = app.field_text(app.field);
                 app.mode = Mode::Edit(t);

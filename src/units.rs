@@ -279,6 +279,19 @@ pub enum UnitError {
         /// What was written.
         text: String,
     },
+    /// Several terms out of order, repeated, or a smaller unit's term as
+    /// large as the unit before it ("30 ft 99 in", "6 in 30 ft").
+    #[error("'{text}' is not a well-formed {}: {why}; write e.g. '{example}'", expected.trim_start_matches("an ").trim_start_matches("a "))]
+    BadCompound {
+        /// What was written.
+        text: String,
+        /// Kind wanted.
+        expected: &'static str,
+        /// What is wrong.
+        why: String,
+        /// A well-formed example.
+        example: &'static str,
+    },
 }
 
 fn unit_list<K: Kind>() -> String {
@@ -361,6 +374,36 @@ fn terms(text: &str) -> Result<Vec<(String, String)>, ()> {
     Ok(out)
 }
 
+/// The printed feet–inch form, `30'-6"` or `30'-6 1/2"` (as
+/// [`fmt_ft_in`] writes it), rewritten as terms the parser reads
+/// ("30 ft 6-1/2 in"); other text is returned as it is. A whole number and
+/// a fraction written apart, "6 1/2 in", become "6-1/2 in".
+fn normalise(t: &str) -> String {
+    let mut t = t.to_string();
+    if let Some((ft, rest)) = t.split_once('\'') {
+        let rest = rest.trim();
+        if let Some(inch) = rest.strip_prefix('-').and_then(|r| r.trim().strip_suffix('"')) {
+            if !ft.trim().is_empty() && !ft.contains(' ') {
+                t = format!("{} ft {} in", ft.trim(), inch.trim());
+            }
+        }
+    }
+    // "6 1/2" → "6-1/2": a whole number followed by a bare fraction
+    let words: Vec<&str> = t.split_whitespace().collect();
+    let mut out: Vec<String> = Vec::with_capacity(words.len());
+    for w in words {
+        let is_frac = w.contains('/') && w.split('/').all(|p| !p.is_empty() && p.chars().all(|c| c.is_ascii_digit()));
+        match out.last_mut() {
+            Some(prev) if is_frac && prev.chars().all(|c| c.is_ascii_digit()) => {
+                prev.push('-');
+                prev.push_str(w);
+            }
+            _ => out.push(w.to_string()),
+        }
+    }
+    out.join(" ")
+}
+
 fn parse<K: Kind>(text: &str) -> Result<f64, UnitError> {
     let example = || format!("12 {}", K::UNITS[0].0);
     let t = text.trim();
@@ -370,7 +413,8 @@ fn parse<K: Kind>(text: &str) -> Result<f64, UnitError> {
             example: example(),
         });
     }
-    let parts = terms(t).map_err(|()| UnitError::BadNumber {
+    let norm = normalise(t);
+    let parts = terms(&norm).map_err(|()| UnitError::BadNumber {
         text: t.to_string(),
         example: example(),
     })?;
@@ -381,6 +425,8 @@ fn parse<K: Kind>(text: &str) -> Result<f64, UnitError> {
         });
     }
     let mut total = 0.0;
+    // (factor, value) of the term before, for the compound rules
+    let mut before: Option<(f64, &str)> = None;
     for (num, unit) in &parts {
         let v = parse_number(num).ok_or_else(|| UnitError::BadNumber {
             text: t.to_string(),
@@ -415,12 +461,78 @@ fn parse<K: Kind>(text: &str) -> Result<f64, UnitError> {
                 });
             }
         };
+        if parts.len() > 1 {
+            let bad = |why: String| UnitError::BadCompound {
+                text: t.to_string(),
+                expected: K::NAME,
+                why,
+                example: if K::NAME == "a duration" { "1 h 30 min" } else { "30 ft 6 in" },
+            };
+            if v < 0.0 {
+                return Err(bad("a value in several terms cannot be negative".into()));
+            }
+            if let Some((fb, ub)) = before {
+                if (f - fb).abs() <= 1e-12 * fb {
+                    return Err(bad(format!("'{unit}' is given twice")));
+                }
+                if f > fb {
+                    return Err(bad(format!("'{unit}' comes after the smaller '{ub}'; give the larger unit first")));
+                }
+                if v * f >= fb * (1.0 - 1e-12) {
+                    return Err(bad(format!("{} {unit} is a whole {ub} or more", fmt_plain(v))));
+                }
+            }
+            before = Some((f, unit.as_str()));
+        }
         total += v * f;
     }
     if !total.is_finite() {
         return Err(UnitError::NotFinite { text: t.to_string() });
     }
     Ok(total)
+}
+
+/// A number without trailing zeros, for messages.
+fn fmt_plain(v: f64) -> String {
+    let s = format!("{v:.6}");
+    s.trim_end_matches('0').trim_end_matches('.').to_string()
+}
+
+/// The system of units every output of a run is shown in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum System {
+    /// US customary: ft, in, psf, kip, ksi.
+    #[default]
+    Us,
+    /// SI: m, mm, kPa, kN, MPa.
+    Si,
+}
+
+impl System {
+    /// "us" or "si", as the job and the flags write it.
+    pub fn name(self) -> &'static str {
+        match self {
+            System::Us => "us",
+            System::Si => "si",
+        }
+    }
+    /// From its name.
+    pub fn from_name(s: &str) -> Option<System> {
+        match s.to_ascii_lowercase().as_str() {
+            "us" => Some(System::Us),
+            "si" => Some(System::Si),
+            _ => None,
+        }
+    }
+}
+
+/// A number with at most `places` decimals, trailing zeros dropped: what
+/// the job writer and the schema print (it reads back as the same value to
+/// that many places).
+pub fn trim_number(v: f64, places: usize) -> String {
+    let s = format!("{v:.places$}");
+    let s = if s.contains('.') { s.trim_end_matches('0').trim_end_matches('.') } else { &s };
+    if s == "-0" { "0".into() } else { s.to_string() }
 }
 
 /// Format a length in feet and inches to the nearest 1/16 in: `30'-6 1/2"`.
@@ -563,5 +675,27 @@ mod tests {
     fn feet_inches_display() {
         assert_eq!(fmt_ft_in(Length::new(366.5)), "30'-6 1/2\"");
         assert_eq!(fmt_ft_in(Length::new(360.0)), "30'-0\"");
+    }
+
+    #[test]
+    fn the_printed_feet_inch_form_reads_back() {
+        assert_relative_eq!(Length::parse("30'-6\"").unwrap().get(), 366.0);
+        assert_relative_eq!(Length::parse("30'-6 1/2\"").unwrap().get(), 366.5);
+        assert_relative_eq!(Length::parse("30' - 0\"").unwrap().get(), 360.0);
+        assert_relative_eq!(Length::parse("6 1/2 in").unwrap().get(), 6.5);
+        assert_relative_eq!(Length::parse("30 ft 6 1/2 in").unwrap().get(), 366.5);
+    }
+
+    #[test]
+    fn compound_quantities_are_well_formed_or_refused() {
+        for bad in ["30 ft 99 in", "6 in 30 ft", "30 ft 12 in", "1 ft 2 ft", "2 in 3 in", "30'-13\""] {
+            let e = Length::parse(bad).unwrap_err();
+            assert!(matches!(e, UnitError::BadCompound { .. }), "{bad}: {e}");
+        }
+        assert!(Length::parse("30 ft -6 in").is_err());
+        let e = Length::parse("30 ft 99 in").unwrap_err().to_string();
+        assert_eq!(e, "'30 ft 99 in' is not a well-formed length: 99 in is a whole ft or more; write e.g. '30 ft 6 in'");
+        assert!(Duration::parse("1 h 90 min").is_err());
+        assert_relative_eq!(Duration::parse("1 h 30 min").unwrap().get(), 1.5);
     }
 }

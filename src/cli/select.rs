@@ -6,7 +6,8 @@ use std::path::{Path, PathBuf};
 use serde::Serialize;
 
 use plankwise::catalog::Catalog;
-use plankwise::job::{Bay, DEMO_JOB, Job};
+use plankwise::bay::{Bay, Objective};
+use plankwise::job::{DEMO_JOB, Job};
 use plankwise::report::shortlist::{self, BayList, Format};
 use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
 use plankwise::select::{BayRanking, Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
@@ -21,16 +22,15 @@ pub struct RankArgs {
     /// Catalog file (TOML); the built-in demo catalog when omitted.
     catalog: Option<PathBuf>,
     /// Job file (TOML) with the bays; "demo" for the built-in demo job.
-    #[arg(long, conflicts_with = "span")]
+    /// With a job, --objective ranks every bay by that objective; other bay
+    /// flags are refused.
+    #[arg(long)]
     job: Option<PathBuf>,
     #[command(flatten)]
     bay: BayFlags,
-    /// Ranking objective: lightest, shallowest, least-steel, cheapest, most-reserve.
-    #[arg(long)]
-    objective: Option<String>,
-    /// How many viable and failing entries to list per bay.
-    #[arg(long, default_value_t = 10)]
-    top: usize,
+    /// How many viable and failing entries to list per bay (1 or more).
+    #[arg(long, default_value_t = 10, value_parser = clap::value_parser!(u32).range(1..))]
+    top: u32,
     /// Print JSON.
     #[arg(long, conflicts_with = "csv")]
     json: bool,
@@ -72,7 +72,7 @@ pub struct SpanmapArgs {
     /// Catalog file (TOML); the built-in demo catalog when omitted.
     catalog: Option<PathBuf>,
     /// Job file; with --bay, take that bay's loads and criteria.
-    #[arg(long, requires = "bay_name", conflicts_with = "span")]
+    #[arg(long, requires = "bay_name")]
     job: Option<PathBuf>,
     /// Bay name in the job.
     #[arg(long = "bay")]
@@ -83,9 +83,6 @@ pub struct SpanmapArgs {
     /// Sampling step before bisection of each change.
     #[arg(long, default_value = "1 ft")]
     step: String,
-    /// Ranking objective.
-    #[arg(long)]
-    objective: Option<String>,
     #[command(flatten)]
     flags: BayFlags,
     /// Print JSON.
@@ -107,9 +104,9 @@ pub struct ShortlistArgs {
     /// text, md or csv.
     #[arg(long, default_value = "text")]
     format: String,
-    /// Members listed per bay.
-    #[arg(long, default_value_t = 5)]
-    top: usize,
+    /// Members listed per bay (1 or more).
+    #[arg(long, default_value_t = 5, value_parser = clap::value_parser!(u32).range(1..))]
+    top: u32,
     /// Replace an existing output file.
     #[arg(long)]
     force: bool,
@@ -120,6 +117,32 @@ fn load_job(path: &Path) -> Result<(Job, String), Failure> {
         return Ok((Job::from_str(DEMO_JOB, "demo-job.toml")?, "demo-job.toml (built in)".into()));
     }
     Ok((Job::load(path)?, path.display().to_string()))
+}
+
+/// With a job file the bays come from it: bay flags would be ignored, so
+/// they are refused — except the objective, which ranks every bay.
+fn job_or_flags(job: Option<&PathBuf>, flags: &BayFlags, cat: &Catalog) -> Result<(Vec<Bay>, Option<Objective>), Failure> {
+    let obj = flags.given.iter().find(|(k, _)| *k == "objective").map(|(_, v)| v.as_str());
+    match job {
+        Some(j) => {
+            let ignored: Vec<String> = flags
+                .given
+                .iter()
+                .filter(|(k, _)| *k != "objective")
+                .map(|(k, _)| format!("--{}", plankwise::criteria::find(k).and_then(|c| c.flag).unwrap_or(k)))
+                .chain((!flags.line_dead.is_empty()).then(|| "--line-dead".to_string()))
+                .chain((!flags.line_live.is_empty()).then(|| "--line-live".to_string()))
+                .collect();
+            if !ignored.is_empty() {
+                return Err(Failure::Message(format!(
+                    "{} describe one bay, but --job gives the bays; put them in the job file, or leave out --job",
+                    ignored.join(", ")
+                )));
+            }
+            Ok((load_job(j)?.0.bays, objective(obj)?))
+        }
+        None => Ok((vec![flags.to_bay(cat)?], None)),
+    }
 }
 
 fn check_job(cat: &Catalog, bays: &[Bay]) -> Result<(), Failure> {
@@ -194,12 +217,9 @@ fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
 pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
-    let bays = match &a.job {
-        Some(j) => load_job(j)?.0.bays,
-        None => vec![a.bay.to_bay(&cat)?],
-    };
+    let (bays, obj) = job_or_flags(a.job.as_ref(), &a.bay, &cat)?;
     check_job(&cat, &bays)?;
-    let obj = objective(a.objective.as_deref())?;
+    let top = a.top as usize;
     let ranked: Vec<(&Bay, BayRanking)> = bays.iter().map(|b| (b, rank_bay(&cat, b, obj))).collect();
     let mut out = io::stdout().lock();
     if a.json {
@@ -219,11 +239,11 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                 objective: obj.unwrap_or(b.objective).name(),
                 viable_count: r.viable.len(),
                 failing_count: r.failing.len(),
-                viable: r.viable.iter().take(a.top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
+                viable: r.viable.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
                 failing: r
                     .failing
                     .iter()
-                    .take(a.top)
+                    .take(top)
                     .enumerate()
                     .map(|(i, x)| entry_json(i + 1, x))
                     .collect(),
@@ -237,7 +257,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
             "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,strand_in2_per_ft,governing,governing_ratio,first_failure,first_failure_ratio"
         )?;
         for (b, r) in &ranked {
-            for (i, x) in r.viable.iter().take(a.top).chain(r.failing.iter().take(a.top)).enumerate() {
+            for (i, x) in r.viable.iter().take(top).chain(r.failing.iter().take(top)).enumerate() {
                 let e = entry_json(i + 1, x);
                 writeln!(
                     out,
@@ -275,7 +295,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                     "#", "entry", "psf", "h in", "governing", "ratio"
                 )?;
             }
-            for (i, x) in r.viable.iter().take(a.top).enumerate() {
+            for (i, x) in r.viable.iter().take(top).enumerate() {
                 writeln!(
                     out,
                     "  {:>3} {:<42} {:>6.1} {:>6.2} {:<24} {:>6.3}",
@@ -292,7 +312,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
             } else if !r.failing.is_empty() {
                 writeln!(out, "  not viable (first failing check, in order of importance):")?;
             }
-            for x in r.failing.iter().take(a.top) {
+            for x in r.failing.iter().take(top) {
                 writeln!(out, "      {:<42} {}", x.entry.label(), failure_reason(x))?;
             }
             writeln!(out)?;
@@ -318,8 +338,8 @@ pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
     let (section, pattern) = find_entry(&cat, &a.section, &a.pattern)?;
     let spans = range(&a.spans, &a.step)?;
     let mut flags = a.bay.clone();
-    if flags.span.is_none() {
-        flags.span = Some(format!("{} ft", spans[0]));
+    if !flags.gives("span") {
+        flags.given.push(("span", format!("{} ft", spans[0])));
     }
     let bay = flags.to_bay(&cat)?;
     let entry = Entry {
@@ -430,12 +450,17 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
         }
         _ => {
             let mut f = a.flags.clone();
-            f.span.get_or_insert_with(|| format!("{} ft", spans[0]));
+            if !f.gives("span") {
+                f.given.push(("span", format!("{} ft", spans[0])));
+            }
             f.to_bay(&cat)?
         }
     };
     check_job(&cat, std::slice::from_ref(&bay))?;
-    let obj = objective(a.objective.as_deref())?.unwrap_or(bay.objective);
+    let obj = match a.flags.given.iter().find(|(k, _)| *k == "objective") {
+        Some((_, o)) if a.job.is_some() => objective(Some(o))?.unwrap_or(bay.objective),
+        _ => bay.objective,
+    };
     let step = spans.get(1).map_or(1.0, |s| s - spans[0]);
     let runs = span_map(&cat, &bay, spans[0], *spans.last().unwrap_or(&spans[0]), step, obj);
     let mut out = io::stdout().lock();
@@ -527,7 +552,7 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
         .map(|(bay, ranking)| BayList { bay, ranking })
         .collect();
     let mut buf = Vec::new();
-    shortlist::write(&mut buf, format, &job, &cat, &lists, a.top.max(1))?;
+    shortlist::write(&mut buf, format, &job, &cat, &lists, a.top as usize)?;
     write_atomic(&a.output, &buf).map_err(|e| Failure::Message(format!("-o: cannot write '{}': {e}", a.output.display())))?;
     eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
     let none: Vec<&str> = job

@@ -75,7 +75,7 @@ fn write_shortlist(app: &App, path: &Path, format: shortlist::Format, force: boo
 }
 
 fn save_job(app: &App, path: &Path) -> Result<String, String> {
-    let text = app.job.to_toml();
+    let text = app.job.save_text(app.units);
     let mut backup = String::new();
     if path.exists() {
         let bak = PathBuf::from(format!("{}.bak", path.display()));

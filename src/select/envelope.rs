@@ -14,7 +14,7 @@ use super::{Entry, case_for, evaluation, rank_bay, topping_mix};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
 use crate::checks::{Evaluation, Prepared, evaluate_brief};
-use crate::job::{Bay, Objective};
+use crate::bay::{Bay, Objective};
 use crate::units::{AreaLoad, Length};
 
 /// Probe live load for the linear estimate, psf.

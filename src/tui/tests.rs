@@ -104,6 +104,11 @@ fn moving_and_panes() {
     assert_eq!(a.focus, Focus::Bay);
 }
 
+/// The criteria pane's row of a criterion.
+fn field(key: &str) -> usize {
+    FIELDS.iter().position(|c| c.key == key).unwrap()
+}
+
 #[test]
 fn editing_fields_with_units_and_errors() {
     let mut a = app();
@@ -139,16 +144,16 @@ fn editing_fields_with_units_and_errors() {
     press(&mut a, &[Key::Esc]);
     assert_eq!(a.current_bay().case.span.get(), 378.0, "esc cancels");
     // enumerated fields cycle
-    a.field = 6;
+    a.field = field("fire");
     let f0 = a.current_bay().case.fire_rating;
     update(&mut a, Action::Edit);
     assert_ne!(a.current_bay().case.fire_rating, f0);
-    a.field = 7;
+    a.field = field("restrained");
     update(&mut a, Action::Right);
-    a.field = 8;
+    a.field = field("class");
     update(&mut a, Action::Right);
     assert_eq!(a.current_bay().case.class_allowed, crate::case::ServiceClass::T);
-    a.field = 5;
+    a.field = field("toppings");
     update(&mut a, Action::Edit);
     for _ in 0..10 {
         press(&mut a, &[Key::Backspace]);
@@ -291,7 +296,7 @@ fn screen_80x24_shows_every_pane() {
         "Candidates",
         "Detail",
         "Span",
-        "Objective",
+        "Snow",
         "? help",
         "q quit",
     ] {

@@ -75,21 +75,31 @@ fn title_bar(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
 
 fn bay_pane(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     let focused = app.focus == Focus::Bay;
+    // every criterion; a window that keeps the selected one in sight
+    let height = (area.height as usize).saturating_sub(2).max(1);
+    let start = app.field.saturating_sub(height - 1).min(FIELDS.len().saturating_sub(height));
+    let label_w = FIELDS.iter().map(|c| c.label.chars().count()).max().unwrap_or(10).min(13) + 1;
     let lines: Vec<Line> = FIELDS
         .iter()
         .enumerate()
-        .map(|(i, name)| {
+        .skip(start)
+        .take(height)
+        .map(|(i, c)| {
             let value = match (&app.mode, i == app.field) {
                 (Mode::Edit(buf), true) => format!("{buf}▏"),
                 _ => app.field_text(i),
             };
             let style = if focused && i == app.field { t.selected } else { Style::new() };
-            Line::from(vec![Span::styled(format!("{name:<11}"), t.muted), Span::styled(value, style)])
+            let label: String = c.label.chars().take(label_w - 1).collect();
+            Line::from(vec![Span::styled(format!("{label:<label_w$}"), t.muted), Span::styled(value, style)])
         })
         .collect();
-    Paragraph::new(lines)
-        .block(block(" Bay criteria ".into(), focused, t))
-        .render(area, buf);
+    let title = if FIELDS.len() > height {
+        format!(" Bay criteria {}/{} ", app.field + 1, FIELDS.len())
+    } else {
+        " Bay criteria ".into()
+    };
+    Paragraph::new(lines).block(block(title, focused, t)).render(area, buf);
 }
 
 fn bar(ratio: f64, width: usize, mono: bool) -> String {
@@ -350,8 +360,9 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         Mode::Prompt(PromptKind::SaveJob, p) => (format!("save the job as: {p}▏  enter to save, esc to cancel"), t.status),
         Mode::Edit(_) => (
             format!(
-                "edit {}: type a value with its unit (e.g. 31 ft 6 in, 9.6 m, 2.4 kPa); enter to apply, esc to cancel",
-                FIELDS[app.field]
+                "edit {}: {}; enter to apply, esc to cancel",
+                FIELDS[app.field].label,
+                FIELDS[app.field].allowed()
             ),
             t.status,
         ),
