@@ -222,7 +222,7 @@ fn exit_codes_say_whether_every_bay_has_a_member() {
     assert_eq!(code, 0);
     let (code, _, err) = run(&["rank", "--span", "20 ft", "--objective", "lightst"]);
     assert_eq!(code, 2);
-    assert!(err.contains("a similar value exists: 'lightest'"), "{err}");
+    assert!(err.contains("(did you mean 'lightest'?)"), "{err}");
     let (code, out, _) = run(&[
         "rank", "--span", "20 ft", "--sdl", "10 psf", "--live", "40 psf", "--json", "--top", "3",
     ]);

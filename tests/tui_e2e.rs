@@ -104,7 +104,7 @@ fn typing_reranks_searches_writes_and_quits_cleanly() {
     assert!(first.contains("plank-6in-4ft / 5x1/2"));
     // a longer span re-ranks at once
     s.keys(&["+", "+", "+", "+", "+", "+"]);
-    let after = s.wait_for("30.00 ft");
+    let after = s.wait_for("30'-0\"");
     assert!(after.contains("Candidates 9 viable of 18"), "{after}");
     // the search narrows the list
     s.keys(&["/", "1", "0", "i", "n"]);
@@ -230,9 +230,9 @@ fn a_large_catalog_reranks_off_the_ui_thread() {
     );
     let s = Session::start("big", &cmd);
     let first = s.wait_for("viable of 2500");
-    assert!(first.contains("24.00 ft"), "{first}");
+    assert!(first.contains("24'-0\""), "{first}");
     s.keys(&["+"]);
-    let after = s.wait_for("25.00 ft");
+    let after = s.wait_for("25'-0\"");
     let ranked = if after.contains("re-ranking") {
         s.wait_for_gone("re-ranking")
     } else {

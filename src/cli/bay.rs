@@ -26,6 +26,22 @@ pub struct BayFlags {
     pub line_live: Vec<String>,
 }
 
+/// The values a choice may take, offered to shell completion and help;
+/// the text itself is read by the criterion, so a wrong value is refused
+/// in the same words as in a job file or the UI.
+#[derive(Clone)]
+pub struct Offer(pub &'static [&'static str]);
+
+impl clap::builder::TypedValueParser for Offer {
+    type Value = String;
+    fn parse_ref(&self, _: &Command, _: Option<&Arg>, v: &std::ffi::OsStr) -> Result<String, clap::Error> {
+        Ok(v.to_string_lossy().into_owned())
+    }
+    fn possible_values(&self) -> Option<Box<dyn Iterator<Item = clap::builder::PossibleValue> + '_>> {
+        Some(Box::new(self.0.iter().map(|v| clap::builder::PossibleValue::new(*v))))
+    }
+}
+
 impl Args for BayFlags {
     fn augment_args(mut cmd: Command) -> Command {
         for c in CRITERIA {
@@ -35,14 +51,15 @@ impl Args for BayFlags {
             } else {
                 format!(" [default: {}]", c.default)
             };
-            let help = format!("{} — {}{default}", c.help, c.allowed());
+            // a choice's values are listed by clap itself
+            let help = match c.form {
+                Form::Choice(_) => format!("{}{default}", c.help),
+                _ => format!("{} — {}{default}", c.help, c.allowed()),
+            };
             let mut a = Arg::new(c.key).long(flag).help(help);
             a = match c.form {
                 Form::Flag => a.action(ArgAction::SetTrue),
-                Form::Choice(choices) => a
-                    .value_name(c.key.to_uppercase())
-                    .value_parser(clap::builder::PossibleValuesParser::new(choices.iter().copied()))
-                    .ignore_case(true),
+                Form::Choice(choices) => a.value_name(c.key.to_uppercase()).value_parser(Offer(choices)),
                 _ => a.value_name(c.key.to_uppercase()),
             };
             if c.key == "toppings" {
