@@ -351,18 +351,8 @@ pub fn read_text(path: &Path) -> Result<String, Problems> {
             message,
         }])
     };
-    let meta = std::fs::metadata(path).map_err(|e| fail(format!("cannot read the file: {e}")))?;
-    if meta.is_dir() {
-        return Err(fail("is a folder, not a file; give the path of a .toml file".into()));
-    }
-    if meta.len() > MAX_FILE_BYTES {
-        return Err(fail(format!(
-            "is {:.1} MB; plankwise reads files of at most {} MB",
-            meta.len() as f64 / 1.0e6,
-            MAX_FILE_BYTES / (1024 * 1024)
-        )));
-    }
-    let bytes = std::fs::read(path).map_err(|e| fail(format!("cannot read the file: {e}")))?;
+    // a regular file only, never blocking, the size capped while reading
+    let bytes = crate::files::read_bounded(path, MAX_FILE_BYTES).map_err(fail)?;
     String::from_utf8(bytes).map_err(|e| {
         let at = e.utf8_error().valid_up_to();
         let good = String::from_utf8_lossy(&e.as_bytes()[..at]).into_owned();

@@ -198,7 +198,7 @@ fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool
     if !problems.is_empty() {
         return Err(Failure::Message(problems.join("\n")));
     }
-    Ok(term::run(cat, job, path)?)
+    Ok(term::run(cat, catalog.cloned(), job, path)?)
 }
 
 fn demo(catalog: Option<&PathBuf>) -> Result<i32, Failure> {

@@ -19,6 +19,7 @@ pub mod case;
 pub mod catalog;
 pub mod checks;
 pub mod criteria;
+pub mod files;
 pub mod fire;
 pub mod input;
 pub mod job;

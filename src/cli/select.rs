@@ -484,30 +484,6 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
     Ok(OK)
 }
 
-fn same_file(a: &Path, b: &Path) -> bool {
-    match (a.canonicalize(), b.canonicalize()) {
-        (Ok(x), Ok(y)) => x == y,
-        _ => false,
-    }
-}
-
-/// Write `bytes` to `path` atomically: a temporary file beside it, then rename.
-pub fn write_atomic(path: &Path, bytes: &[u8]) -> io::Result<()> {
-    let dir = path.parent().filter(|d| !d.as_os_str().is_empty()).unwrap_or(Path::new("."));
-    let name = path.file_name().map_or("out".into(), |n| n.to_string_lossy().into_owned());
-    let tmp = dir.join(format!(".{name}.plankwise-{}.tmp", std::process::id()));
-    let result = (|| {
-        let mut f = std::fs::File::create(&tmp)?;
-        f.write_all(bytes)?;
-        f.sync_all()?;
-        std::fs::rename(&tmp, path)
-    })();
-    if result.is_err() {
-        let _ = std::fs::remove_file(&tmp);
-    }
-    result
-}
-
 /// `plankwise shortlist`.
 pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
@@ -524,26 +500,10 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
             )));
         }
     };
-    for input in a.catalog.iter().chain(std::iter::once(&a.job)) {
-        if same_file(input, &a.output) {
-            return Err(Failure::Message(format!(
-                "-o: '{}' is an input file; plankwise never writes over the catalog or the job",
-                a.output.display()
-            )));
-        }
-    }
-    if a.output.is_dir() {
-        return Err(Failure::Message(format!(
-            "-o: '{}' is a folder; give a file name",
-            a.output.display()
-        )));
-    }
-    if a.output.exists() && !a.force {
-        return Err(Failure::Message(format!(
-            "-o: '{}' exists; pass --force to replace it",
-            a.output.display()
-        )));
-    }
+    let inputs: Vec<&Path> = a.catalog.iter().map(|p| p.as_path()).chain(std::iter::once(a.job.as_path())).collect();
+    // refused before any work: an input, not a regular file, or there already
+    plankwise::files::writable(&a.output, &inputs, a.force)
+        .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
     let ranked: Vec<BayRanking> = job.bays.iter().map(|b| rank_bay(&cat, b, None)).collect();
     let lists: Vec<BayList> = job
         .bays
@@ -553,7 +513,8 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
         .collect();
     let mut buf = Vec::new();
     shortlist::write(&mut buf, format, &job, &cat, &lists, a.top as usize)?;
-    write_atomic(&a.output, &buf).map_err(|e| Failure::Message(format!("-o: cannot write '{}': {e}", a.output.display())))?;
+    plankwise::files::write_safely(&a.output, &buf, &inputs, a.force)
+        .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
     eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
     let none: Vec<&str> = job
         .bays

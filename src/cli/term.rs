@@ -18,7 +18,6 @@ use plankwise::select::{BayRanking, rank_bay};
 use plankwise::tui::keymap::{Key, Keymap};
 use plankwise::tui::{Action, App, Effect, report, ui, update};
 
-use super::select::write_atomic;
 
 fn key_of(ev: event::KeyEvent) -> Option<Key> {
     Some(match ev.code {
@@ -47,12 +46,17 @@ fn keys_file() -> Option<PathBuf> {
     Some(base.join("plankwise").join("keys.toml"))
 }
 
-fn write_shortlist(app: &App, path: &Path, format: shortlist::Format, force: bool) -> Result<String, String> {
-    if path.exists() && !force {
-        return Err("exists".into());
-    }
-    if path.is_dir() {
-        return Err(format!("'{}' is a folder", path.display()));
+/// The files the UI has open: a write never lands on them.
+struct Inputs {
+    catalog: Option<PathBuf>,
+}
+
+fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::Format, force: bool) -> Result<String, String> {
+    let open: Vec<&Path> = inputs.catalog.iter().chain(app.job_path.iter()).map(|p| p.as_path()).collect();
+    match plankwise::files::writable(path, &open, force) {
+        Err(plankwise::files::Refusal::Exists) => return Err("exists".into()),
+        Err(e) => return Err(format!("'{}' {e}", path.display())),
+        Ok(_) => {}
     }
     let mut rankings: Vec<BayRanking> = app.job.bays.iter().map(|b| rank_bay(&app.catalog, b, None)).collect();
     for (i, r) in rankings.iter_mut().enumerate() {
@@ -70,19 +74,25 @@ fn write_shortlist(app: &App, path: &Path, format: shortlist::Format, force: boo
         .collect();
     let mut buf = Vec::new();
     shortlist::write(&mut buf, format, &app.job, &app.catalog, &lists, 3).map_err(|e| e.to_string())?;
-    write_atomic(path, &buf).map_err(|e| format!("cannot write '{}': {e}", path.display()))?;
+    plankwise::files::write_safely(path, &buf, &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;
     Ok(format!("wrote {}", path.display()))
 }
 
-fn save_job(app: &App, path: &Path) -> Result<String, String> {
+fn save_job(app: &App, inputs: &Inputs, path: &Path) -> Result<String, String> {
+    // the job may be saved over itself (edited in place, a backup kept),
+    // never over the catalog
+    let open: Vec<&Path> = inputs.catalog.iter().map(|p| p.as_path()).collect();
     let text = app.job.save_text(app.units);
     let mut backup = String::new();
     if path.exists() {
         let bak = PathBuf::from(format!("{}.bak", path.display()));
-        std::fs::copy(path, &bak).map_err(|e| format!("cannot keep a backup '{}': {e}", bak.display()))?;
+        let old = plankwise::files::read_bounded(path, plankwise::catalog::MAX_FILE_BYTES)
+            .map_err(|e| format!("cannot keep a backup of '{}': it {e}", path.display()))?;
+        plankwise::files::write_safely(&bak, &old, &open, true)
+            .map_err(|e| format!("cannot keep a backup '{}': it {e}", bak.display()))?;
         backup = format!(" (backup {})", bak.display());
     }
-    write_atomic(path, text.as_bytes()).map_err(|e| format!("cannot write '{}': {e}", path.display()))?;
+    plankwise::files::write_safely(path, text.as_bytes(), &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;
     Ok(format!("saved {}{backup}", path.display()))
 }
 
@@ -93,18 +103,31 @@ fn terminal_gone() -> bool {
 }
 
 /// Run the UI until the user quits or a signal arrives; returns the exit code.
-pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<i32> {
+pub fn run(catalog: Catalog, catalog_path: Option<PathBuf>, job: Job, job_path: Option<PathBuf>) -> io::Result<i32> {
+    let inputs = Inputs { catalog: catalog_path };
     let stop = Arc::new(AtomicBool::new(false));
-    for sig in [signal_hook::consts::SIGTERM, signal_hook::consts::SIGHUP] {
+    // every signal that ends the program ends the loop, which restores the terminal
+    for sig in [
+        signal_hook::consts::SIGTERM,
+        signal_hook::consts::SIGHUP,
+        signal_hook::consts::SIGINT,
+        signal_hook::consts::SIGQUIT,
+    ] {
         signal_hook::flag::register(sig, Arc::clone(&stop))?;
     }
     let mut app = App::new(catalog, job, job_path);
     app.mono = std::env::var_os("NO_COLOR").is_some_and(|v| !v.is_empty()) || std::env::var("TERM").is_ok_and(|t| t == "dumb");
-    if let Some(f) = keys_file().filter(|f| f.is_file()) {
-        let (km, problems) = Keymap::with_overrides(&std::fs::read_to_string(&f).unwrap_or_default());
-        app.keymap = km;
-        if let Some(p) = problems.first() {
-            app.status = (format!("{} ({})", p, f.display()), true);
+    if let Some(f) = keys_file().filter(|f| f.exists()) {
+        // the keys file is read like any input: a regular file, bounded
+        match plankwise::files::read_bounded(&f, 256 * 1024).and_then(|b| String::from_utf8(b).map_err(|_| "is not UTF-8 text".into())) {
+            Ok(text) => {
+                let (km, problems) = Keymap::with_overrides(&text);
+                app.keymap = km;
+                if let Some(p) = problems.first() {
+                    app.status = (format!("{} ({})", p, f.display()), true);
+                }
+            }
+            Err(e) => app.status = (format!("keys file '{}' {e}; the default keys are used", f.display()), true),
         }
     }
     // a test hook: this key panics inside the loop, to prove the terminal
@@ -138,7 +161,8 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
         }
     });
     app.background = Some(plankwise::tui::BACKGROUND_ABOVE);
-    let mut terminal = ratatui::init();
+    // a terminal that is not there (or vanished) is an error, not a panic
+    let mut terminal = ratatui::try_init().map_err(|e| io::Error::other(format!("cannot open the terminal: {e}")))?;
     let mut table = TableState::default();
     let result = (|| -> io::Result<()> {
         loop {
@@ -175,14 +199,14 @@ pub fn run(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> io::Result<
             match update(&mut app, action) {
                 Effect::None => {}
                 Effect::Quit => return Ok(()),
-                Effect::WriteShortlist { path, format, force } => match write_shortlist(&app, &path, format, force) {
+                Effect::WriteShortlist { path, format, force } => match write_shortlist(&app, &inputs, &path, format, force) {
                     Err(e) if e == "exists" => {
                         update(&mut app, Action::AskOverwrite);
                     }
                     r => report(&mut app, r),
                 },
                 Effect::SaveJob { path } => {
-                    let r = save_job(&app, &path);
+                    let r = save_job(&app, &inputs, &path);
                     if r.is_ok() {
                         app.job_path = Some(path);
                     }

@@ -154,7 +154,7 @@ impl Default for Keymap {
                 b(Action::NextBay, "next_bay", "next bay", &[Char('n'), PageDown]),
                 b(Action::PrevBay, "prev_bay", "previous bay", &[Char('p'), PageUp]),
                 b(Action::Help, "help", "this help", &[Char('?')]),
-                b(Action::Quit, "quit", "quit", &[Char('q'), Esc, Ctrl('c')]),
+                b(Action::Quit, "quit", "quit (asks first when the job has unsaved edits)", &[Char('q'), Ctrl('c')]),
             ],
         }
     }
@@ -196,8 +196,12 @@ impl Keymap {
             let mut keys = Vec::new();
             for k in list {
                 match k.as_str().and_then(Key::parse) {
+                    // ctrl-c always quits, so a binding can never take away every way out
+                    Some(Key::Ctrl('c')) if km.bindings[idx].action != Action::Quit => {
+                        problems.push(format!("keys file: '{name}': ctrl-c always quits; choose another key"))
+                    }
                     Some(key) => keys.push(key),
-                    None => problems.push(format!("keys file: '{name}': '{k}' is not a key")),
+                    None => problems.push(format!("keys file: '{name}': {} is not a key", crate::criteria::quoted(&k.to_string()))),
                 }
             }
             if !keys.is_empty() {
@@ -206,6 +210,11 @@ impl Keymap {
                     b.keys.retain(|k| !keys.contains(k));
                 }
                 km.bindings[idx].keys = keys;
+            }
+        }
+        if let Some(q) = km.bindings.iter_mut().find(|b| b.action == Action::Quit) {
+            if !q.keys.contains(&Key::Ctrl('c')) {
+                q.keys.push(Key::Ctrl('c'));
             }
         }
         (km, problems)
@@ -228,5 +237,10 @@ mod tests {
         assert_eq!(km.action(Key::Char('q')), None);
         assert_eq!(p.len(), 1);
         assert!(p[0].contains("unknown action 'nope'"));
+        // no binding removes every way to quit: ctrl-c stays
+        let (km, p) = Keymap::with_overrides("quit = [\"x\"]\nhelp = [\"q\", \"ctrl-c\"]\n");
+        assert_eq!(km.action(Key::Ctrl('c')), Some(Action::Quit));
+        assert_eq!(km.action(Key::Char('q')), Some(Action::Help));
+        assert!(p[0].contains("ctrl-c always quits"), "{p:?}");
     }
 }
