@@ -34,6 +34,10 @@ pub struct Meta {
     pub code: String,
     /// Notes.
     pub notes: Vec<String>,
+    /// Display units the catalog names, if any.
+    pub units: Option<crate::units::System>,
+    /// The system its quantities are mostly written in (when it names none).
+    pub written_in: crate::units::System,
 }
 
 /// Family-specific description, as written in the catalog.
@@ -337,6 +341,23 @@ impl Catalog {
 pub const DEMO_US: &str = include_str!("../catalog/demo-us.toml");
 /// The SI demo catalog.
 pub const DEMO_SI: &str = include_str!("../catalog/demo-si.toml");
+
+impl Catalog {
+    /// The display units of this catalog: the ones it names, else the
+    /// system its quantities are mostly written in.
+    pub fn units(&self) -> crate::units::System {
+        self.meta.units.unwrap_or(self.meta.written_in)
+    }
+}
+
+/// The system most quantities of a text are written in: SI when metric
+/// units ("mm", "MPa", "kg/m3", "kPa", "m") outnumber US ones.
+pub fn written_in(text: &str) -> crate::units::System {
+    let count = |units: &[&str]| -> usize { units.iter().map(|u| text.matches(&format!(" {u}\"")).count()).sum() };
+    let si = count(&["mm", "MPa", "kg/m3", "kPa", "m", "kN/m", "mm2"]);
+    let us = count(&["in", "psi", "pcf", "ft", "psf", "ksi", "in2", "klf"]);
+    if si > us { crate::units::System::Si } else { crate::units::System::Us }
+}
 
 /// Read a UTF-8 text file of bounded size, as a problem list on failure.
 pub fn read_text(path: &Path) -> Result<String, Problems> {

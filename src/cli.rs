@@ -137,7 +137,7 @@ pub fn run() -> i32 {
         Ok(code) => code,
         Err(Failure::Io(e)) if e.kind() == io::ErrorKind::BrokenPipe => OK,
         Err(Failure::Io(e)) => {
-            eprintln!("plankwise: cannot write the output: {e}");
+            eprintln!("plankwise: {}", plankwise::input::escape_controls(&e.to_string()));
             BAD_INPUT
         }
         Err(Failure::Input(p)) => {
@@ -147,7 +147,7 @@ pub fn run() -> i32 {
             BAD_INPUT
         }
         Err(Failure::Message(m)) => {
-            eprintln!("plankwise: {m}");
+            eprintln!("plankwise: {}", plankwise::input::escape_controls(&m));
             BAD_INPUT
         }
     }
@@ -185,14 +185,30 @@ pub(crate) fn print_warnings(cat: &Catalog) {
 
 fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool) -> Result<i32, Failure> {
     use std::io::IsTerminal;
-    if summary || !io::stdout().is_terminal() || !io::stdin().is_terminal() {
+    let terminal = io::stdout().is_terminal() && io::stdin().is_terminal();
+    if summary || !terminal {
+        // the summary shows the catalog only: a job given with it would be
+        // silently unread, so it is refused
+        if let Some(j) = job {
+            return Err(Failure::Message(format!(
+                "--job '{}' is not read {}; rank it with: plankwise rank{} --job {}",
+                j.display(),
+                if summary { "with --summary, which prints the catalog" } else { "when the output is not a terminal (the UI cannot open)" },
+                catalog.map_or(String::new(), |c| format!(" {}", c.display())),
+                j.display()
+            )));
+        }
         return demo(catalog);
     }
     let (cat, _) = load(catalog)?;
     print_warnings(&cat);
-    let (job, path) = match job {
-        Some(j) if j.as_os_str() != "demo" => (plankwise::job::Job::load(j)?, Some(j.clone())),
-        _ => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
+    let (job, path) = match (job, catalog) {
+        (Some(j), _) if j.as_os_str() == "demo" => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
+        (Some(j), _) => (plankwise::job::Job::load(j)?, Some(j.clone())),
+        // the built-in demo catalog opens on the demo job
+        (None, None) => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
+        // a user's catalog without a job opens one empty bay in its units
+        (None, Some(_)) => (plankwise::job::Job::empty_for(&cat), None),
     };
     let problems = plankwise::select::cross_check(&cat, &job.bays);
     if !problems.is_empty() {

@@ -659,23 +659,12 @@ pub fn find(key: &str) -> Option<&'static Criterion> {
 /// and isolates (U+202A–U+202E, U+2066–U+2069). The first one and its
 /// place, or None.
 pub fn control_char(s: &str) -> Option<(usize, char)> {
-    s.chars().enumerate().find(|&(_, c)| {
-        (c.is_control() && c != '\t') || ('\u{202A}'..='\u{202E}').contains(&c) || ('\u{2066}'..='\u{2069}').contains(&c)
-    })
+    s.chars().enumerate().find(|&(_, c)| crate::input::is_control(c))
 }
 
 /// `s` quoted for a message, every control character escaped.
 pub fn quoted(s: &str) -> String {
-    let mut out = String::from("'");
-    for c in s.chars() {
-        if c.is_control() || ('\u{202A}'..='\u{202E}').contains(&c) || ('\u{2066}'..='\u{2069}').contains(&c) {
-            out.extend(c.escape_unicode());
-        } else {
-            out.push(c);
-        }
-    }
-    out.push('\'');
-    out
+    format!("'{}'", crate::input::escape_controls(s))
 }
 
 /// Text that may reach a terminal or a report: refused when it holds a

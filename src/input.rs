@@ -22,6 +22,29 @@ pub type S = Spanned<String>;
 /// Longest text value, characters.
 pub const TEXT_CHARS: usize = 500;
 
+/// Whether a character must never reach a terminal or a report: C0 but
+/// tab, DEL, C1 (ESC among them), and the bidirectional overrides and
+/// isolates (U+202A–U+202E, U+2066–U+2069).
+pub fn is_control(c: char) -> bool {
+    (c.is_control() && c != '\t') || ('\u{202A}'..='\u{202E}').contains(&c) || ('\u{2066}'..='\u{2069}').contains(&c)
+}
+
+/// `s` with every such character written as its escape (`\u{1b}`).
+pub fn escape_controls(s: &str) -> String {
+    if !s.chars().any(is_control) {
+        return s.to_string();
+    }
+    let mut out = String::with_capacity(s.len() + 8);
+    for c in s.chars() {
+        if is_control(c) {
+            out.extend(c.escape_unicode());
+        } else {
+            out.push(c);
+        }
+    }
+    out
+}
+
 pub(crate) struct Ctx<'a> {
     pub(crate) rep: Reporter<'a>,
 }
@@ -63,6 +86,18 @@ impl Ctx<'_> {
         Some(v)
     }
 
+    /// A price, which may not be negative (absent: none given).
+    pub(crate) fn price(&mut self, s: &Option<S>, path: &str) -> Option<Option<crate::units::PricePerArea>> {
+        let v = self.opt_q::<crate::units::PriceK>(s, path, "price")?;
+        if let (Some(p), Some(s)) = (v, s) {
+            if p.get() < 0.0 {
+                self.rep.error(span(s), &join(path, "price"), format!("'{}' is negative; a price is 0 or more", s.get_ref()));
+                return None;
+            }
+        }
+        Some(v)
+    }
+
     /// A length that must be positive.
     pub(crate) fn positive_len(&mut self, s: &S, path: &str, field: &str) -> Option<Length> {
         let v = self.q::<crate::units::LengthK>(s, path, field)?;
@@ -91,6 +126,9 @@ impl Ctx<'_> {
         match s {
             None => String::new(),
             Some(s) => {
+                if let Err(e) = crate::criteria::check_text(s.get_ref()) {
+                    self.rep.error(span(s), &join(path, field), e);
+                }
                 if s.get_ref().chars().count() > TEXT_CHARS {
                     self.rep.error(
                         span(s),
@@ -118,7 +156,9 @@ impl Ctx<'_> {
 
     pub(crate) fn id(&mut self, s: &S, path: &str) -> String {
         let id = s.get_ref();
-        if id.trim().is_empty() {
+        if let Err(e) = crate::criteria::check_text(id) {
+            self.rep.error(span(s), &join(path, "id"), e);
+        } else if id.trim().is_empty() {
             self.rep.error(span(s), &join(path, "id"), "is empty; give each entry a short id");
         } else if id.chars().count() > 80 {
             self.rep.error(

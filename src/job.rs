@@ -345,6 +345,16 @@ impl Job {
         })
     }
 
+    /// One empty bay in a catalog's units, for a catalog opened without a
+    /// job: 30 ft (9 m in SI), no loads, every criterion at its default.
+    pub fn empty_for(cat: &crate::catalog::Catalog) -> Job {
+        let sys = cat.units();
+        let span = if sys == System::Si { Length::from_unit(9.0, "m") } else { Length::from_unit(30.0, "ft") };
+        let mut job = Job::single("New job", Bay::new("Bay 1", span));
+        job.units = Some(sys);
+        job
+    }
+
     /// A job of one bay, not read from a file (flags, or a catalog opened
     /// without a job).
     pub fn single(project: &str, bay: Bay) -> Job {

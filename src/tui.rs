@@ -7,7 +7,6 @@ pub mod keymap;
 pub mod theme;
 pub mod ui;
 
-use std::collections::BTreeSet;
 use std::path::PathBuf;
 use std::sync::Arc;
 
@@ -284,8 +283,6 @@ pub struct App {
     pub rows: Vec<Row>,
     /// Visible rows: index into `rows` and the matched character positions of the label.
     pub visible: Vec<(usize, Vec<usize>)>,
-    /// Marked candidates (labels) per bay index.
-    pub marked: BTreeSet<(usize, String)>,
     /// Job edited since loading or saving.
     pub dirty: bool,
     /// Status line message and whether it is an error.
@@ -327,7 +324,6 @@ impl App {
             query: String::new(),
             rows: Vec::new(),
             visible: Vec::new(),
-            marked: BTreeSet::new(),
             dirty: false,
             status: ("? for help · + − span · ] [ live · / search · w shortlist · q quit".into(), false),
             keymap: Keymap::default(),
@@ -608,7 +604,12 @@ impl App {
 
     /// The marked rows of every bay, or the top three viable of each when none is marked.
     pub fn marked_labels(&self, bay: usize) -> Vec<String> {
-        self.marked.iter().filter(|(b, _)| *b == bay).map(|(_, l)| l.clone()).collect()
+        self.job.bays.get(bay).map_or(Vec::new(), |b| b.marked.clone())
+    }
+
+    /// Whether a row of the current bay is marked.
+    pub fn is_marked(&self, label: &str) -> bool {
+        self.current_bay().marked.iter().any(|m| m == label)
     }
 }
 
@@ -718,14 +719,17 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                 if !r.viable {
                     app.say("only viable candidates go on the shortlist", true);
                 } else {
-                    let key = (app.bay, r.label.clone());
+                    // marks belong to the bay and are saved with the job
                     let label = r.label.clone();
-                    if !app.marked.remove(&key) {
-                        app.marked.insert(key);
-                        app.say(format!("marked {label}"), false);
-                    } else {
+                    let marks = &mut app.job.bays[app.bay].marked;
+                    if let Some(i) = marks.iter().position(|m| *m == label) {
+                        marks.remove(i);
                         app.say(format!("unmarked {label}"), false);
+                    } else {
+                        marks.push(label.clone());
+                        app.say(format!("marked {label}"), false);
                     }
+                    app.dirty = true;
                 }
             }
         }

@@ -28,6 +28,8 @@ pub struct RawMeta {
     pub code: Option<S>,
     /// Free notes.
     pub notes: Option<Vec<S>>,
+    /// Display units of the catalog's users: "us" or "si".
+    pub units: Option<S>,
 }
 
 /// `[[mix]]`: a concrete mix.

@@ -17,6 +17,7 @@ use pattern::{compare_published, pattern, published};
 use super::{Catalog, FamilySpec, Meta, Pattern, Problems, Section, content_hash};
 use crate::material::{Mix, StrandKind, builtin_strand};
 use crate::section::Family;
+use crate::section::family::fmt;
 
 /// Plausible ranges; values outside are typing mistakes far more often than
 /// real members (common practice, no source).
@@ -111,12 +112,15 @@ const BLOCKS_ABOVE: usize = 64 * 1024;
 
 /// Validate catalog text.
 pub fn catalog(text: &str, file: &str) -> Result<Catalog, Problems> {
+    let mut r = None;
     if text.len() >= BLOCKS_ABOVE {
-        if let Some(r) = catalog_in_blocks(text, file) {
-            return r;
-        }
+        r = catalog_in_blocks(text, file);
     }
-    catalog_whole(text, file)
+    let mut r = r.unwrap_or_else(|| catalog_whole(text, file));
+    if let Ok(c) = &mut r {
+        c.meta.written_in = super::written_in(text);
+    }
+    r
 }
 
 /// Validate catalog text parsed as one tree.
@@ -252,7 +256,17 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
                             );
                         }
                     }
-                    g.meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| n.into_inner()).collect();
+                    g.meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| cx.text(&Some(n), "catalog", "notes")).collect();
+                    if let Some(u) = &m.units {
+                        match crate::units::System::from_name(u.get_ref()) {
+                            Some(s) => g.meta.units = Some(s),
+                            None => cx.rep.error(
+                                span(u),
+                                "catalog / units",
+                                format!("{} is not allowed; use one of: us, si", crate::criteria::quoted(u.get_ref())),
+                            ),
+                        }
+                    }
                 }
             }
             "mix" => {
@@ -497,7 +511,7 @@ fn section(
     } else {
         None
     };
-    let price = cx.opt_q::<crate::units::PriceK>(&r.price, path, "price");
+    let price = cx.price(&r.price, path);
     let max_length = match &r.max_length {
         None => Some(None),
         Some(m) => cx
@@ -530,6 +544,25 @@ fn section(
         let ppath = format!("{path} / pattern '{}'", p.get_ref().id.get_ref());
         let shape = shaped.as_ref().map(|(s, g)| (s, g));
         if let Some(pat) = pattern(cx, p, &ppath, shape, family, refs) {
+            // a debonded length beyond half the longest member leaves the
+            // strand bonded nowhere
+            let longest = pat
+                .max_length
+                .or(max_length.flatten())
+                .map_or(limits::LENGTH_FT.1 * 12.0, |m| m.get());
+            if let Some(d) = pat.rows.iter().filter_map(|r| r.debond).map(|d| d.get()).reduce(f64::max) {
+                if d >= longest / 2.0 {
+                    cx.rep.error(
+                        Some(p.span()),
+                        &join(&ppath, "debond"),
+                        format!(
+                            "a debonded length of {} ft reaches half the longest member ({} ft): that strand would be bonded nowhere",
+                            fmt(d / 12.0),
+                            fmt(longest / 12.0)
+                        ),
+                    );
+                }
+            }
             if patterns.iter().any(|x| x.id == pat.id) {
                 cx.rep.error(
                     span(&p.get_ref().id),

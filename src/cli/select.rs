@@ -8,9 +8,9 @@ use serde::Serialize;
 use plankwise::catalog::Catalog;
 use plankwise::bay::{Bay, Objective};
 use plankwise::job::{DEMO_JOB, Job};
-use plankwise::report::shortlist::{self, BayList, Format};
+use plankwise::report::shortlist::{self, Format};
 use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
-use plankwise::select::{BayRanking, Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
+use plankwise::select::{Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
 use plankwise::units::Length;
 
 use super::bay::{BayFlags, objective};
@@ -213,50 +213,51 @@ fn entry_json(rank: usize, r: &Ranked) -> EntryJson {
     }
 }
 
-/// `plankwise rank`.
+#[derive(Serialize)]
+struct BayJson {
+    name: String,
+    objective: &'static str,
+    viable_count: usize,
+    failing_count: usize,
+    viable: Vec<EntryJson>,
+    failing: Vec<EntryJson>,
+}
+
+/// `plankwise rank`: each bay is ranked and printed in turn, so a job of
+/// thousands of bays holds one bay's ranking at a time.
 pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
     let (bays, obj) = job_or_flags(a.job.as_ref(), &a.bay, &cat)?;
     check_job(&cat, &bays)?;
     let top = a.top as usize;
-    let ranked: Vec<(&Bay, BayRanking)> = bays.iter().map(|b| (b, rank_bay(&cat, b, obj))).collect();
     let mut out = io::stdout().lock();
+    let mut none: Vec<&str> = Vec::new();
     if a.json {
-        #[derive(Serialize)]
-        struct BayJson {
-            name: String,
-            objective: &'static str,
-            viable_count: usize,
-            failing_count: usize,
-            viable: Vec<EntryJson>,
-            failing: Vec<EntryJson>,
-        }
-        let v: Vec<BayJson> = ranked
-            .iter()
-            .map(|(b, r)| BayJson {
-                name: b.name.clone(),
-                objective: obj.unwrap_or(b.objective).name(),
-                viable_count: r.viable.len(),
-                failing_count: r.failing.len(),
-                viable: r.viable.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
-                failing: r
-                    .failing
-                    .iter()
-                    .take(top)
-                    .enumerate()
-                    .map(|(i, x)| entry_json(i + 1, x))
-                    .collect(),
-            })
-            .collect();
-        serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
-        writeln!(out)?;
+        write!(out, "[")?;
     } else if a.csv {
         writeln!(
             out,
             "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,strand_in2_per_ft,governing,governing_ratio,first_failure,first_failure_ratio"
         )?;
-        for (b, r) in &ranked {
+    }
+    for (n, b) in bays.iter().enumerate() {
+        let r = rank_bay(&cat, b, obj);
+        if r.viable.is_empty() {
+            none.push(b.name.as_str());
+        }
+        if a.json {
+            let v = BayJson {
+                name: b.name.clone(),
+                objective: obj.unwrap_or(b.objective).name(),
+                viable_count: r.viable.len(),
+                failing_count: r.failing.len(),
+                viable: r.viable.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
+                failing: r.failing.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
+            };
+            write!(out, "{}\n", if n == 0 { "" } else { "," })?;
+            serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
+        } else if a.csv {
             for (i, x) in r.viable.iter().take(top).chain(r.failing.iter().take(top)).enumerate() {
                 let e = entry_json(i + 1, x);
                 writeln!(
@@ -277,9 +278,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                     e.first_failure_ratio.map_or(String::new(), |r| format!("{r:.4}"))
                 )?;
             }
-        }
-    } else {
-        for (b, r) in &ranked {
+        } else {
             writeln!(
                 out,
                 "Bay '{}' — span {:.2} ft; objective {}",
@@ -317,13 +316,12 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
             }
             writeln!(out)?;
         }
+    }
+    if a.json {
+        writeln!(out, "\n]")?;
+    } else if !a.csv {
         plankwise::report::write_cautions(&mut out)?;
     }
-    let none: Vec<&str> = ranked
-        .iter()
-        .filter(|(_, r)| r.viable.is_empty())
-        .map(|(b, _)| b.name.as_str())
-        .collect();
     if !none.is_empty() {
         eprintln!("plankwise: no viable member for: {}", none.join(", "));
         return Ok(NONE_VIABLE);
@@ -504,25 +502,19 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     // refused before any work: an input, not a regular file, or there already
     plankwise::files::writable(&a.output, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
-    let ranked: Vec<BayRanking> = job.bays.iter().map(|b| rank_bay(&cat, b, None)).collect();
-    let lists: Vec<BayList> = job
-        .bays
-        .iter()
-        .zip(&ranked)
-        .map(|(bay, ranking)| BayList { bay, ranking })
-        .collect();
+    // each bay ranked as the writer comes to it: one ranking held at a time
+    let mut none: Vec<String> = Vec::new();
     let mut buf = Vec::new();
-    shortlist::write(&mut buf, format, &job, &cat, &lists, a.top as usize)?;
+    shortlist::write_each(&mut buf, format, &job, &cat, a.top as usize, &mut |_, bay| {
+        let r = rank_bay(&cat, bay, None);
+        if r.viable.is_empty() {
+            none.push(bay.name.clone());
+        }
+        r
+    })?;
     plankwise::files::write_safely(&a.output, &buf, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
     eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
-    let none: Vec<&str> = job
-        .bays
-        .iter()
-        .zip(&ranked)
-        .filter(|(_, r)| r.viable.is_empty())
-        .map(|(b, _)| b.name.as_str())
-        .collect();
     if !none.is_empty() {
         eprintln!("plankwise: no viable member for: {}", none.join(", "));
         return Ok(NONE_VIABLE);

@@ -13,8 +13,8 @@ use ratatui::widgets::TableState;
 
 use plankwise::catalog::Catalog;
 use plankwise::job::Job;
-use plankwise::report::shortlist::{self, BayList};
-use plankwise::select::{BayRanking, rank_bay};
+use plankwise::report::shortlist;
+use plankwise::select::rank_bay;
 use plankwise::tui::keymap::{Key, Keymap};
 use plankwise::tui::{Action, App, Effect, report, ui, update};
 
@@ -58,22 +58,16 @@ fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::F
         Err(e) => return Err(format!("'{}' {e}", path.display())),
         Ok(_) => {}
     }
-    let mut rankings: Vec<BayRanking> = app.job.bays.iter().map(|b| rank_bay(&app.catalog, b, None)).collect();
-    for (i, r) in rankings.iter_mut().enumerate() {
+    let mut buf = Vec::new();
+    shortlist::write_each(&mut buf, format, &app.job, &app.catalog, 3, &mut |i, bay| {
+        let mut r = rank_bay(&app.catalog, bay, None);
         let marked = app.marked_labels(i);
         if !marked.is_empty() {
             r.viable.retain(|x| marked.contains(&x.entry.label()));
         }
-    }
-    let lists: Vec<BayList> = app
-        .job
-        .bays
-        .iter()
-        .zip(&rankings)
-        .map(|(bay, ranking)| BayList { bay, ranking })
-        .collect();
-    let mut buf = Vec::new();
-    shortlist::write(&mut buf, format, &app.job, &app.catalog, &lists, 3).map_err(|e| e.to_string())?;
+        r
+    })
+    .map_err(|e| e.to_string())?;
     plankwise::files::write_safely(path, &buf, &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;
     Ok(format!("wrote {}", path.display()))
 }

@@ -39,15 +39,18 @@ impl fmt::Display for Problem {
             Severity::Error => "error",
             Severity::Warning => "warning",
         };
+        // nothing a file holds may drive the terminal: control characters
+        // in any part are written escaped
+        let clean = crate::input::escape_controls;
         if self.line > 0 {
-            write!(f, "{}:{}:{}: {sev}: ", self.file, self.line, self.column)?;
+            write!(f, "{}:{}:{}: {sev}: ", clean(&self.file), self.line, self.column)?;
         } else {
-            write!(f, "{}: {sev}: ", self.file)?;
+            write!(f, "{}: {sev}: ", clean(&self.file))?;
         }
         if !self.path.is_empty() {
-            write!(f, "{}: ", self.path)?;
+            write!(f, "{}: ", clean(&self.path))?;
         }
-        write!(f, "{}", self.message)
+        write!(f, "{}", clean(&self.message))
     }
 }
 

@@ -141,15 +141,53 @@ fn criteria(bay: &Bay) -> Vec<String> {
     v
 }
 
-/// Write the shortlist.
+/// Write the shortlist of bays already ranked.
 pub fn write(w: &mut impl Write, format: Format, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
-    match format {
-        Format::Text => text(w, job, cat, bays, top),
-        Format::Markdown => markdown(w, job, cat, bays, top),
-        Format::Csv => csv(w, job, cat, bays, top),
-    }
+    let mut i = 0;
+    write_each(w, format, job, cat, top, &mut |_, _| {
+        i += 1;
+        bays[i - 1].ranking.clone()
+    })
 }
 
+/// Write the shortlist, ranking each bay of the job with `rank` as it comes
+/// to it: one bay's ranking is held at a time, so a job of thousands of
+/// bays takes the memory of one.
+pub fn write_each<'c>(
+    w: &mut impl Write,
+    format: Format,
+    job: &Job,
+    cat: &'c Catalog,
+    top: usize,
+    rank: &mut dyn FnMut(usize, &Bay) -> BayRanking<'c>,
+) -> io::Result<()> {
+    match format {
+        Format::Text => {
+            wrap_into(w, |b| text_head(b, job, cat))?;
+            for (i, bay) in job.bays.iter().enumerate() {
+                let r = rank(i, bay);
+                wrap_into(w, |b| text_bay(b, cat, i, bay, &r, top))?;
+            }
+            wrap_into(w, |b| text_tail(b, job))
+        }
+        Format::Markdown => {
+            md_head(w, job, cat)?;
+            for (i, bay) in job.bays.iter().enumerate() {
+                let r = rank(i, bay);
+                md_bay(w, cat, i, bay, &r, top)?;
+            }
+            md_tail(w, job)
+        }
+        Format::Csv => {
+            csv_head(w)?;
+            for (i, bay) in job.bays.iter().enumerate() {
+                let r = rank(i, bay);
+                csv_bay(w, job, cat, bay, &r, top)?;
+            }
+            Ok(())
+        }
+    }
+}
 fn header_lines(job: &Job, cat: &Catalog) -> Vec<String> {
     vec![
         format!("Project   {}", job.project),
@@ -180,9 +218,10 @@ fn wrapped(line: &str, indent: &str) -> String {
     out
 }
 
-fn text(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+/// Write what `part` writes, each line wrapped at 78 columns.
+fn wrap_into(w: &mut impl Write, part: impl FnOnce(&mut Vec<u8>) -> io::Result<()>) -> io::Result<()> {
     let mut buf = Vec::new();
-    text_raw(&mut buf, job, cat, bays, top)?;
+    part(&mut buf)?;
     for line in String::from_utf8_lossy(&buf).split_inclusive('\n') {
         let (body, nl) = line.strip_suffix('\n').map_or((line, ""), |b| (b, "\n"));
         let indent: String = body.chars().take_while(|c| *c == ' ').collect::<String>() + "    ";
@@ -191,56 +230,62 @@ fn text(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usi
     Ok(())
 }
 
-fn text_raw(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+fn text_head(w: &mut impl Write, job: &Job, cat: &Catalog) -> io::Result<()> {
     writeln!(w, "PRECAST MEMBER SHORTLIST — PRELIMINARY")?;
     writeln!(w, "{}", "=".repeat(78))?;
     for l in header_lines(job, cat) {
         writeln!(w, "{l}")?;
     }
-    for (i, b) in bays.iter().enumerate() {
-        if i > 0 {
-            write!(w, "\x0c")?;
-        }
-        writeln!(w)?;
-        writeln!(w, "Bay {}: {}", i + 1, b.bay.name)?;
-        writeln!(w, "{}", "-".repeat(78))?;
-        for c in criteria(b.bay) {
-            writeln!(w, "  {c}")?;
-        }
-        writeln!(w)?;
-        if b.ranking.viable.is_empty() {
-            writeln!(w, "  NO CATALOG MEMBER WORKS FOR THIS BAY. Nearest misses:")?;
-            for r in b.ranking.failing.iter().take(3) {
-                writeln!(w, "  - {}: {}", r.entry.label(), failure_reason(r))?;
-            }
-            continue;
-        }
-        for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(cat, r, b.bay);
-            writeln!(w, "{:>3}. {}", k + 1, x.designation)?;
-            writeln!(
-                w,
-                "     [{}] {}, {:.1} psf, {:.2} in deep, member {}",
-                x.id, x.topping, x.weight_psf, x.depth_in, x.member_length
-            )?;
-            writeln!(
-                w,
-                "     governs: {} {:.2}; φMn/Mu {:.2}; Vu/φVn {:.2}; class {}",
-                x.governing, x.ratio, x.phi_mn_over_mu, x.shear_ratio, x.class
-            )?;
-            writeln!(
-                w,
-                "     camber at erection {:+.2} in, final {:+.2} in; live defl. {:.2} in",
-                x.camber_erection, x.camber_final, x.defl_live
-            )?;
-            writeln!(
-                w,
-                "     fire {}{}",
-                x.fire,
-                x.pieces.map_or(String::new(), |p| format!("; {p} pieces"))
-            )?;
-        }
+    Ok(())
+}
+
+fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+    if i > 0 {
+        write!(w, "\x0c")?;
     }
+    writeln!(w)?;
+    writeln!(w, "Bay {}: {}", i + 1, bay.name)?;
+    writeln!(w, "{}", "-".repeat(78))?;
+    for c in criteria(bay) {
+        writeln!(w, "  {c}")?;
+    }
+    writeln!(w)?;
+    if ranking.viable.is_empty() {
+        writeln!(w, "  NO CATALOG MEMBER WORKS FOR THIS BAY. Nearest misses:")?;
+        for r in ranking.failing.iter().take(3) {
+            writeln!(w, "  - {}: {}", r.entry.label(), failure_reason(r))?;
+        }
+        return Ok(());
+    }
+    for (k, r) in ranking.viable.iter().take(top).enumerate() {
+        let x = row(cat, r, bay);
+        writeln!(w, "{:>3}. {}", k + 1, x.designation)?;
+        writeln!(
+            w,
+            "     [{}] {}, {:.1} psf, {:.2} in deep, member {}",
+            x.id, x.topping, x.weight_psf, x.depth_in, x.member_length
+        )?;
+        writeln!(
+            w,
+            "     governs: {} {:.2}; φMn/Mu {:.2}; Vu/φVn {:.2}; class {}",
+            x.governing, x.ratio, x.phi_mn_over_mu, x.shear_ratio, x.class
+        )?;
+        writeln!(
+            w,
+            "     camber at erection {:+.2} in, final {:+.2} in; live defl. {:.2} in",
+            x.camber_erection, x.camber_final, x.defl_live
+        )?;
+        writeln!(
+            w,
+            "     fire {}{}",
+            x.fire,
+            x.pieces.map_or(String::new(), |p| format!("; {p} pieces"))
+        )?;
+    }
+    Ok(())
+}
+
+fn text_tail(w: &mut impl Write, job: &Job) -> io::Result<()> {
     writeln!(w)?;
     writeln!(w, "Notes")?;
     for n in &job.notes {
@@ -255,14 +300,19 @@ fn text_raw(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
     Ok(())
 }
 
-fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+fn md_head(w: &mut impl Write, job: &Job, cat: &Catalog) -> io::Result<()> {
     writeln!(w, "# Precast member shortlist — preliminary")?;
     writeln!(w)?;
     for l in header_lines(job, cat) {
         let (k, v) = l.split_at(10);
         writeln!(w, "- **{}**: {}", k.trim(), v.trim())?;
     }
-    for (i, b) in bays.iter().enumerate() {
+    Ok(())
+}
+
+fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+    let b = BayList { bay, ranking };
+    {
         writeln!(w)?;
         writeln!(w, "## Bay {}: {}", i + 1, b.bay.name)?;
         writeln!(w)?;
@@ -276,7 +326,7 @@ fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
             for r in b.ranking.failing.iter().take(3) {
                 writeln!(w, "- `{}`: {}", r.entry.label(), failure_reason(r))?;
             }
-            continue;
+            return Ok(());
         }
         writeln!(
             w,
@@ -308,6 +358,10 @@ fn markdown(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top:
             )?;
         }
     }
+    Ok(())
+}
+
+fn md_tail(w: &mut impl Write, job: &Job) -> io::Result<()> {
     writeln!(w)?;
     writeln!(w, "## Notes")?;
     writeln!(w)?;
@@ -332,15 +386,19 @@ fn q(s: &str) -> String {
     }
 }
 
-fn csv(w: &mut impl Write, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+fn csv_head(w: &mut impl Write) -> io::Result<()> {
     writeln!(
         w,
         "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces"
-    )?;
-    for b in bays {
+    )
+}
+
+fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+    let b = BayList { bay, ranking };
+    {
         if b.ranking.viable.is_empty() {
             writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
-            continue;
+            return Ok(());
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
             let x = row(cat, r, b.bay);

@@ -224,6 +224,24 @@ impl HollowCore {
                 fmt(c.width)
             ));
         }
+        // a keyway given as an area comes off the two edge webs: it may not
+        // take more than they hold beyond the least web
+        if let Some(Keyway::Area { area, .. }) = self.keyway {
+            let net = g.outline.moments().area - g.voids.iter().map(|v| v.moments().area).sum::<f64>();
+            let edge = self.width / 2.0 - (c.count as f64 - 1.0) / 2.0 * c.spacing - c.width / 2.0;
+            let spare = 2.0 * (edge - MIN_SHELL_IN).max(0.0) * self.depth;
+            if area >= net {
+                out.push(format!(
+                    "the keyway area {} in² is as large as the section itself ({net:.1} in² of concrete)",
+                    fmt(area)
+                ));
+            } else if area > spare {
+                out.push(format!(
+                    "the keyway area {} in² leaves no edge web: the two edge webs, {edge:.2} in wide, hold {spare:.1} in² beyond the least web of {MIN_SHELL_IN} in",
+                    fmt(area)
+                ));
+            }
+        }
         // edge webs, measured to the real side face (keyway included)
         for (i, s) in g.voids.iter().enumerate() {
             if i != 0 && i + 1 != g.voids.len() {

@@ -203,16 +203,34 @@ impl Polygon {
             .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), &(x, _)| (lo.min(x), hi.max(x)))
     }
 
-    /// Whether two non-adjacent edges cross (the polygon is not simple).
+    /// Whether the outline crosses or touches itself (it is not a simple
+    /// polygon): two edges that are not neighbours cross, or meet at a
+    /// point (a vertex on another edge, two vertices at one place), or two
+    /// neighbours fold back over each other.
     pub fn self_intersects(&self) -> bool {
         let n = self.points.len();
         let e: Vec<_> = self.edges().collect();
+        let scale = self.points.iter().fold(0.0f64, |m, p| m.max(p.0.abs()).max(p.1.abs())).max(1.0);
+        let tol2 = (1e-9 * scale).powi(2);
         for i in 0..n {
-            for j in (i + 2)..n {
-                if i == 0 && j == n - 1 {
+            for j in (i + 1)..n {
+                let neighbours = j == i + 1 || (i == 0 && j == n - 1);
+                let (a, b) = e[i];
+                let (c, d) = e[j];
+                if neighbours {
+                    // the shared vertex; the other ends must not lie on the other edge
+                    let (p, q) = if j == i + 1 { (a, d) } else { (b, c) };
+                    if dist2_to_segment(p, c, d) < tol2 || dist2_to_segment(q, a, b) < tol2 {
+                        return true;
+                    }
                     continue;
                 }
-                if segments_cross(e[i].0, e[i].1, e[j].0, e[j].1) {
+                if segments_cross(a, b, c, d)
+                    || dist2_to_segment(a, c, d) < tol2
+                    || dist2_to_segment(b, c, d) < tol2
+                    || dist2_to_segment(c, a, b) < tol2
+                    || dist2_to_segment(d, a, b) < tol2
+                {
                     return true;
                 }
             }
@@ -851,5 +869,14 @@ mod tests {
         };
         assert!(bow.self_intersects());
         assert!(!rect_poly(3.0, 2.0).self_intersects());
+        // touching itself: a vertex on another edge, and a fold back
+        let touch = Polygon {
+            points: vec![(0.0, 0.0), (4.0, 0.0), (4.0, 4.0), (2.0, 0.0), (0.0, 4.0)],
+        };
+        assert!(touch.self_intersects());
+        let fold = Polygon {
+            points: vec![(0.0, 0.0), (4.0, 0.0), (2.0, 0.0), (2.0, 3.0)],
+        };
+        assert!(fold.self_intersects());
     }
 }

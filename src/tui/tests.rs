@@ -283,7 +283,7 @@ fn non_viable_rows_cannot_be_marked() {
     a.bay = a.job.bays.len() - 1; // the bay no member satisfies
     a.rerank();
     update(&mut a, Action::Mark);
-    assert!(a.status.1 && a.marked.is_empty());
+    assert!(a.status.1 && a.marked_labels(0).is_empty());
 }
 
 #[test]

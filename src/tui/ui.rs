@@ -148,7 +148,7 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
         .iter()
         .map(|(i, hits)| {
             let r = &app.rows[*i];
-            let marked = app.marked.contains(&(app.bay, r.label.clone()));
+            let marked = app.is_marked(&r.label);
             let label: Vec<Span> = r
                 .label
                 .chars()
@@ -370,7 +370,7 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         Mode::Confirm(Question::Overwrite(p, _)) => (format!("'{}' exists — replace it? y / n", p.display()), t.error),
         _ => (app.status.0.clone(), if app.status.1 { t.error } else { t.status }),
     };
-    Paragraph::new(text).style(style).render(area, buf);
+    Paragraph::new(crate::input::escape_controls(&text)).style(style).render(area, buf);
 }
 
 fn footer_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {

@@ -164,7 +164,7 @@ pub(super) fn pattern(
             }
         }
     };
-    let price = cx.opt_q::<crate::units::PriceK>(&r.price, path, "price");
+    let price = cx.price(&r.price, path);
     let max_length = match &r.max_length {
         None => Some(None),
         Some(m) => cx
@@ -294,6 +294,46 @@ pub(super) fn pattern(
             format!("has {total} strands; at most {} allowed in one pattern", limits::STRANDS.1),
         );
         rows_ok = false;
+    }
+    // two strands cannot share concrete: centres at least a diameter apart,
+    // at midspan and at the ends
+    if let (true, Some(st)) = (rows_ok, &strand) {
+        let db = st.diameter.get();
+        let at = |end: bool| -> Vec<(usize, f64, f64)> {
+            rows.iter()
+                .enumerate()
+                .flat_map(|(i, r)| {
+                    let y = if end { r.end_height.unwrap_or(r.height) } else { r.height }.get();
+                    r.x.iter().map(move |&x| (i, x, y))
+                })
+                .collect()
+        };
+        'found: for end in [false, true] {
+            let pts = at(end);
+            for (k, a) in pts.iter().enumerate() {
+                for b in &pts[k + 1..] {
+                    let gap = (a.1 - b.1).hypot(a.2 - b.2);
+                    if gap < db - 1e-9 {
+                        cx.rep.error(
+                            rows_raw.get(b.0).map(|r| r.span()),
+                            &join(path, &format!("row {}", b.0 + 1)),
+                            format!(
+                                "two strands {} (at x = {} in and {} in, {} in up{}): their centres are {} in apart, less than the {} in strand diameter",
+                                if gap < 1e-9 { "coincide" } else { "overlap" },
+                                fmt(a.1),
+                                fmt(b.1),
+                                fmt(a.2),
+                                if end { ", at the ends" } else { "" },
+                                fmt(gap),
+                                fmt(db)
+                            ),
+                        );
+                        rows_ok = false;
+                        break 'found;
+                    }
+                }
+            }
+        }
     }
     let depressed = rows.iter().any(|r| r.end_height.is_some());
     if let Ok(Some(h)) = hold_down.ok_or(()) {
