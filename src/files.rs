@@ -161,12 +161,20 @@ pub fn writable(path: &Path, inputs: &[&Path], force: bool) -> Result<PathBuf, R
 /// beside it, synced, then renamed over it; an existing file's permissions
 /// are kept. Call [`writable`] first.
 pub fn write_atomic(path: &Path, bytes: &[u8]) -> io::Result<()> {
+    write_atomic_with(path, |w| w.write_all(bytes))
+}
+
+/// [`write_atomic`] of what `fill` writes, streamed to the temporary file
+/// (a long output is never held in memory).
+pub fn write_atomic_with(path: &Path, fill: impl FnOnce(&mut dyn Write) -> io::Result<()>) -> io::Result<()> {
     let dir = path.parent().filter(|d| !d.as_os_str().is_empty()).unwrap_or(Path::new("."));
     let name = path.file_name().map_or("out".into(), |n| n.to_string_lossy().into_owned());
     let tmp = dir.join(format!(".{name}.plankwise-{}.tmp", std::process::id()));
     let result = (|| {
-        let mut f = OpenOptions::new().write(true).create_new(true).open(&tmp)?;
-        f.write_all(bytes)?;
+        let f = OpenOptions::new().write(true).create_new(true).open(&tmp)?;
+        let mut w = io::BufWriter::new(f);
+        fill(&mut w)?;
+        let f = w.into_inner().map_err(|e| e.into_error())?;
         if let Ok(m) = fs::metadata(path) {
             f.set_permissions(m.permissions())?;
         }

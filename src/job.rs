@@ -231,6 +231,127 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
     ok.then_some(b)
 }
 
+/// Files at least this large are parsed one `[[bay]]` block at a time.
+const BLOCKS_ABOVE: usize = 64 * 1024;
+
+/// What has been read of a job so far.
+#[derive(Default)]
+struct Reading {
+    meta: Option<RawJobMeta>,
+    defaults: BTreeMap<&'static str, Given>,
+    bays: Vec<Bay>,
+    raw_bays: usize,
+}
+
+/// Read one parsed tree (the whole file, or one block of it) into `st`:
+/// `[job]`, `[defaults]` and unknown keys when `bays` is false, the bays
+/// when it is true.
+fn take(cx: &mut Ctx, root: &DeTable, st: &mut Reading, bays: bool) {
+    for (k, v) in root.iter() {
+        match (k.get_ref().as_ref(), bays) {
+            ("job", false) => st.meta = de::<RawJobMeta>(&mut cx.rep, v, "job"),
+            ("defaults", false) => match v.get_ref() {
+                DeValue::Table(t) => {
+                    st.defaults = walk(cx, t, "defaults", true).0;
+                    // a default that does not read is reported once, here,
+                    // and left out of every bay
+                    st.defaults.retain(|key, g| match find(key).map(|c| c.parse(&g.text)) {
+                        Some(Err(e)) => {
+                            cx.rep.error(Some(g.at.clone()), &join("defaults", key), e);
+                            false
+                        }
+                        _ => true,
+                    });
+                }
+                other => cx
+                    .rep
+                    .error(Some(v.span()), "defaults", format!("[defaults] must be a table; found {}", other.type_str())),
+            },
+            ("bay", true) => {
+                for t in tables(&mut cx.rep, v, "bay") {
+                    let index = st.raw_bays;
+                    st.raw_bays += 1;
+                    if let Some(b) = bay(cx, t, &st.defaults, index) {
+                        if st.bays.iter().any(|x| x.name == b.name) {
+                            let at = match t.get_ref() {
+                                DeValue::Table(tt) => tt.iter().find(|(k, _)| k.get_ref() == "name").map(|(_, v)| v.span()),
+                                _ => None,
+                            };
+                            cx.rep.error(at, &format!("bay '{}' / name", b.name), "duplicate bay name; each bay needs its own");
+                        }
+                        st.bays.push(b);
+                    }
+                }
+            }
+            ("job" | "defaults" | "bay", _) => {}
+            (other, false) => cx.rep.error(
+                Some(k.span()),
+                "",
+                format!(
+                    "unknown top-level key '{}'{}; allowed: {}",
+                    other.escape_debug(),
+                    suggestion(other, TOP_KEYS.iter().copied()),
+                    TOP_KEYS.join(", ")
+                ),
+            ),
+            (_, true) => {}
+        }
+    }
+}
+
+/// The job from what was read, or every problem found.
+fn finish(mut cx: Ctx, st: Reading, text: &str, start: usize) -> Result<Job, Problems> {
+    if st.meta.is_none() && !cx.rep.has_errors() {
+        cx.rep.error(Some(start..start), "job", "missing [job] table with at least project = \"…\"");
+    }
+    if st.raw_bays == 0 && !cx.rep.has_errors() {
+        cx.rep.error(Some(start..start), "bay", "the job has no bays; add at least one [[bay]] with name and span");
+    }
+    let Some(meta) = st.meta else {
+        return Err(Problems(cx.rep.finish()));
+    };
+    let project = cx.text(&Some(meta.project.clone()), "job", "project");
+    if project.trim().is_empty() {
+        cx.rep.error(span(&meta.project), "job / project", "is empty; give the project a name");
+    }
+    let engineer = cx.text(&meta.engineer, "job", "engineer");
+    let date = cx.text(&meta.date, "job", "date");
+    let code = match &meta.code {
+        Some(c) => cx.text(&Some(c.clone()), "job", "code"),
+        None => "ACI 318-19".to_string(),
+    };
+    let notes: Vec<String> = meta.notes.iter().flatten().map(|n| cx.text(&Some(n.clone()), "job", "notes")).collect();
+    let units = match &meta.units {
+        None => None,
+        Some(u) => match System::from_name(u.get_ref()) {
+            Some(s) => Some(s),
+            None => {
+                cx.rep.error(
+                    span(u),
+                    "job / units",
+                    format!("{} is not allowed; use one of: us, si", crate::criteria::quoted(u.get_ref())),
+                );
+                None
+            }
+        },
+    };
+    if cx.rep.has_errors() {
+        return Err(Problems(cx.rep.finish()));
+    }
+    Ok(Job {
+        project,
+        engineer,
+        date,
+        code,
+        notes,
+        units,
+        bays: st.bays,
+        hash: content_hash(text),
+        source: Some(text.to_string()),
+        typed: BTreeMap::new(),
+    })
+}
+
 impl Job {
     /// Read and validate the job at `path`.
     pub fn load(path: &std::path::Path) -> Result<Job, Problems> {
@@ -238,111 +359,59 @@ impl Job {
         Job::from_str(&text, &path.display().to_string())
     }
 
-    /// Validate job text; `file` names it in messages.
+    /// Validate job text; `file` names it in messages. A large job is
+    /// parsed one `[[bay]]` block at a time, so its parse tree is never held
+    /// whole (a 20 000-bay job stays within a few tens of MB); one that does
+    /// not split cleanly is parsed whole, with the same messages.
     pub fn from_str(text: &str, file: &str) -> Result<Job, Problems> {
+        if text.len() >= BLOCKS_ABOVE {
+            if let Some(r) = Job::from_blocks(text, file) {
+                return r;
+            }
+        }
         let (mut cx, root) = crate::input::parse(text, file)?;
-        let root_span = root.span();
+        let start = root.span().start;
         let root = root.into_inner();
-        let mut meta = None;
-        let mut defaults = BTreeMap::new();
-        let mut raw_bays = Vec::new();
-        for (k, v) in root.iter() {
-            match k.get_ref().as_ref() {
-                "job" => meta = de::<RawJobMeta>(&mut cx.rep, v, "job"),
-                "defaults" => match v.get_ref() {
-                    DeValue::Table(t) => {
-                        defaults = walk(&mut cx, t, "defaults", true).0;
-                        // a default that does not read is reported once,
-                        // here, and left out of every bay
-                        defaults.retain(|key, g| match find(key).map(|c| c.parse(&g.text)) {
-                            Some(Err(e)) => {
-                                cx.rep.error(Some(g.at.clone()), &join("defaults", key), e);
-                                false
-                            }
-                            _ => true,
-                        });
-                    }
-                    other => cx.rep.error(Some(v.span()), "defaults", format!("[defaults] must be a table; found {}", other.type_str())),
-                },
-                "bay" => raw_bays.extend(tables(&mut cx.rep, v, "bay")),
-                other => cx.rep.error(
-                    Some(k.span()),
-                    "",
-                    format!(
-                        "unknown top-level key '{}'{}; allowed: {}",
-                        other.escape_debug(),
-                        suggestion(other, TOP_KEYS.iter().copied()),
-                        TOP_KEYS.join(", ")
-                    ),
-                ),
+        let mut st = Reading::default();
+        // [job] and [defaults] first, wherever they stand in the file
+        take(&mut cx, &root, &mut st, false);
+        take(&mut cx, &root, &mut st, true);
+        finish(cx, st, text, start)
+    }
+
+    fn from_blocks(text: &str, file: &str) -> Option<Result<Job, Problems>> {
+        let mut bounds = vec![0];
+        let mut at = 0;
+        for line in text.split_inclusive('\n') {
+            if line.trim_end() == "[[bay]]" && at > 0 {
+                bounds.push(at);
             }
+            at += line.len();
         }
-        if meta.is_none() && !cx.rep.has_errors() {
-            cx.rep.error(
-                Some(root_span.start..root_span.start),
-                "job",
-                "missing [job] table with at least project = \"…\"",
-            );
+        bounds.push(text.len());
+        if bounds.len() < 3 {
+            return None;
         }
-        let mut bays: Vec<Bay> = Vec::new();
-        for (i, t) in raw_bays.iter().enumerate() {
-            if let Some(b) = bay(&mut cx, t, &defaults, i) {
-                if bays.iter().any(|x| x.name == b.name) {
-                    let at = match t.get_ref() {
-                        DeValue::Table(tt) => tt.iter().find(|(k, _)| k.get_ref() == "name").map(|(_, v)| v.span()),
-                        _ => None,
-                    };
-                    cx.rep.error(at, &format!("bay '{}' / name", b.name), "duplicate bay name; each bay needs its own");
-                }
-                bays.push(b);
+        let mut cx = Ctx {
+            rep: crate::input::diag::Reporter::new(file, text),
+        };
+        let mut st = Reading::default();
+        for (i, w) in bounds.windows(2).enumerate() {
+            let (root, errors) = DeTable::parse_recoverable(&text[w[0]..w[1]]);
+            if !errors.is_empty() {
+                return None;
             }
+            let root = root.into_inner();
+            // after the head, a block holds one bay and nothing else
+            if i > 0 && root.iter().any(|(k, _)| k.get_ref() != "bay") {
+                return None;
+            }
+            cx.rep.base = w[0];
+            take(&mut cx, &root, &mut st, false);
+            take(&mut cx, &root, &mut st, true);
         }
-        if raw_bays.is_empty() && !cx.rep.has_errors() {
-            cx.rep.error(
-                Some(root_span.start..root_span.start),
-                "bay",
-                "the job has no bays; add at least one [[bay]] with name and span",
-            );
-        }
-        let Some(meta) = meta else {
-            return Err(Problems(cx.rep.finish()));
-        };
-        let project = cx.text(&Some(meta.project.clone()), "job", "project");
-        if project.trim().is_empty() {
-            cx.rep.error(span(&meta.project), "job / project", "is empty; give the project a name");
-        }
-        let engineer = cx.text(&meta.engineer, "job", "engineer");
-        let date = cx.text(&meta.date, "job", "date");
-        let code = match &meta.code {
-            Some(c) => cx.text(&Some(c.clone()), "job", "code"),
-            None => "ACI 318-19".to_string(),
-        };
-        let notes: Vec<String> = meta.notes.iter().flatten().map(|n| cx.text(&Some(n.clone()), "job", "notes")).collect();
-        let units = match &meta.units {
-            None => None,
-            Some(u) => match System::from_name(u.get_ref()) {
-                Some(s) => Some(s),
-                None => {
-                    cx.rep.error(span(u), "job / units", format!("'{}' is not allowed; use one of: us, si", u.get_ref().escape_debug()));
-                    None
-                }
-            },
-        };
-        if cx.rep.has_errors() {
-            return Err(Problems(cx.rep.finish()));
-        }
-        Ok(Job {
-            project,
-            engineer,
-            date,
-            code,
-            notes,
-            units,
-            bays,
-            hash: content_hash(text),
-            source: Some(text.to_string()),
-            typed: BTreeMap::new(),
-        })
+        cx.rep.base = 0;
+        Some(finish(cx, st, text, 0))
     }
 
     /// One empty bay in a catalog's units, for a catalog opened without a

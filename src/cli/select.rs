@@ -502,18 +502,21 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     // refused before any work: an input, not a regular file, or there already
     plankwise::files::writable(&a.output, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
-    // each bay ranked as the writer comes to it: one ranking held at a time
+    // each bay ranked as the writer comes to it, straight into the file:
+    // one ranking held at a time
     let mut none: Vec<String> = Vec::new();
-    let mut buf = Vec::new();
-    shortlist::write_each(&mut buf, format, &job, &cat, a.top as usize, &mut |_, bay| {
-        let r = rank_bay(&cat, bay, None);
-        if r.viable.is_empty() {
-            none.push(bay.name.clone());
-        }
-        r
-    })?;
-    plankwise::files::write_safely(&a.output, &buf, &inputs, a.force)
+    let real = plankwise::files::writable(&a.output, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
+    plankwise::files::write_atomic_with(&real, |mut w| {
+        shortlist::write_each(&mut w, format, &job, &cat, a.top as usize, &mut |_, bay| {
+            let r = rank_bay(&cat, bay, None);
+            if r.viable.is_empty() {
+                none.push(bay.name.clone());
+            }
+            r
+        })
+    })
+    .map_err(|e| Failure::Message(format!("-o: '{}' cannot be written: {e}", a.output.display())))?;
     eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
     if !none.is_empty() {
         eprintln!("plankwise: no viable member for: {}", none.join(", "));

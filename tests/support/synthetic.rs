@@ -31,3 +31,19 @@ pub fn catalog(sections: usize, patterns: usize) -> String {
     }
     s
 }
+
+/// A job of `bays` bays for the demo catalog: hollow-core floors of varied
+/// span and load (the streaming target: 20 000 bays in ≤ 50 MB).
+#[allow(dead_code)]
+pub fn job(bays: usize) -> String {
+    let mut s = String::from("[job]\nproject = \"synthetic job\"\n\n[defaults]\nfamilies = [\"hollow-core\"]\n");
+    for i in 0..bays {
+        s.push_str(&format!(
+            "\n[[bay]]\nname = \"Bay {i}\"\nspan = \"{} ft\"\nsdl = \"{} psf\"\nlive = \"{} psf\"\n",
+            16 + i % 20,
+            10 + i % 15,
+            40 + (i % 4) * 20
+        ));
+    }
+    s
+}
