@@ -14,10 +14,10 @@ use std::path::Path;
 
 use serde::Serialize;
 
+pub use crate::input::diag::{self, Problem, Problems, Severity};
 use crate::material::{Mix, StrandKind};
 use crate::section::{DoubleTee, Family, Generic, Geometry, HollowCore, Properties};
 use crate::units::{Area, Length, PricePerArea, Stress};
-pub use crate::input::diag::{self, Problem, Problems, Severity};
 
 /// Largest catalog or job file plankwise reads, bytes (16 MiB); a 10 000-entry
 /// catalog is a few MB.
@@ -356,7 +356,11 @@ pub fn written_in(text: &str) -> crate::units::System {
     let count = |units: &[&str]| -> usize { units.iter().map(|u| text.matches(&format!(" {u}\"")).count()).sum() };
     let si = count(&["mm", "MPa", "kg/m3", "kPa", "m", "kN/m", "mm2"]);
     let us = count(&["in", "psi", "pcf", "ft", "psf", "ksi", "in2", "klf"]);
-    if si > us { crate::units::System::Si } else { crate::units::System::Us }
+    if si > us {
+        crate::units::System::Si
+    } else {
+        crate::units::System::Us
+    }
 }
 
 /// Read a UTF-8 text file of bounded size, as a problem list on failure.

@@ -6,9 +6,9 @@ use std::path::PathBuf;
 use clap::{Parser, Subcommand};
 use serde::Serialize;
 
-use plankwise::input::diag::suggestion;
 use plankwise::catalog::{Catalog, DEMO_US, Problems, SectionSummary, Severity};
 use plankwise::checks::{Candidate, evaluate};
+use plankwise::input::diag::suggestion;
 use plankwise::report;
 use plankwise::section::Composite;
 use plankwise::units::Length;
@@ -193,7 +193,11 @@ fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool
             return Err(Failure::Message(format!(
                 "--job '{}' is not read {}; rank it with: plankwise rank{} --job {}",
                 j.display(),
-                if summary { "with --summary, which prints the catalog" } else { "when the output is not a terminal (the UI cannot open)" },
+                if summary {
+                    "with --summary, which prints the catalog"
+                } else {
+                    "when the output is not a terminal (the UI cannot open)"
+                },
                 catalog.map_or(String::new(), |c| format!(" {}", c.display())),
                 j.display()
             )));

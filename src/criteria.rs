@@ -217,7 +217,10 @@ pub const CRITERIA: &[Criterion] = &[
         label: "Dead (SDL)",
         flag: Some("sdl"),
         help: "superimposed dead load",
-        form: Form::Quantity { q: LOAD, range: LOAD_RANGE },
+        form: Form::Quantity {
+            q: LOAD,
+            range: LOAD_RANGE,
+        },
         default: "0 psf",
         required: false,
         inherit: false,
@@ -230,7 +233,10 @@ pub const CRITERIA: &[Criterion] = &[
         label: "Live",
         flag: Some("live"),
         help: "live load (L)",
-        form: Form::Quantity { q: LOAD, range: LOAD_RANGE },
+        form: Form::Quantity {
+            q: LOAD,
+            range: LOAD_RANGE,
+        },
         default: "0 psf",
         required: false,
         inherit: false,
@@ -243,7 +249,10 @@ pub const CRITERIA: &[Criterion] = &[
         label: "Roof live",
         flag: Some("roof-live"),
         help: "roof live load (Lr)",
-        form: Form::Quantity { q: LOAD, range: LOAD_RANGE },
+        form: Form::Quantity {
+            q: LOAD,
+            range: LOAD_RANGE,
+        },
         default: "0 psf",
         required: false,
         inherit: false,
@@ -256,7 +265,10 @@ pub const CRITERIA: &[Criterion] = &[
         label: "Snow",
         flag: Some("snow"),
         help: "snow load (S)",
-        form: Form::Quantity { q: LOAD, range: LOAD_RANGE },
+        form: Form::Quantity {
+            q: LOAD,
+            range: LOAD_RANGE,
+        },
         default: "0 psf",
         required: false,
         inherit: false,
@@ -385,13 +397,7 @@ pub const CRITERIA: &[Criterion] = &[
         inherit: true,
         units: ("", ""),
         get: |b| Value::Pick(if b.case.exposure == Exposure::Weather { 1 } else { 0 }),
-        set: |b, v| {
-            b.case.exposure = if pick(&v) == 1 {
-                Exposure::Weather
-            } else {
-                Exposure::Interior
-            }
-        },
+        set: |b, v| b.case.exposure = if pick(&v) == 1 { Exposure::Weather } else { Exposure::Interior },
     },
     Criterion {
         key: "attached",
@@ -634,10 +640,7 @@ pub fn line_load(w: &str, at: &str, kind: Option<&str>, span: Length) -> Result<
     }
     let a = Length::parse(at).map_err(|e| ("at", e.to_string()))?;
     if a.get() < 0.0 || a.get() > span.get() + 1e-9 {
-        return Err((
-            "at",
-            format!("{} is not within the {} span", quoted(at.trim()), fmt_ft_in(span)),
-        ));
+        return Err(("at", format!("{} is not within the {} span", quoted(at.trim()), fmt_ft_in(span))));
     }
     let kind = match kind {
         None => crate::case::LoadKind::Dead,
@@ -765,10 +768,7 @@ impl Criterion {
                 if crate::fire::RATINGS.iter().any(|r| (r - h).abs() < 1e-9) {
                     Ok(Value::Num(Some(h)))
                 } else {
-                    Err(format!(
-                        "{} is not a tabulated rating; use none, 1, 1.5, 2, 3 or 4 h",
-                        quoted(t)
-                    ))
+                    Err(format!("{} is not a tabulated rating; use none, 1, 1.5, 2, 3 or 4 h", quoted(t)))
                 }
             }
             Form::QuantityList { q, range } => {
@@ -801,7 +801,11 @@ impl Criterion {
                         choices.join(", ")
                     ));
                 }
-                parts.into_iter().map(|p| choose(p, choices)).collect::<Result<Vec<_>, _>>().map(Value::Picks)
+                parts
+                    .into_iter()
+                    .map(|p| choose(p, choices))
+                    .collect::<Result<Vec<_>, _>>()
+                    .map(Value::Picks)
             }
             Form::Text => {
                 let t = text.trim();
@@ -915,7 +919,11 @@ impl Criterion {
                 trim_number(range.lo, 6),
                 trim_number(range.hi, 6),
                 range.unit,
-                if !self.required && self.default.is_empty() { ", or none" } else { "" }
+                if !self.required && self.default.is_empty() {
+                    ", or none"
+                } else {
+                    ""
+                }
             ),
             Form::Number { range } => format!(
                 "a number from {} to {} {}",
@@ -1008,7 +1016,11 @@ mod tests {
             span.parse("250 ft").unwrap_err(),
             "'250 ft' is outside the allowed range 2 to 200 ft"
         );
-        assert!(span.parse("20 psf").unwrap_err().contains("is an area load, but a length is needed"));
+        assert!(
+            span.parse("20 psf")
+                .unwrap_err()
+                .contains("is an area load, but a length is needed")
+        );
         let class = find("class").unwrap();
         assert_eq!(class.parse("u").unwrap(), Value::Pick(0));
         assert!(class.parse("X").unwrap_err().contains("use one of: U, T, C"));
@@ -1025,7 +1037,10 @@ mod tests {
     fn a_value_keeps_the_unit_its_user_typed() {
         assert_eq!(format_like(Quantity::Length, 372.0, "30 ft 6 in").unwrap(), "31 ft");
         assert_eq!(format_like(Quantity::Length, 366.5, "30'-6\"").unwrap(), "30'-6 1/2\"");
-        assert_eq!(format_like(Quantity::AreaLoad, 2.4 / 6.894757293168361, "2.0 kPa").unwrap(), "2.4 kPa");
+        assert_eq!(
+            format_like(Quantity::AreaLoad, 2.4 / 6.894757293168361, "2.0 kPa").unwrap(),
+            "2.4 kPa"
+        );
         assert_eq!(format_like(Quantity::Length, 120.0, "3.5 m").unwrap(), "3.048 m");
     }
 }

@@ -132,15 +132,17 @@ pub fn writable(path: &Path, inputs: &[&Path], force: bool) -> Result<PathBuf, R
         Err(e) if e.kind() == io::ErrorKind::NotFound => {
             let dir = path.parent().filter(|d| !d.as_os_str().is_empty()).unwrap_or(Path::new("."));
             if !dir.is_dir() {
-                return Err(Refusal::No(format!("cannot be written: its folder '{}' does not exist", dir.display())));
+                return Err(Refusal::No(format!(
+                    "cannot be written: its folder '{}' does not exist",
+                    dir.display()
+                )));
             }
             Ok(path.to_path_buf())
         }
         Err(e) => Err(Refusal::No(format!("cannot be written: {e}"))),
         Ok(link) => {
-            let meta = fs::metadata(path).map_err(|_| {
-                Refusal::No("is a symbolic link to nothing; plankwise writes only regular files".into())
-            })?;
+            let meta =
+                fs::metadata(path).map_err(|_| Refusal::No("is a symbolic link to nothing; plankwise writes only regular files".into()))?;
             if !meta.file_type().is_file() {
                 let what = kind_of(meta.file_type());
                 let via = if link.file_type().is_symlink() { "a symbolic link to " } else { "" };

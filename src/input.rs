@@ -91,7 +91,11 @@ impl Ctx<'_> {
         let v = self.opt_q::<crate::units::PriceK>(s, path, "price")?;
         if let (Some(p), Some(s)) = (v, s) {
             if p.get() < 0.0 {
-                self.rep.error(span(s), &join(path, "price"), format!("'{}' is negative; a price is 0 or more", s.get_ref()));
+                self.rep.error(
+                    span(s),
+                    &join(path, "price"),
+                    format!("'{}' is negative; a price is 0 or more", s.get_ref()),
+                );
                 return None;
             }
         }
@@ -133,11 +137,7 @@ impl Ctx<'_> {
                     self.rep.error(
                         span(s),
                         &join(path, field),
-                        format!(
-                            "is {} characters long; at most {} allowed",
-                            s.get_ref().chars().count(),
-                            TEXT_CHARS
-                        ),
+                        format!("is {} characters long; at most {} allowed", s.get_ref().chars().count(), TEXT_CHARS),
                     );
                 }
                 s.get_ref().clone()
@@ -169,7 +169,6 @@ impl Ctx<'_> {
         }
         id.clone()
     }
-
 }
 
 pub(crate) fn join(path: &str, field: &str) -> String {
@@ -294,4 +293,3 @@ pub(crate) fn parse<'t>(text: &'t str, file: &str) -> Result<(Ctx<'t>, Spanned<D
     }
     Ok((cx, root))
 }
-

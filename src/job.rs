@@ -103,7 +103,12 @@ fn text_of(form: Form, v: &Spanned<DeValue>) -> Result<String, String> {
 /// The criteria a table gives, by key, and its other keys; unknown keys
 /// are reported with the nearest allowed one.
 #[allow(clippy::type_complexity)]
-fn walk<'t, 'a>(cx: &mut Ctx, t: &'t DeTable<'a>, path: &str, defaults: bool) -> (BTreeMap<&'static str, Given>, Vec<(String, &'t Spanned<DeValue<'a>>)>) {
+fn walk<'t, 'a>(
+    cx: &mut Ctx,
+    t: &'t DeTable<'a>,
+    path: &str,
+    defaults: bool,
+) -> (BTreeMap<&'static str, Given>, Vec<(String, &'t Spanned<DeValue<'a>>)>) {
     let allowed: Vec<&str> = CRITERIA
         .iter()
         .filter(|c| !defaults || c.inherit)
@@ -150,6 +155,8 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
     let (own, extra) = walk(cx, t, &name, false);
     let mut b = Bay::new("", Length::new(0.0));
     let mut ok = true;
+    // whether the span read: the line loads' places depend on it
+    let mut span_ok = true;
     for c in CRITERIA {
         let given = own.get(c.key).or_else(|| defaults.get(c.key));
         match given {
@@ -157,10 +164,15 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
                 if let Err(e) = c.apply(&mut b, &g.text) {
                     cx.rep.error(Some(g.at.clone()), &join(&name, c.key), e);
                     ok = false;
+                    span_ok &= c.key != "span";
                 }
             }
             None if c.required => {
-                cx.rep.error(Some(table.span().start..table.span().start), &join(&name, c.key), format!("missing key '{}': {}", c.key, c.help));
+                cx.rep.error(
+                    Some(table.span().start..table.span().start),
+                    &join(&name, c.key),
+                    format!("missing key '{}': {}", c.key, c.help),
+                );
                 ok = false;
             }
             None if !c.default.is_empty() => {
@@ -173,7 +185,11 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
         match key.as_str() {
             "line" => {
                 let DeValue::Array(items) = v.get_ref() else {
-                    cx.rep.error(Some(v.span()), &join(&name, "line"), "a list of tables is needed, e.g. [{ w = \"0.6 klf\", at = \"8 ft\" }]");
+                    cx.rep.error(
+                        Some(v.span()),
+                        &join(&name, "line"),
+                        "a list of tables is needed, e.g. [{ w = \"0.6 klf\", at = \"8 ft\" }]",
+                    );
                     ok = false;
                     continue;
                 };
@@ -187,17 +203,27 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
                     let field = |f: &str| lt.iter().find(|(k, _)| k.get_ref() == f).map(|(_, v)| v);
                     for (k, _) in lt.iter() {
                         if !["w", "at", "kind"].contains(&k.get_ref().as_ref()) {
-                            cx.rep.error(Some(k.span()), &lp, format!("unknown key '{}'; allowed here: w, at, kind", k.get_ref()));
+                            cx.rep.error(
+                                Some(k.span()),
+                                &lp,
+                                format!("unknown key '{}'; allowed here: w, at, kind", k.get_ref()),
+                            );
                             ok = false;
                         }
                     }
                     let text = |f: &str| field(f).and_then(|v| v.get_ref().as_str());
                     let (Some(w), Some(at)) = (text("w"), text("at")) else {
-                        cx.rep.error(Some(item.span()), &lp, "needs w (a line load, e.g. \"0.6 klf\") and at (a length from the left support) as quoted strings");
+                        cx.rep.error(
+                            Some(item.span()),
+                            &lp,
+                            "needs w (a line load, e.g. \"0.6 klf\") and at (a length from the left support) as quoted strings",
+                        );
                         ok = false;
                         continue;
                     };
-                    match line_load(w, at, text("kind"), b.case.span) {
+                    // with no span to measure against, the place is not judged
+                    let span = if span_ok { b.case.span } else { Length::new(f64::INFINITY) };
+                    match line_load(w, at, text("kind"), span) {
                         Ok(l) => b.case.line_loads.push(l),
                         Err((f, e)) => {
                             let at = field(f).map_or(item.span(), |v| v.span());
@@ -221,7 +247,11 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
                     }
                 }
                 _ => {
-                    cx.rep.error(Some(v.span()), &join(&name, "marked"), "a list of entry labels is needed, e.g. [\"plank-8 / 6x1/2\"]");
+                    cx.rep.error(
+                        Some(v.span()),
+                        &join(&name, "marked"),
+                        "a list of entry labels is needed, e.g. [\"plank-8 / 6x1/2\"]",
+                    );
                     ok = false;
                 }
             },
@@ -263,9 +293,11 @@ fn take(cx: &mut Ctx, root: &DeTable, st: &mut Reading, bays: bool) {
                         _ => true,
                     });
                 }
-                other => cx
-                    .rep
-                    .error(Some(v.span()), "defaults", format!("[defaults] must be a table; found {}", other.type_str())),
+                other => cx.rep.error(
+                    Some(v.span()),
+                    "defaults",
+                    format!("[defaults] must be a table; found {}", other.type_str()),
+                ),
             },
             ("bay", true) => {
                 for t in tables(&mut cx.rep, v, "bay") {
@@ -277,7 +309,11 @@ fn take(cx: &mut Ctx, root: &DeTable, st: &mut Reading, bays: bool) {
                                 DeValue::Table(tt) => tt.iter().find(|(k, _)| k.get_ref() == "name").map(|(_, v)| v.span()),
                                 _ => None,
                             };
-                            cx.rep.error(at, &format!("bay '{}' / name", b.name), "duplicate bay name; each bay needs its own");
+                            cx.rep.error(
+                                at,
+                                &format!("bay '{}' / name", b.name),
+                                "duplicate bay name; each bay needs its own",
+                            );
                         }
                         st.bays.push(b);
                     }
@@ -302,17 +338,23 @@ fn take(cx: &mut Ctx, root: &DeTable, st: &mut Reading, bays: bool) {
 /// The job from what was read, or every problem found.
 fn finish(mut cx: Ctx, st: Reading, text: &str, start: usize) -> Result<Job, Problems> {
     if st.meta.is_none() && !cx.rep.has_errors() {
-        cx.rep.error(Some(start..start), "job", "missing [job] table with at least project = \"…\"");
+        cx.rep
+            .error(Some(start..start), "job", "missing [job] table with at least project = \"…\"");
     }
     if st.raw_bays == 0 && !cx.rep.has_errors() {
-        cx.rep.error(Some(start..start), "bay", "the job has no bays; add at least one [[bay]] with name and span");
+        cx.rep.error(
+            Some(start..start),
+            "bay",
+            "the job has no bays; add at least one [[bay]] with name and span",
+        );
     }
     let Some(meta) = st.meta else {
         return Err(Problems(cx.rep.finish()));
     };
     let project = cx.text(&Some(meta.project.clone()), "job", "project");
     if project.trim().is_empty() {
-        cx.rep.error(span(&meta.project), "job / project", "is empty; give the project a name");
+        cx.rep
+            .error(span(&meta.project), "job / project", "is empty; give the project a name");
     }
     let engineer = cx.text(&meta.engineer, "job", "engineer");
     let date = cx.text(&meta.date, "job", "date");
@@ -320,7 +362,12 @@ fn finish(mut cx: Ctx, st: Reading, text: &str, start: usize) -> Result<Job, Pro
         Some(c) => cx.text(&Some(c.clone()), "job", "code"),
         None => "ACI 318-19".to_string(),
     };
-    let notes: Vec<String> = meta.notes.iter().flatten().map(|n| cx.text(&Some(n.clone()), "job", "notes")).collect();
+    let notes: Vec<String> = meta
+        .notes
+        .iter()
+        .flatten()
+        .map(|n| cx.text(&Some(n.clone()), "job", "notes"))
+        .collect();
     let units = match &meta.units {
         None => None,
         Some(u) => match System::from_name(u.get_ref()) {
@@ -418,7 +465,11 @@ impl Job {
     /// job: 30 ft (9 m in SI), no loads, every criterion at its default.
     pub fn empty_for(cat: &crate::catalog::Catalog) -> Job {
         let sys = cat.units();
-        let span = if sys == System::Si { Length::from_unit(9.0, "m") } else { Length::from_unit(30.0, "ft") };
+        let span = if sys == System::Si {
+            Length::from_unit(9.0, "m")
+        } else {
+            Length::from_unit(30.0, "ft")
+        };
         let mut job = Job::single("New job", Bay::new("Bay 1", span));
         job.units = Some(sys);
         job
@@ -470,7 +521,6 @@ mod tests {
         assert!(s.contains("'lightst' is not allowed (did you mean 'lightest'?)"), "{s}");
     }
 }
-
 
 /// A criterion's text as a TOML value of the type its form takes.
 fn toml_value(c: &Criterion, text: &str) -> toml_edit::Value {
@@ -553,7 +603,11 @@ impl Job {
         let defaults: BTreeMap<String, String> = doc
             .get("defaults")
             .and_then(|d| d.as_table_like())
-            .map(|t| t.iter().filter_map(|(k, v)| v.as_str().map(|s| (k.to_string(), s.to_string()))).collect())
+            .map(|t| {
+                t.iter()
+                    .filter_map(|(k, v)| v.as_str().map(|s| (k.to_string(), s.to_string())))
+                    .collect()
+            })
             .unwrap_or_default();
         if self.units != was.units {
             if let (Some(u), Some(job)) = (self.units, doc.get_mut("job").and_then(|j| j.as_table_mut())) {
@@ -612,9 +666,9 @@ impl Job {
             for c in CRITERIA {
                 let v = c.value(b);
                 let default = if c.default.is_empty() { None } else { c.parse(c.default).ok() };
-                let absent = matches!(v, Value::Num(None) | Value::Count(None) | Value::Text(None))
-                    || matches!(&v, Value::Picks(p) if p.is_empty());
-                if (Some(&v) == default.as_ref() && !c.required) || (absent && !c.required) {
+                let absent =
+                    matches!(v, Value::Num(None) | Value::Count(None) | Value::Text(None)) || matches!(&v, Value::Picks(p) if p.is_empty());
+                if !c.required && (Some(&v) == default.as_ref() || absent) {
                     continue;
                 }
                 t.insert(c.key, toml_edit::Item::Value(toml_value(c, &c.write(b, None, sys))));

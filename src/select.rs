@@ -8,10 +8,10 @@ use std::cmp::Ordering;
 
 use serde::Serialize;
 
+use crate::bay::{Bay, Objective};
 use crate::case::{DesignCase, Topping};
 use crate::catalog::{Catalog, Pattern, Section};
 use crate::checks::{Candidate, Evaluation, Verdict, evaluate_brief};
-use crate::bay::{Bay, Objective};
 use crate::material::{Aggregate, Mix, Modulus};
 use crate::units::{Length, Stress, UnitWeight};
 

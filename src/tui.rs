@@ -13,9 +13,9 @@ use std::sync::Arc;
 use fuzzy_matcher::FuzzyMatcher;
 use fuzzy_matcher::skim::SkimMatcherV2;
 
+use crate::bay::Bay;
 use crate::catalog::Catalog;
 use crate::checks::Evaluation;
-use crate::bay::Bay;
 use crate::job::Job;
 use crate::report::shortlist::Format;
 use crate::section::Family;

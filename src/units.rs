@@ -531,7 +531,11 @@ impl System {
 /// that many places).
 pub fn trim_number(v: f64, places: usize) -> String {
     let s = format!("{v:.places$}");
-    let s = if s.contains('.') { s.trim_end_matches('0').trim_end_matches('.') } else { &s };
+    let s = if s.contains('.') {
+        s.trim_end_matches('0').trim_end_matches('.')
+    } else {
+        &s
+    };
     if s == "-0" { "0".into() } else { s.to_string() }
 }
 
@@ -694,7 +698,10 @@ mod tests {
         }
         assert!(Length::parse("30 ft -6 in").is_err());
         let e = Length::parse("30 ft 99 in").unwrap_err().to_string();
-        assert_eq!(e, "'30 ft 99 in' is not a well-formed length: 99 in is a whole ft or more; write e.g. '30 ft 6 in'");
+        assert_eq!(
+            e,
+            "'30 ft 99 in' is not a well-formed length: 99 in is a whole ft or more; write e.g. '30 ft 6 in'"
+        );
         assert!(Duration::parse("1 h 90 min").is_err());
         assert_relative_eq!(Duration::parse("1 h 30 min").unwrap().get(), 1.5);
     }

@@ -129,7 +129,10 @@ fn a_20_mb_file_is_refused() {
     let mut bytes = b"[catalog]\nname = \"big\"\n".to_vec();
     bytes.resize(20_000_000, b'#');
     let stderr = refuse("big.toml", &bytes);
-    assert!(stderr.contains("big.toml: error: is larger than 16 MB; plankwise reads files of at most that size"), "{stderr}");
+    assert!(
+        stderr.contains("big.toml: error: is larger than 16 MB; plankwise reads files of at most that size"),
+        "{stderr}"
+    );
 }
 
 #[test]
@@ -196,4 +199,62 @@ fn every_broken_job_is_refused_with_its_message() {
         n += 1;
     }
     assert!(n >= 20, "{n}");
+}
+
+/// Every problem at once, within one entry too: the fields that do not
+/// depend on a failed one are still checked, each with its location; a
+/// field that depends on a failed one (a line load's place on a bad span)
+/// is not judged.
+#[test]
+fn every_independent_field_of_an_entry_is_checked() {
+    let dir = std::env::temp_dir().join(format!("plankwise-multi-{}", std::process::id()));
+    let _ = fs::remove_dir_all(&dir);
+    fs::create_dir_all(&dir).unwrap();
+    fs::write(
+        dir.join("cat.toml"),
+        "[catalog]\nname = \"multi\"\n[[mix]]\nid = \"m\"\nfc = \"50000 psi\"\nfci = \"3500 ft\"\nunit_weight = \"300 pcf\"\naggregate = \"carbonat\"\n[[section]]\nid = \"s\"\nmix = \"m\"\nprice = \"-3 /ft2\"\n[section.hollow_core]\nwidth = \"48 in\"\ndepth = \"8 in 9 in\"\ncores = { shape = \"circle\", count = 6, diameter = \"5.5 in\", spacing = \"7.5 in\" }\n[[section.pattern]]\nid = \"p\"\nstrand = \"1/2 in\"\njacking = 0.99\nrow = [{ count = 6, height = \"1.75 in\" }]\n",
+    )
+    .unwrap();
+    let out = Command::new(bin())
+        .args(["validate", "cat.toml"])
+        .current_dir(&dir)
+        .output()
+        .unwrap();
+    let err = String::from_utf8_lossy(&out.stderr);
+    for frag in [
+        "cat.toml:5:6: error: mix 'm' / fc:",
+        "cat.toml:6:7: error: mix 'm' / fci:",
+        "cat.toml:7:15: error: mix 'm' / unit_weight:",
+        "cat.toml:8:13: error: mix 'm' / aggregate:",
+        "cat.toml:12:9: error: section 's' / price:",
+        "cat.toml:15:9: error: section 's' / hollow_core / depth:",
+        "cat.toml:20:11: error: section 's' / pattern 'p' / jacking:",
+    ] {
+        assert!(err.contains(frag), "missing '{frag}' in:\n{err}");
+    }
+    fs::write(
+        dir.join("job.toml"),
+        "[job]\nproject = \"p\"\n[[bay]]\nname = \"b\"\nspan = \"900 ft\"\nlive = \"-5 psf\"\nclass = \"X\"\nhumidity = 5\nline = [{ w = \"1 klf\", at = \"2000 ft\" }]\n",
+    )
+    .unwrap();
+    let out = Command::new(bin())
+        .args(["rank", "--job", "job.toml"])
+        .current_dir(&dir)
+        .output()
+        .unwrap();
+    let err = String::from_utf8_lossy(&out.stderr);
+    assert_eq!(out.status.code(), Some(2));
+    for frag in [
+        "job.toml:5:8: error: bay 'b' / span:",
+        "job.toml:6:8: error: bay 'b' / live:",
+        "job.toml:7:9: error: bay 'b' / class:",
+        "job.toml:8:12: error: bay 'b' / humidity:",
+    ] {
+        assert!(err.contains(frag), "missing '{frag}' in:\n{err}");
+    }
+    assert!(
+        !err.contains("line 1 / at"),
+        "a line load's place is not judged on a span that did not read:\n{err}"
+    );
+    fs::remove_dir_all(&dir).unwrap();
 }

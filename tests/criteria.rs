@@ -54,7 +54,11 @@ fn quote(s: &str) -> String {
 
 fn job_with(c: &Criterion, text: &str) -> String {
     let name = if c.key == "name" { String::new() } else { "name = \"b\"\n".into() };
-    let span = if c.key == "span" { String::new() } else { "span = \"20 ft\"\n".into() };
+    let span = if c.key == "span" {
+        String::new()
+    } else {
+        "span = \"20 ft\"\n".into()
+    };
     format!("[job]\nproject = \"p\"\n\n[[bay]]\n{name}{span}{} = {}\n", c.key, toml(c, text))
 }
 
@@ -101,7 +105,11 @@ fn every_criterion_reads_the_same_through_all_four_routes() {
                 args.extend([f.as_str(), bad.as_str()]);
                 let (code, err) = cli(&args);
                 assert_eq!(code, 2, "{}: {err}", c.key);
-                assert!(err.contains(&format!("--{flag}: {want}")), "{}: the flag said\n{err}\nnot\n{want}", c.key);
+                assert!(
+                    err.contains(&format!("--{flag}: {want}")),
+                    "{}: the flag said\n{err}\nnot\n{want}",
+                    c.key
+                );
             }
             // 3. the UI editor (criteria typed as text)
             if !App::field_cycles(i) {
@@ -143,7 +151,10 @@ fn every_criterion_reads_the_same_through_all_four_routes() {
             let back = Job::from_str(&text, "written.toml").unwrap_or_else(|e| panic!("{}: {e}\n{text}", c.key));
             assert!(same(&c.value(&back.bays[0]), &v), "{} ({sys:?}) wrote\n{text}", c.key);
         }
-        let mut edited = Job::from_str(&job_with(c, &c.show(&Bay::new("b", Length::from_unit(20.0, "ft")), System::Us)), "j.toml");
+        let mut edited = Job::from_str(
+            &job_with(c, &c.show(&Bay::new("b", Length::from_unit(20.0, "ft")), System::Us)),
+            "j.toml",
+        );
         if let Ok(j) = &mut edited {
             c.set(&mut j.bays[0], v.clone());
             let text = j.save_text(System::Us);
@@ -166,7 +177,11 @@ fn saving_a_job_changes_only_the_edited_line() {
     let (a, b): (Vec<&str>, Vec<&str>) = (original.lines().collect(), saved.lines().collect());
     assert_eq!(a.len(), b.len(), "{saved}");
     let diff: Vec<(&str, &str)> = a.iter().zip(&b).filter(|(x, y)| x != y).map(|(x, y)| (*x, *y)).collect();
-    assert_eq!(diff, vec![("span = \"30 ft 6 in\"   # grid A–B", "span = \"31 ft 6 in\"   # grid A–B")], "{saved}");
+    assert_eq!(
+        diff,
+        vec![("span = \"30 ft 6 in\"   # grid A–B", "span = \"31 ft 6 in\"   # grid A–B")],
+        "{saved}"
+    );
     // a typed value keeps the unit it was typed in
     let mut job = Job::from_str(original, "j.toml").unwrap();
     plankwise::criteria::find("live").unwrap().apply(&mut job.bays[0], "3 kPa").unwrap();

@@ -289,3 +289,56 @@ row = [{{ count = 7, height = "{}" }}]
     }
     assert!((ea.camber.camber_final_in - eb.camber.camber_final_in).abs() <= 1e-9 * ea.camber.camber_final_in.abs());
 }
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 256, .. ProptestConfig::default() })]
+
+    /// Every quantity plankwise prints reads back to the same value: the
+    /// feet–inch form (to 1/16 in), and each criterion's display in either
+    /// system — printed again, it prints the same text, and it lies within
+    /// half a printed step of the value.
+    #[test]
+    fn printed_quantities_read_back(ft in 0.0f64..400.0, k in 0usize..64, x in 0.0f64..1.0) {
+        use plankwise::criteria::{CRITERIA, Form, Value};
+        use plankwise::units::{System, fmt_ft_in};
+        let l = Length::from_unit(ft, "ft");
+        let text = fmt_ft_in(l);
+        let back = Length::parse(&text).unwrap();
+        prop_assert!((back.get() - l.get()).abs() <= 1.0 / 32.0 + 1e-9, "{text}");
+        prop_assert_eq!(fmt_ft_in(back), text);
+        let quantities: Vec<_> = CRITERIA.iter().filter(|c| matches!(c.form, Form::Quantity { .. } | Form::Number { .. })).collect();
+        let c = quantities[k % quantities.len()];
+        let (lo, hi) = match c.form {
+            Form::Quantity { range, .. } | Form::Number { range } => (range.lo, range.hi),
+            _ => unreachable!(),
+        };
+        let mut b = plankwise::bay::Bay::new("b", Length::from_unit(20.0, "ft"));
+        // a value inside the range, in the range's own unit
+        let probe = match c.form {
+            Form::Quantity { q, range } => {
+                let one = q.parse(&format!("1 {}", range.unit)).unwrap();
+                one * (lo + x * (hi - lo))
+            }
+            _ => lo + x * (hi - lo),
+        };
+        c.set(&mut b, Value::Num(Some(probe)));
+        for sys in [System::Us, System::Si] {
+            let shown = c.show(&b, sys);
+            let v = c.parse(&shown).map_err(|e| TestCaseError::fail(format!("{}: '{shown}': {e}", c.key)))?;
+            let mut b2 = b.clone();
+            c.set(&mut b2, v.clone());
+            prop_assert_eq!(c.show(&b2, sys), shown.clone(), "{}", c.key);
+            if let (Value::Num(Some(a)), Value::Num(Some(p))) = (v, Value::Num(Some(probe))) {
+                // the printed step: 1/16 in for feet–inch, else the last place shown
+                let places = shown.split_whitespace().next().and_then(|n| n.split_once('.')).map_or(0, |(_, f)| f.len());
+                let step = if shown.contains('\'') { 1.0 / 16.0 } else {
+                    let unit = shown.split_whitespace().nth(1).unwrap_or("");
+                    let q = match c.form { Form::Quantity { q, .. } => Some(q), _ => None };
+                    let base = q.map_or(1.0, |q| q.parse(&format!("1 {unit}")).unwrap());
+                    base * 10f64.powi(-(places as i32))
+                };
+                prop_assert!((a - p).abs() <= step / 2.0 * (1.0 + 1e-9) + 1e-12, "{}: {p} printed '{shown}' reads {a}", c.key);
+            }
+        }
+    }
+}

@@ -2,8 +2,8 @@
 
 use std::process::Command;
 
-use plankwise::catalog::{Catalog, DEMO_US};
 use plankwise::bay::Objective;
+use plankwise::catalog::{Catalog, DEMO_US};
 use plankwise::job::{DEMO_JOB, Job};
 use plankwise::select::envelope::{TOLERANCE, max_live, span_map};
 use plankwise::select::{Entry, case_for, compare, rank_bay, topping_mix};

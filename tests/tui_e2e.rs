@@ -160,6 +160,16 @@ fn sighup_restores_the_terminal() {
 }
 
 #[test]
+fn sigint_restores_the_terminal() {
+    signal_leaves_terminal_sane("INT");
+}
+
+#[test]
+fn sigquit_restores_the_terminal() {
+    signal_leaves_terminal_sane("QUIT");
+}
+
+#[test]
 fn a_panic_restores_the_terminal() {
     if !have_tmux() {
         eprintln!("tmux not found: terminal test skipped");

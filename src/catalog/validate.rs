@@ -3,9 +3,9 @@
 use toml::Spanned;
 use toml::de::{DeTable, DeValue};
 
+use super::raw::{self, Point, RawPattern, RawSection};
 use crate::input::diag::{Reporter, suggestion};
 pub(crate) use crate::input::{Ctx, de, join, key_str, parse, span, tables};
-use super::raw::{self, Point, RawPattern, RawSection};
 mod geometry;
 mod materials;
 mod pattern;
@@ -245,6 +245,9 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
             "catalog" => {
                 g.saw_catalog = true;
                 if let Some(m) = de::<raw::RawMeta>(&mut cx.rep, v, "catalog") {
+                    if m.name.get_ref().trim().is_empty() {
+                        cx.rep.error(span(&m.name), "catalog / name", "is empty; give the catalog a name");
+                    }
                     g.meta.name = cx.text(&Some(m.name), "catalog", "name");
                     g.meta.producer = cx.text(&m.producer, "catalog", "producer");
                     if let Some(code) = &m.code {
@@ -256,7 +259,12 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
                             );
                         }
                     }
-                    g.meta.notes = m.notes.unwrap_or_default().into_iter().map(|n| cx.text(&Some(n), "catalog", "notes")).collect();
+                    g.meta.notes = m
+                        .notes
+                        .unwrap_or_default()
+                        .into_iter()
+                        .map(|n| cx.text(&Some(n), "catalog", "notes"))
+                        .collect();
                     if let Some(u) = &m.units {
                         match crate::units::System::from_name(u.get_ref()) {
                             Some(s) => g.meta.units = Some(s),

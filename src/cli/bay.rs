@@ -153,7 +153,10 @@ impl BayFlags {
                 None => {}
             }
         }
-        for (texts, kind, flag) in [(&self.line_dead, LoadKind::Dead, "line-dead"), (&self.line_live, LoadKind::Live, "line-live")] {
+        for (texts, kind, flag) in [
+            (&self.line_dead, LoadKind::Dead, "line-dead"),
+            (&self.line_live, LoadKind::Live, "line-live"),
+        ] {
             for t in texts {
                 let (w, at) = t
                     .split_once('@')

@@ -5,8 +5,8 @@ use std::path::{Path, PathBuf};
 
 use serde::Serialize;
 
-use plankwise::catalog::Catalog;
 use plankwise::bay::{Bay, Objective};
+use plankwise::catalog::Catalog;
 use plankwise::job::{DEMO_JOB, Job};
 use plankwise::report::shortlist::{self, Format};
 use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
@@ -255,7 +255,7 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                 viable: r.viable.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
                 failing: r.failing.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
             };
-            write!(out, "{}\n", if n == 0 { "" } else { "," })?;
+            writeln!(out, "{}", if n == 0 { "" } else { "," })?;
             serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
         } else if a.csv {
             for (i, x) in r.viable.iter().take(top).chain(r.failing.iter().take(top)).enumerate() {
@@ -498,10 +498,14 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
             )));
         }
     };
-    let inputs: Vec<&Path> = a.catalog.iter().map(|p| p.as_path()).chain(std::iter::once(a.job.as_path())).collect();
+    let inputs: Vec<&Path> = a
+        .catalog
+        .iter()
+        .map(|p| p.as_path())
+        .chain(std::iter::once(a.job.as_path()))
+        .collect();
     // refused before any work: an input, not a regular file, or there already
-    plankwise::files::writable(&a.output, &inputs, a.force)
-        .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
+    plankwise::files::writable(&a.output, &inputs, a.force).map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
     // each bay ranked as the writer comes to it, straight into the file:
     // one ranking held at a time
     let mut none: Vec<String> = Vec::new();

@@ -18,7 +18,6 @@ use plankwise::select::rank_bay;
 use plankwise::tui::keymap::{Key, Keymap};
 use plankwise::tui::{Action, App, Effect, report, ui, update};
 
-
 fn key_of(ev: event::KeyEvent) -> Option<Key> {
     Some(match ev.code {
         KeyCode::Char(c) if ev.modifiers.contains(KeyModifiers::CONTROL) => Key::Ctrl(c),
@@ -82,8 +81,7 @@ fn save_job(app: &App, inputs: &Inputs, path: &Path) -> Result<String, String> {
         let bak = PathBuf::from(format!("{}.bak", path.display()));
         let old = plankwise::files::read_bounded(path, plankwise::catalog::MAX_FILE_BYTES)
             .map_err(|e| format!("cannot keep a backup of '{}': it {e}", path.display()))?;
-        plankwise::files::write_safely(&bak, &old, &open, true)
-            .map_err(|e| format!("cannot keep a backup '{}': it {e}", bak.display()))?;
+        plankwise::files::write_safely(&bak, &old, &open, true).map_err(|e| format!("cannot keep a backup '{}': it {e}", bak.display()))?;
         backup = format!(" (backup {})", bak.display());
     }
     plankwise::files::write_safely(path, text.as_bytes(), &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;

@@ -3,9 +3,9 @@
 
 use std::io::{self, Write};
 
+use crate::bay::Bay;
 use crate::catalog::Catalog;
 use crate::checks::fire::fmt_h;
-use crate::bay::Bay;
 use crate::job::Job;
 use crate::select::{BayRanking, Ranked, evaluation, failure_reason};
 use crate::units::fmt_ft_in;

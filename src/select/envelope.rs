@@ -11,10 +11,10 @@
 use serde::Serialize;
 
 use super::{Entry, case_for, evaluation, rank_bay, topping_mix};
+use crate::bay::{Bay, Objective};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
 use crate::checks::{Evaluation, Prepared, evaluate_brief};
-use crate::bay::{Bay, Objective};
 use crate::units::{AreaLoad, Length};
 
 /// Probe live load for the linear estimate, psf.

@@ -154,7 +154,12 @@ impl Default for Keymap {
                 b(Action::NextBay, "next_bay", "next bay", &[Char('n'), PageDown]),
                 b(Action::PrevBay, "prev_bay", "previous bay", &[Char('p'), PageUp]),
                 b(Action::Help, "help", "this help", &[Char('?')]),
-                b(Action::Quit, "quit", "quit (asks first when the job has unsaved edits)", &[Char('q'), Ctrl('c')]),
+                b(
+                    Action::Quit,
+                    "quit",
+                    "quit (asks first when the job has unsaved edits)",
+                    &[Char('q'), Ctrl('c')],
+                ),
             ],
         }
     }
@@ -201,7 +206,10 @@ impl Keymap {
                         problems.push(format!("keys file: '{name}': ctrl-c always quits; choose another key"))
                     }
                     Some(key) => keys.push(key),
-                    None => problems.push(format!("keys file: '{name}': {} is not a key", crate::criteria::quoted(&k.to_string()))),
+                    None => problems.push(format!(
+                        "keys file: '{name}': {} is not a key",
+                        crate::criteria::quoted(&k.to_string())
+                    )),
                 }
             }
             if !keys.is_empty() {

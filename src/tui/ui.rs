@@ -91,7 +91,10 @@ fn bay_pane(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             };
             let style = if focused && i == app.field { t.selected } else { Style::new() };
             let label: String = c.label.chars().take(label_w - 1).collect();
-            Line::from(vec![Span::styled(format!("{label:<label_w$}"), t.muted), Span::styled(value, style)])
+            Line::from(vec![
+                Span::styled(format!("{label:<label_w$}"), t.muted),
+                Span::styled(value, style),
+            ])
         })
         .collect();
     let title = if FIELDS.len() > height {

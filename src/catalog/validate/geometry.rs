@@ -3,8 +3,8 @@
 use toml::Spanned;
 
 use super::{Ctx, join, limits, span};
-use crate::input::diag::suggestion;
 use crate::catalog::raw::{self, S};
+use crate::input::diag::suggestion;
 use crate::section::family::fmt;
 use crate::section::{CoreShape, Cores, DoubleTee, Generic, HollowCore, Keyway, VoidSpec};
 use crate::units::Length;

@@ -1,8 +1,8 @@
 //! Mixes and strand kinds.
 
 use super::{Ctx, join, limits, span};
-use crate::input::diag::suggestion;
 use crate::catalog::raw;
+use crate::input::diag::suggestion;
 use crate::material::{Aggregate, Mix, Modulus, Relaxation, StrandKind};
 use crate::section::family::fmt;
 use crate::units::Stress;

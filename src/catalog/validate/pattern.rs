@@ -3,9 +3,9 @@
 use toml::Spanned;
 
 use super::{Ctx, PUBLISHED_TOLERANCE, Refs, join, limits, span};
-use crate::input::diag::suggestion;
 use crate::catalog::raw::{self, RawPattern, S};
 use crate::catalog::{Bar, FamilySpec, Pattern, Published, Row, Section, WebSteel};
+use crate::input::diag::suggestion;
 use crate::material::{Mix, builtin_strand, builtin_strand_names};
 use crate::section::Family;
 use crate::section::family::fmt;
