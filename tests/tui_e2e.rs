@@ -253,3 +253,38 @@ fn a_large_catalog_reranks_off_the_ui_thread() {
     s.wait_for("EXITED 0");
     std::fs::remove_dir_all(&dir).unwrap();
 }
+
+/// The UI's shortlist write refuses the open catalog, by file identity (a
+/// link of another name to it too), and leaves it unchanged.
+#[test]
+fn the_shortlist_is_never_written_over_the_open_catalog() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = std::env::temp_dir().join(format!("plankwise-e2e-inputs-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    let cat = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("catalog/demo-us.toml");
+    std::fs::copy(&cat, dir.join("mine.toml")).unwrap();
+    std::os::unix::fs::symlink(dir.join("mine.toml"), dir.join("alias.txt")).unwrap();
+    let before = std::fs::read(dir.join("mine.toml")).unwrap();
+    let cmd = format!(
+        "cd {} && TERM=xterm-256color {} mine.toml; echo EXITED $?; sleep 30",
+        dir.display(),
+        env!("CARGO_BIN_EXE_plankwise")
+    );
+    let s = Session::start("inputs", &cmd);
+    s.wait_for("Candidates");
+    s.keys(&["w"]);
+    s.wait_for("shortlist file");
+    for _ in 0..20 {
+        s.keys(&["BSpace"]);
+    }
+    s.keys(&["a", "l", "i", "a", "s", ".", "t", "x", "t", "Enter"]);
+    s.wait_for("is an input file");
+    s.keys(&["q"]);
+    s.wait_for("EXITED 0");
+    assert_eq!(std::fs::read(dir.join("mine.toml")).unwrap(), before);
+    std::fs::remove_dir_all(&dir).unwrap();
+}

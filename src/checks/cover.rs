@@ -7,6 +7,9 @@
 //! rule of the fire check. Clear cover to the soffit — and for double-tee
 //! stems to their side faces too — at the ends and at midspan; the cores
 //! and the grouted joints between planks are not exposed surfaces.
+//!
+//! Where the worst point lies: not a station check — every strand at its
+//! height at the ends and between the hold-downs, where the cover is least.
 
 use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::fire::{durability_cover, slab_cover_for};

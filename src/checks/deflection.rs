@@ -8,6 +8,10 @@
 //! Camber and deflection by [`crate::camber`]: Martin (1977) multipliers,
 //! gross section for class U, bilinear effective inertia for classes T and
 //! C (PCI Design Handbook method). Ponding of roofs is not checked.
+//!
+//! Where the worst point lies: midspan deflections of the closed forms; the
+//! cracked stiffness takes its stresses where the bottom-fibre tension is
+//! greatest (stations and segment vertices, [`super::peak`]).
 
 use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::case::{Attachment, Use};

@@ -6,6 +6,10 @@
 //! the topping top to the strand centroid, not less than 0.8h. Vu at the
 //! critical section h/2 from the support face.
 //!
+//! Where the worst point lies: Vu is linear between stations (both sides of
+//! each line load are stations), so its greatest value in the shear range
+//! is at a station.
+//!
 //! Does not cover: ties across the interface, shear friction (§22.9).
 
 use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kip};

@@ -6,7 +6,7 @@
 //! Structures*, §16). w is the dead load plus 10 % of the live load, E = Ec,
 //! I of the section carrying superimposed loads (common practice, no source).
 //! A walking-comfort threshold of about 3–4 Hz is commonly quoted (common
-//! practice, no source).
+//! practice, no source). Not a station check: one value for the member.
 
 use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::member::Member;
