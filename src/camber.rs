@@ -79,6 +79,10 @@ pub struct Camber {
     pub cracked: bool,
     /// Multipliers used.
     pub multipliers: Multipliers,
+    /// At the tip of a left overhang, if any.
+    pub tip_left: Option<Tip>,
+    /// At the tip of a right overhang, if any.
+    pub tip_right: Option<Tip>,
 }
 
 /// Midspan deflection of a simply supported span `l` under uniform `w`:
@@ -132,9 +136,125 @@ pub fn cracked_inertia(n: f64, aps: f64, dp: f64, b: f64) -> f64 {
     n * aps * dp * dp * (1.0 - 1.6 * (n * rho).sqrt())
 }
 
+/// Where a deflection is wanted.
+#[derive(Debug, Clone, Copy, PartialEq)]
+enum Target {
+    /// Midspan, between the supports.
+    Mid,
+    /// The tip of the left overhang.
+    LeftTip,
+    /// The tip of the right overhang.
+    RightTip,
+}
+
+/// The moment of a unit downward load at the target, on the member on its
+/// supports at 0 and ℓ (virtual work; any mechanics text).
+fn unit_moment(t: Target, l: f64, (lo, hi): (f64, f64), x: f64) -> f64 {
+    match t {
+        Target::Mid => {
+            if x < 0.0 || x > l {
+                0.0
+            } else if x <= l / 2.0 {
+                x / 2.0
+            } else {
+                (l - x) / 2.0
+            }
+        }
+        Target::RightTip => {
+            let a = hi - l;
+            if x <= 0.0 {
+                0.0
+            } else if x <= l {
+                -a * x / l
+            } else {
+                -(hi - x)
+            }
+        }
+        Target::LeftTip => {
+            let a = -lo;
+            if x >= l {
+                0.0
+            } else if x >= 0.0 {
+                -a * (l - x) / l
+            } else {
+                -(x - lo)
+            }
+        }
+    }
+}
+
+/// The deflection at `t` (downward positive) from a curvature κ(x) =
+/// M/EI (sagging positive): ∫ κ·m dx over the member, by Simpson's rule on
+/// each stretch between `breaks` (κ is smooth between them, so eight
+/// panels per stretch are exact for the piecewise-quadratic moments of
+/// uniform loads and constant sections).
+fn deflection_at(m: &Member, t: Target, breaks: &[f64], kappa: impl Fn(f64) -> f64) -> f64 {
+    let (lo, hi) = m.range();
+    let l = m.l;
+    let mut cuts: Vec<f64> = breaks.iter().copied().filter(|&x| x > lo && x < hi).collect();
+    cuts.extend([lo, hi, l / 2.0]);
+    if lo < 0.0 {
+        cuts.push(0.0);
+    }
+    if hi > l {
+        cuts.push(l);
+    }
+    cuts.sort_by(f64::total_cmp);
+    cuts.dedup_by(|a, b| (*a - *b).abs() < 1e-9);
+    let f = |x: f64| kappa(x) * unit_moment(t, l, (lo, hi), x);
+    let mut sum = 0.0;
+    for w in cuts.windows(2) {
+        let (a, b) = (w[0], w[1]);
+        // just inside the stretch: a section or a load may jump at its ends
+        let e = 1e-9 * (b - a);
+        let n = 8;
+        let h = (b - a) / n as f64;
+        let mut s = 0.0;
+        for i in 0..=n {
+            let x = (a + i as f64 * h).clamp(a + e, b - e);
+            let wgt = if i == 0 || i == n {
+                1.0
+            } else if i % 2 == 1 {
+                4.0
+            } else {
+                2.0
+            };
+            s += wgt * f(x);
+        }
+        sum += s * h / 3.0;
+    }
+    sum
+}
+
+/// The camber and deflections at the tip of one overhang, in (camber
+/// upward positive, deflections downward positive), with the supports at
+/// the bearing centres.
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
+pub struct Tip {
+    /// Overhang length, bearing centre to tip, in.
+    pub length_in: f64,
+    /// Camber at release with these supports: prestress less self-weight.
+    pub camber_release_in: f64,
+    /// Camber at erection (Martin multipliers).
+    pub camber_erection_in: f64,
+    /// Final camber under permanent loads.
+    pub camber_final_in: f64,
+    /// Immediate deflection from the variable load this arrangement puts
+    /// on the member (gross section).
+    pub defl_live_in: f64,
+    /// Deflection after attachment: long-term change after erection plus live.
+    pub defl_after_attach_in: f64,
+}
+
 /// Camber and deflections of a member; `class` is the service class reached
 /// and `ft_total`/`f_live` the bottom-fibre tension under total load and the
 /// stress from live load alone (psi, tension positive) for the bilinear method.
+///
+/// A member on its own (no overhang, no opening, no placed or line load)
+/// takes the closed forms; otherwise every part is the virtual-work
+/// integral of its curvature ([`deflection_at`]) over the member with the
+/// loads as they lie, and with an overhang the prestress and self-weight
+/// parts are those of the member on its in-place supports.
 pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Camber {
     let b = m.bare;
     let eci_i = m.eci * b.ix_in4;
@@ -142,43 +262,107 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
     let lm = m.lm;
     let po = m.history.fpo_psi;
     let a = m.hold_down.unwrap_or(lm / 2.0);
+    let plain = m.cut.is_none()
+        && !m.overhangs()
+        && m.loads.groups.iter().all(|g| g.len() <= 1)
+        && m.loads
+            .groups
+            .iter()
+            .flatten()
+            .all(|ld| matches!(ld, crate::beam::Load::Span { a, b, .. } if *a == 0.0 && *b == m.l));
     let mut prestress = 0.0;
     for layer in &m.layers {
         let p = layer.area * po;
         let (ee, ec) = (b.yb_in - layer.y_end, b.yb_in - layer.y_mid);
-        if layer.debond > 0.0 {
-            // debonded: integrate M/EI with the layer inactive over its debonded length
+        if layer.debond > 0.0 || layer.cut.is_some() {
+            // debonded or cut: integrate M/EI with the layer inactive where it is not bonded
             let hd = m.hold_down;
             let e_at = |d: f64| match hd {
                 Some(h) if d < h => ee + (ec - ee) * d / h,
                 _ => ec,
             };
-            prestress += integrate_camber(lm, 2000, |x| {
-                let d = x.min(lm - x);
-                if d < layer.debond { 0.0 } else { p * e_at(d) / eci_i }
+            let e0 = m.ends.0;
+            prestress += integrate_camber(lm, 2000, |t| {
+                let x = e0 + t;
+                let d = t.min(lm - t);
+                if m.bonded(layer, x) <= 0.0 { 0.0 } else { p * e_at(d) / eci_i }
             });
         } else {
             prestress += layer_camber(p, ee, ec, a, lm, eci_i);
         }
     }
-    let self_rel = uniform_deflection(m.w[0], lm, eci_i);
+    let self_rel = if m.cut.is_none() {
+        uniform_deflection(m.w[0], lm, eci_i)
+    } else {
+        let e0 = m.ends.0;
+        integrate_camber(lm, 2000, |t| m.release_moment(e0 + t) / (m.eci * m.props_at(e0 + t).0.ix_in4))
+    };
     let mult = if m.comp.is_some() { MARTIN_TOPPED } else { MARTIN_UNTOPPED };
     let l = m.l;
     let ec_comp = m.comp.map_or(ec_i, |c| m.ec * c.ix_in4);
-    let topping = uniform_deflection(m.w[1], l, ec_i);
-    let mut sdl = uniform_deflection(m.w[2], l, ec_comp);
-    let mut live_pts = 0.0;
-    for &(p, at, kind) in &m.points {
-        match kind {
-            crate::case::LoadKind::Dead => sdl += point_deflection(p, at, l, ec_comp),
-            crate::case::LoadKind::Live => live_pts += point_deflection(p, at, l, ec_comp),
+    // the curvature of a load group: topping on the bare section, the rest
+    // on the composite one; the net section over a cut
+    let breaks: Vec<f64> = if plain {
+        Vec::new()
+    } else {
+        let mut v: Vec<f64> = m.loads.breaks().into_iter().map(|b| b.0).collect();
+        if let Some(c) = m.cut {
+            v.extend([c.along.0, c.along.1]);
         }
-    }
-    let live_w = match m.case.member_use {
-        crate::case::Use::Floor => m.w[3],
-        crate::case::Use::Roof => m.w[4].max(m.w[3]),
+        v
     };
-    let mut live = uniform_deflection(live_w, l, ec_comp) + live_pts;
+    let kappa = |g: usize, x: f64| {
+        let (p, c) = m.props_at(x);
+        let ei = if g <= crate::loads::TOPPING {
+            m.ec * p.ix_in4
+        } else {
+            m.ec * c.map_or(p.ix_in4, |c| c.ix_in4)
+        };
+        m.loads.at(g, x).0 / ei
+    };
+    let group = |g: usize, t: Target| {
+        if m.loads.groups[g].is_empty() {
+            0.0
+        } else {
+            deflection_at(m, t, &breaks, |x| kappa(g, x))
+        }
+    };
+    let roof_use = m.case.member_use == crate::case::Use::Roof;
+    let (topping, sdl, mut live) = if plain {
+        let live_w = if roof_use { m.w[4].max(m.w[3]) } else { m.w[3] };
+        (
+            uniform_deflection(m.w[1], l, ec_i),
+            uniform_deflection(m.w[2], l, ec_comp),
+            uniform_deflection(live_w, l, ec_comp),
+        )
+    } else {
+        let live = if roof_use {
+            group(crate::loads::ROOF, Target::Mid).max(group(crate::loads::LIVE, Target::Mid))
+        } else {
+            group(crate::loads::LIVE, Target::Mid)
+        };
+        (
+            group(crate::loads::TOPPING, Target::Mid),
+            group(crate::loads::SDL, Target::Mid),
+            live,
+        )
+    };
+    // with an overhang, prestress and self-weight on the in-place supports
+    let prestress_curvature = |x: f64| {
+        let (p, y) = m.force_at(x, po, m.ltr);
+        let pr = m.props_at(x).0;
+        p * (pr.yb_in - y) / (m.eci * pr.ix_in4)
+    };
+    let (pre_svc, self_svc) = if m.overhangs() {
+        (
+            deflection_at(m, Target::Mid, &breaks, prestress_curvature),
+            deflection_at(m, Target::Mid, &breaks, |x| {
+                m.loads.at(crate::loads::SELF, x).0 / (m.eci * m.props_at(x).0.ix_in4)
+            }),
+        )
+    } else {
+        (prestress, self_rel)
+    };
     // classes T and C: bilinear behaviour through an effective inertia
     let mut cracked = false;
     if class != ServiceClass::U && f_live > 0.0 {
@@ -193,9 +377,34 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         cracked = true;
     }
     let camber_release = prestress - self_rel;
-    let camber_erection = mult.erection_prestress * prestress - mult.erection_self * self_rel;
-    let camber_final = mult.final_prestress * prestress - mult.final_self * self_rel - mult.final_topping * topping - mult.final_sdl * sdl;
+    let camber_erection = mult.erection_prestress * pre_svc - mult.erection_self * self_svc;
+    let camber_final = mult.final_prestress * pre_svc - mult.final_self * self_svc - mult.final_topping * topping - mult.final_sdl * sdl;
     let after = (camber_erection - camber_final).max(0.0) + live;
+    let tip = |t: Target, length: f64| -> Option<Tip> {
+        if length <= 0.0 {
+            return None;
+        }
+        let pre = deflection_at(m, t, &breaks, prestress_curvature);
+        let own = deflection_at(m, t, &breaks, |x| {
+            m.loads.at(crate::loads::SELF, x).0 / (m.eci * m.props_at(x).0.ix_in4)
+        });
+        let (top, sd) = (group(crate::loads::TOPPING, t), group(crate::loads::SDL, t));
+        let lv = if roof_use {
+            group(crate::loads::ROOF, t).max(group(crate::loads::LIVE, t))
+        } else {
+            group(crate::loads::LIVE, t)
+        };
+        let erection = mult.erection_prestress * pre - mult.erection_self * own;
+        let fin = mult.final_prestress * pre - mult.final_self * own - mult.final_topping * top - mult.final_sdl * sd;
+        Some(Tip {
+            length_in: length,
+            camber_release_in: pre - own,
+            camber_erection_in: erection,
+            camber_final_in: fin,
+            defl_live_in: lv,
+            defl_after_attach_in: (erection - fin).max(0.0) + lv,
+        })
+    };
     Camber {
         prestress_release_in: prestress,
         self_release_in: self_rel,
@@ -209,6 +418,8 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         net_final_with_live_in: camber_final - live,
         cracked,
         multipliers: mult,
+        tip_left: tip(Target::LeftTip, m.case.overhang.0.get()),
+        tip_right: tip(Target::RightTip, m.case.overhang.1.get()),
     }
 }
 

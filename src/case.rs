@@ -42,14 +42,134 @@ impl ServiceClass {
     }
 }
 
-/// Dead or live, for a line load.
+/// What kind of load a load is: ASCE 7 D, L, Lr or S.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
-#[serde(rename_all = "lowercase")]
+#[serde(rename_all = "kebab-case")]
 pub enum LoadKind {
-    /// Permanent (a wall).
+    /// Permanent (a wall, a mechanical unit's weight).
     Dead,
-    /// Transient (a movable partition counted as live).
+    /// Floor live load.
     Live,
+    /// Roof live load.
+    RoofLive,
+    /// Snow.
+    Snow,
+}
+
+impl LoadKind {
+    /// Every kind, in the order of [`LoadKind::NAMES`].
+    pub const ALL: [LoadKind; 4] = [LoadKind::Dead, LoadKind::Live, LoadKind::RoofLive, LoadKind::Snow];
+    /// Their names, as the job file and the flags write them.
+    pub const NAMES: [&'static str; 4] = ["dead", "live", "roof-live", "snow"];
+    /// Its name.
+    pub fn name(self) -> &'static str {
+        Self::NAMES[Self::ALL.iter().position(|&k| k == self).unwrap_or(0)]
+    }
+    /// Whether the load varies (L, Lr, S): placed where it does most harm.
+    pub fn variable(self) -> bool {
+        self != LoadKind::Dead
+    }
+}
+
+/// A concentrated load: a force at a place along the span and across the
+/// member, over a bearing area.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct PointLoad {
+    /// Force, lbf.
+    pub p: crate::units::Force,
+    /// Place along the span from the left support.
+    pub at: Length,
+    /// Place across the member from its left edge (None: where it does most harm).
+    pub across: Option<Length>,
+    /// Size of the bearing area: along the span × across.
+    pub size: (Length, Length),
+}
+
+/// A load along the span over part of it (a wall or partition running
+/// along a unit): force per length from one place to another.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct StripLoad {
+    /// Force per length along the span, lbf/in.
+    pub w: LineLoad,
+    /// Start along the span.
+    pub from: Length,
+    /// End along the span.
+    pub to: Length,
+    /// Place across the member from its left edge (None: where it does most harm).
+    pub across: Option<Length>,
+}
+
+/// An area load over a rectangle of the floor.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct PatchLoad {
+    /// Intensity.
+    pub q: AreaLoad,
+    /// Start along the span.
+    pub from: Length,
+    /// End along the span.
+    pub to: Length,
+    /// Extent across the member from its left edge: (from, to).
+    pub across: (Length, Length),
+}
+
+/// A load placed on the bay.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Placed {
+    /// A concentrated load.
+    Point(PointLoad),
+    /// A load along the span.
+    Strip(StripLoad),
+    /// A rectangle of area load.
+    Patch(PatchLoad),
+}
+
+/// A placed load and its kind.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct PlacedLoad {
+    /// The load.
+    pub load: Placed,
+    /// D, L, Lr or S.
+    pub kind: LoadKind,
+}
+
+/// An opening through the floor: along the span from one place to another,
+/// across the member from its left edge; a header along it may carry a
+/// load of its own.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Opening {
+    /// Start along the span.
+    pub from: Length,
+    /// End along the span.
+    pub to: Length,
+    /// Extent across the member from its left edge: (from, to).
+    pub across: (Length, Length),
+    /// Load on the header framing the opening, per length of the opening
+    /// (dead), if any.
+    pub header: Option<LineLoad>,
+}
+
+/// How a concentrated or partial load on hollow-core is shared between the
+/// units that carry it.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum UnitShare {
+    /// The loaded unit carries it all (conservative; the default).
+    Whole,
+    /// Spread over an effective width the user gives.
+    Width(Length),
+    /// The published rule (PCI hollow-core manual, from memory, low
+    /// confidence): 0.5ℓ over the middle half of the span, narrowing
+    /// linearly to one unit's width at the supports, half near a free edge.
+    Rule,
+}
+
+/// How a load on a double tee goes to its stems.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum StemShare {
+    /// By statics: the lever rule between the stems either side of it
+    /// (uplift on the far stem for a load beyond a stem).
+    Lever,
+    /// One stem carries it all (conservative).
+    OneStem,
 }
 
 /// A line load across the member (a wall or partition parallel to the
@@ -114,8 +234,22 @@ pub struct DesignCase {
     pub snow: AreaLoad,
     /// Sustained part of the live load, 0–1.
     pub sustained_live: f64,
-    /// Line loads.
+    /// Line loads across the member.
     pub line_loads: Vec<LineLoadSpec>,
+    /// Concentrated, along-span and patch loads.
+    pub placed: Vec<PlacedLoad>,
+    /// Openings through the floor.
+    pub openings: Vec<Opening>,
+    /// How hollow-core units share a concentrated or partial load.
+    pub unit_share: UnitShare,
+    /// Whether the loaded unit is at a free edge (no grouted neighbour on
+    /// one side): the published rule then takes half its width.
+    pub free_edge: bool,
+    /// How a double tee's stems share one.
+    pub stem_share: StemShare,
+    /// Overhangs beyond the left and right supports (balcony, eave), from
+    /// the bearing centre to the tip.
+    pub overhang: (Length, Length),
     /// Composite topping, if any.
     pub topping: Option<Topping>,
     /// Floor or roof.
@@ -159,6 +293,12 @@ impl DesignCase {
             snow: AreaLoad::new(0.0),
             sustained_live: DEFAULT_SUSTAINED_LIVE,
             line_loads: Vec::new(),
+            placed: Vec::new(),
+            openings: Vec::new(),
+            unit_share: UnitShare::Whole,
+            free_edge: false,
+            stem_share: StemShare::Lever,
+            overhang: (Length::new(0.0), Length::new(0.0)),
             topping: None,
             member_use: Use::Floor,
             class_allowed: ServiceClass::U,
@@ -171,9 +311,45 @@ impl DesignCase {
             min_frequency_hz: None,
         }
     }
-    /// Member length = span + bearing length.
+    /// Member length: span + bearing length, and any overhang beyond a
+    /// bearing centre in place of that end's half bearing.
     pub fn member_length(&self) -> f64 {
-        self.span.get() + self.bearing.get()
+        let (a, b) = self.ends();
+        b - a
+    }
+    /// Where the member ends, in from the left support: (left end, right end).
+    pub fn ends(&self) -> (f64, f64) {
+        let half = self.bearing.get() / 2.0;
+        let (a1, a2) = (self.overhang.0.get(), self.overhang.1.get());
+        (
+            -(if a1 > 0.0 { a1 } else { half }),
+            self.span.get() + if a2 > 0.0 { a2 } else { half },
+        )
+    }
+    /// The same case with the uniform load its use names set to `q`: the
+    /// floor live load L, or for a roof both roof live load and snow (the
+    /// larger of which acts). Placed loads stay as they are.
+    pub fn with_varied(&self, q: AreaLoad) -> DesignCase {
+        let mut c = self.clone();
+        match self.member_use {
+            Use::Floor => c.live = q,
+            Use::Roof => {
+                c.roof_live = q;
+                c.snow = q;
+            }
+        }
+        c
+    }
+    /// The uniform load the use names: floor live, or the larger of roof live and snow.
+    pub fn varied(&self) -> AreaLoad {
+        match self.member_use {
+            Use::Floor => self.live,
+            Use::Roof => AreaLoad::new(self.roof_load()),
+        }
+    }
+    /// Whether the member overhangs either support.
+    pub fn has_overhang(&self) -> bool {
+        self.overhang.0.get() > 0.0 || self.overhang.1.get() > 0.0
     }
     /// The larger of the roof live and snow loads: "(Lr or S)" in ASCE 7.
     pub fn roof_load(&self) -> f64 {
@@ -303,6 +479,17 @@ pub fn service_moments(e: &Effects, sustained_live: f64) -> (f64, f64) {
     let d = e.m_dead();
     let total = (d + e.m_live).max(d + e.m_roof).max(d + 0.75 * e.m_live + 0.75 * e.m_roof);
     (d + sustained_live * e.m_live, total)
+}
+
+/// The least service moment (lbf·in): the most hogging of D alone, the
+/// sustained D + ψL and the total combinations of [`service_moments`] —
+/// where an overhang's loads hog, the variable loads add to it.
+pub fn service_least(e: &Effects, sustained_live: f64) -> f64 {
+    let d = e.m_dead();
+    d.min(d + sustained_live * e.m_live)
+        .min(d + e.m_live)
+        .min(d + e.m_roof)
+        .min(d + 0.75 * e.m_live + 0.75 * e.m_roof)
 }
 
 #[cfg(test)]

@@ -26,6 +26,7 @@ use serde::Serialize;
 
 use crate::case::{DesignCase, ServiceClass, factored};
 use crate::catalog::{Pattern, Section};
+use crate::loads::{Arrangement, Unit};
 use crate::material::Mix;
 use crate::member::{Effective, History, Member};
 
@@ -353,8 +354,8 @@ impl Mid {
         Mid {
             x_in: x,
             d_in: d,
-            release_psi: release::at(m, d),
-            service: service::at(m, m.effective_at(d), &m.effects(x)),
+            release_psi: release::at(m, x),
+            service: service::at(m, x, m.effective_at(x), &m.effects(x)),
         }
     }
 }
@@ -536,8 +537,13 @@ pub struct Analysis<'a> {
     /// The midpoint of each pair of neighbouring stations (the fibre
     /// stresses there find each segment's own maximum, see [`peak`]).
     pub mids: Vec<Mid>,
-    /// x of the critical section for shear (h/2 from the support face), in.
-    pub x_shear: f64,
+    /// Where shear is checked: from each critical section (h/2 from the
+    /// support face, or the face itself when a concentrated load lies
+    /// between them) to the other, and on each overhang from its critical
+    /// section to the tip, in.
+    pub shear_zones: Vec<(f64, f64)>,
+    /// Which unit of the bay this is, and how its variable loads lie.
+    pub unit: String,
     /// Camber and deflections.
     pub camber: crate::camber::Camber,
     /// Fire assessment.
@@ -586,6 +592,8 @@ pub struct Evaluation {
     pub frequency_hz: f64,
     /// Stations.
     pub stations: Vec<Station>,
+    /// The units analysed (not kept by a brief evaluation).
+    pub units: Vec<UnitReport>,
 }
 
 impl Evaluation {
@@ -662,12 +670,57 @@ impl Station {
 }
 
 /// Whether the member and its loads are symmetric about midspan: every
-/// line load has its mirror (strand, debonding and harping are measured
-/// from the nearer end, so they always are).
+/// load has its mirror, no opening cuts it, and the overhangs are equal
+/// (strand, debonding and harping are measured from the nearer end, so
+/// they always are).
 fn symmetric(m: &Member) -> bool {
-    m.points
+    m.cut.is_none() && m.case.overhang.0 == m.case.overhang.1 && m.loads.symmetric()
+}
+
+/// Where shear is checked ([`Analysis::shear_zones`]): ACI 318-19
+/// §7.4.3.2 / §9.4.3.2 allow the critical section at h/2 from the support
+/// face only when no concentrated load lies between them; otherwise the
+/// face itself. On an overhang, from its critical section to the tip.
+pub fn shear_zones(m: &Member) -> Vec<(f64, f64)> {
+    let face = m.case.bearing.get() / 2.0;
+    let h2 = m.h_total / 2.0;
+    let points: Vec<f64> = m
+        .loads
+        .groups
         .iter()
-        .all(|&(p, a, k)| m.points.iter().any(|&(q, b, j)| q == p && j == k && (b - (m.l - a)).abs() < 1e-9))
+        .flatten()
+        .filter_map(|ld| match *ld {
+            crate::beam::Load::Point { p, a } if p != 0.0 => Some(a),
+            _ => None,
+        })
+        .collect();
+    // the critical section out from a support face at `f`, towards `dir`
+    let crit = |f: f64, dir: f64| {
+        let far = f + dir * h2;
+        let inside = points.iter().any(|&a| (a - f) * dir > 1e-9 && (far - a) * dir >= -1e-9);
+        if inside { f } else { far }
+    };
+    let l = m.l;
+    let (lo, hi) = m.range();
+    let mut zones = vec![(crit(face, 1.0), crit(l - face, -1.0))];
+    if lo < 0.0 {
+        let c = crit(-face, -1.0);
+        if c > lo {
+            zones.insert(0, (lo, c));
+        }
+    }
+    if hi > l {
+        let c = crit(l + face, 1.0);
+        if c < hi {
+            zones.push((c, hi));
+        }
+    }
+    zones
+}
+
+/// Whether `x` lies where shear is checked.
+fn in_zones(zones: &[(f64, f64)], x: f64) -> bool {
+    zones.iter().any(|&(a, b)| x >= a - 1e-9 && x <= b + 1e-9)
 }
 
 /// How far either side of a jump (a line load's shear step) its two
@@ -675,95 +728,165 @@ fn symmetric(m: &Member) -> bool {
 /// the jump itself, large enough to keep the stations apart.
 pub const JUMP_IN: f64 = 1e-3;
 
-/// Stations: every 1/20 of the span plus every point where a checked
-/// quantity or its limit changes its law, so that each check's maximum is
-/// at a station or is found between two by the check itself:
-/// - h/2 from each support face (shear starts there, ACI 318-19 §7.4.3.2 / §9.4.3.2);
-/// - the transfer lengths (fse/3000)·db and 50 db from each member end and
-///   from each debonding point (prestress stops growing; the end-region
-///   release limits of Tables 24.5.3.1/24.5.3.2 end at ℓtr);
-/// - each layer's development length ℓd past its bonding point (`full`:
-///   the strand stresses with full development, psi);
+/// Stations: every 1/20 of the span (and every 1/4 of an overhang) plus
+/// every point where a checked quantity or its limit changes its law, so
+/// that each check's maximum is at a station or is found between two by
+/// the check itself:
+/// - the ends of the shear zones ([`shear_zones`]);
+/// - where each layer's bond begins (after its debonded length, and at the
+///   edges of an opening that cuts it), and the transfer lengths
+///   (fse/3000)·db and 50 db and the development length ℓd from there
+///   (`full`: the strand stresses with full development, psi); ℓtr from
+///   each member end (the end-region release limits of Tables
+///   24.5.3.1/24.5.3.2 end there);
 /// - hold-downs (the strand profile bends);
-/// - each line load, on both sides of its shear step ([`JUMP_IN`]);
-/// - where the shear of each moment combination passes through zero
-///   (the moment maxima, [`Member::zero_shear_points`]), and midspan.
+/// - every load break ([`crate::loads::Loads::breaks`]): point loads and
+///   supports on both sides of their shear step ([`JUMP_IN`]), the ends of
+///   partial loads;
+/// - an opening's edges (the section changes: both sides) and h/2 beyond
+///   them (the web width for shear changes);
+/// - where the shear of each combination passes through zero, and with
+///   overhangs where its moment does ([`Member::turning_points`]), and midspan.
 ///
-/// Between these points prestress, eccentricity and moments are linear or
-/// quadratic in x, so the fibre stresses are quadratic; the stress checks
-/// find each segment's vertex ([`peak`]).
-fn stations(m: &Member, x_shear: f64, full: &[f64]) -> Vec<f64> {
+/// Between these points prestress, eccentricity and section are constant or
+/// linear and moments quadratic in x, so the fibre stresses are quadratic;
+/// the stress checks find each segment's vertex ([`peak`]).
+fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
     let l = m.l;
-    let half = (m.lm - l) / 2.0;
+    let (lo, hi) = m.range();
+    let (e0, e1) = m.ends;
     let mut xs: Vec<f64> = Vec::with_capacity(64);
     xs.extend((0..=20).map(|k| l * k as f64 / 20.0));
-    let mut special = Vec::with_capacity(24);
-    special.extend([x_shear, m.ltr - half, m.ltr_shear - half, l / 2.0]);
-    if let Some(hd) = m.hold_down {
-        special.push(hd - half);
+    if lo < 0.0 {
+        xs.extend((0..4).map(|k| lo * (1.0 - k as f64 / 4.0)));
+    }
+    if hi > l {
+        xs.extend((1..=4).map(|k| l + (hi - l) * k as f64 / 4.0));
+    }
+    xs.push(l / 2.0);
+    for &(a, b) in zones {
+        xs.extend([a, b]);
+    }
+    // from each member end, and from each edge an opening's cut strands bond again
+    let from = |xs: &mut Vec<f64>, origin: f64, dir: f64, len: f64| xs.push(origin + dir * len);
+    for &(e, dir) in &[(e0, 1.0), (e1, -1.0)] {
+        from(&mut xs, e, dir, m.ltr);
+        from(&mut xs, e, dir, m.ltr_shear);
+        if let Some(hd) = m.hold_down {
+            from(&mut xs, e, dir, hd);
+        }
     }
     for (i, layer) in m.layers.iter().enumerate() {
-        if layer.debond > 0.0 {
-            special.push(layer.debond - half);
-            special.push(layer.debond + m.ltr - half);
-            special.push(layer.debond + m.ltr_shear - half);
-        }
         let fps = full.get(i).copied().unwrap_or(m.strand.fpu.get());
-        special.push(layer.debond + crate::prestress::development_length(m.history.fse_psi, fps, m.db(), layer.debond > 0.0) - half);
+        let mut origins = vec![
+            (e0 + layer.debond, 1.0, layer.debond > 0.0),
+            (e1 - layer.debond, -1.0, layer.debond > 0.0),
+        ];
+        if let Some((o1, o2)) = layer.cut {
+            origins.extend([(o2, 1.0, false), (o1, -1.0, false)]);
+        }
+        for (o, dir, debonded) in origins {
+            let ld = crate::prestress::development_length(m.history.fse_psi, fps, m.db(), debonded);
+            xs.push(o);
+            for len in [m.ltr, m.ltr_shear, ld] {
+                from(&mut xs, o, dir, len);
+            }
+        }
     }
-    for &(_, a, _) in &m.points {
-        special.extend([a - JUMP_IN, a + JUMP_IN]);
+    for (x, jump) in m.loads.breaks() {
+        // a support at the end of the stretch checked has one side only
+        if jump && x > lo + 1e-9 && x < hi - 1e-9 {
+            xs.extend([x - JUMP_IN, x + JUMP_IN]);
+        } else {
+            xs.push(x);
+        }
     }
-    special.extend(m.zero_shear_points());
-    for s in special {
-        xs.push(s);
-        xs.push(l - s);
+    if let Some(c) = m.cut {
+        let h2 = m.h_total / 2.0;
+        xs.extend([
+            c.along.0 - JUMP_IN,
+            c.along.0,
+            c.along.1,
+            c.along.1 + JUMP_IN,
+            c.along.0 - h2,
+            c.along.1 + h2,
+        ]);
     }
-    xs.retain(|&x| (0.0..=l).contains(&x));
+    xs.extend(m.turning_points());
+    xs.retain(|&x| x >= lo && x <= hi);
     xs.sort_by(f64::total_cmp);
     xs.dedup_by(|a, b| (*a - *b).abs() < 1e-6);
     xs
 }
 
-/// Build the analysis: the member and the state at every station.
+/// Build the analysis of the loaded unit under the first arrangement of
+/// its variable loads (the only one of a bay without overhangs, openings
+/// or placed roof loads): the member and the state at every station.
 pub fn analyse<'a>(cand: &Candidate<'a>, case: &'a DesignCase) -> Analysis<'a> {
-    analyse_with(cand, case, false)
+    let arr = crate::loads::arrangements(case).first().copied().unwrap_or(Arrangement::PLAIN);
+    analyse_unit(cand, case, &Unit::loaded(), arr, false, None)
 }
 
-/// [`analyse`], brief (no notes) when asked.
-fn analyse_with<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> Analysis<'a> {
-    analyse_on(cand, case, brief, None)
+/// Every unit of the bay that must be checked, each under every
+/// arrangement of its variable loads ([`crate::loads`]).
+pub fn scenarios(cand: &Candidate, case: &DesignCase) -> Vec<(Unit, Arrangement)> {
+    let top_w = case.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
+    let units = crate::loads::units(case, cand.section, cand.mix.unit_weight.get(), top_w);
+    let arrs = crate::loads::arrangements(case);
+    let mut out = Vec::with_capacity(units.len() * arrs.len());
+    for u in units {
+        for &a in &arrs {
+            out.push((u.clone(), a));
+        }
+    }
+    out
 }
 
 /// Every check on a station set given by the caller (x from the left
 /// bearing centre, in) instead of the member's own: the proof that the
 /// member's own stations miss no maximum compares the two on a dense set.
 pub fn evaluate_on_stations(cand: &Candidate, case: &DesignCase, xs: &[f64]) -> Evaluation {
-    finish(analyse_on(cand, case, false, Some(xs)))
+    let evs = scenarios(cand, case)
+        .into_iter()
+        .map(|(u, a)| finish(analyse_unit(cand, case, &u, a, false, Some(xs))))
+        .collect();
+    merge(evs)
 }
 
-fn analyse_on<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool, given: Option<&[f64]>) -> Analysis<'a> {
-    let member = Member::new(cand.section, cand.pattern, cand.mix, case);
-    let x_shear = case.bearing.get() / 2.0 + member.h_total / 2.0;
+fn analyse_unit<'a>(
+    cand: &Candidate<'a>,
+    case: &'a DesignCase,
+    unit: &Unit,
+    arr: Arrangement,
+    brief: bool,
+    given: Option<&[f64]>,
+) -> Analysis<'a> {
+    let member = Member::build(cand.section, cand.pattern, cand.mix, case, unit, arr);
+    let zones = shear_zones(&member);
     let mut memo = flexure::Memo::new(&member);
-    let xs = stations(&member, x_shear, &memo.full);
+    let xs = stations(&member, &zones, &memo.full);
     let full = memo.full.clone();
+    let label = if arr == Arrangement::PLAIN {
+        unit.label.clone()
+    } else {
+        format!("{}, {}", unit.label, arr.describe())
+    };
     let mut at = |x: f64| {
-        let d = member.end_distance(x);
-        let pre = member.effective_at(d);
-        let flex = flexure::at(&member, d, pre, &mut memo);
-        loaded(&member, x, d, x_shear, pre, flex, release::at(&member, d))
+        let pre = member.effective_at(x);
+        let flex = flexure::at(&member, x, pre, &mut memo);
+        loaded(&member, x, &zones, pre, flex, release::at(&member, x))
     };
     if let Some(xs) = given {
         let stations = xs.iter().map(|&x| at(x)).collect();
         let fire = fire::assess(&member, brief);
-        return complete(member, stations, x_shear, fire, brief, full);
+        return complete(member, stations, zones, fire, brief, full, label);
     }
     let stations = if symmetric(&member) {
         // the member, its strand and its loads are the same seen from either
         // end: the right half mirrors the left (shears change sign), and a
         // station's state is worked out once
-        let half = member.l / 2.0;
+        let (lo, hi) = member.range();
+        let half = 0.5 * (lo + hi);
         // xs is sorted: the left half is a prefix
         let n = xs.iter().take_while(|&&x| x <= half + 1e-9).count();
         let mut all = Vec::with_capacity(if brief { n } else { 2 * n });
@@ -783,19 +906,18 @@ fn analyse_on<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool, given
         xs.into_iter().map(at).collect::<Vec<Station>>()
     };
     let fire = fire::assess(&member, brief);
-    complete(member, stations, x_shear, fire, brief, full)
+    complete(member, stations, zones, fire, brief, full, label)
 }
 
-/// The state at station `x` (`d` from the nearer end) under the member's
-/// loads, given what does not depend on them: flexural strength and the
-/// release stresses.
-fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
+/// The state at station `x` under the member's loads, given what does not
+/// depend on them: the prestress, the flexural strength and the release stresses.
+fn loaded(member: &Member, x: f64, zones: &[(f64, f64)], pre: Effective, flexure: flexure::AtStation, release_psi: (f64, f64)) -> Station {
     let eff = member.effects(x);
     let (mu, mu_combo, vu, vu_combo) = factored(&eff);
-    let shear = (x >= x_shear - 1e-9 && x <= member.l - x_shear + 1e-9).then(|| shear::at(member, d, pre, &eff));
+    let shear = in_zones(zones, x).then(|| shear::at(member, x, pre, &eff));
     Station {
         x_in: x,
-        d_in: d,
+        d_in: member.end_distance(x),
         mu_lbin: mu,
         mu_combo,
         vu_lbf: vu,
@@ -803,14 +925,22 @@ fn loaded(member: &Member, x: f64, d: f64, x_shear: f64, pre: Effective, flexure
         vu_combo,
         flexure,
         release_psi,
-        service: service::at(member, pre, &eff),
+        service: service::at(member, x, pre, &eff),
         prestress: pre,
         shear,
     }
 }
 
 /// The analysis from its stations: camber and frequency added.
-fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: fire::Fire, brief: bool, full: Vec<f64>) -> Analysis<'a> {
+fn complete<'a>(
+    member: Member<'a>,
+    stations: Vec<Station>,
+    shear_zones: Vec<(f64, f64)>,
+    fire: fire::Fire,
+    brief: bool,
+    full: Vec<f64>,
+    unit: String,
+) -> Analysis<'a> {
     let frequency_hz = vibration::frequency(&member);
     let mids = stations
         .windows(2)
@@ -820,7 +950,8 @@ fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: 
         member,
         stations,
         mids,
-        x_shear,
+        shear_zones,
+        unit,
         camber: crate::camber::Camber::default(),
         fire,
         frequency_hz,
@@ -833,7 +964,7 @@ fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: 
     // bilinear method where the bottom-fibre tension is greatest
     let m = &an.member;
     let (ft_total, x) = service::max_tension(&an).map_or((0.0, m.l / 2.0), |p| (p.value, p.x_in));
-    let s_live = m.comp.map_or(m.bare.sb_in3, |c| c.sb_in3);
+    let s_live = m.props_at(x).1.map_or(m.props_at(x).0.sb_in3, |c| c.sb_in3);
     let eff = m.effects(x);
     let f_live = eff.m_live.max(eff.m_roof) / s_live;
     let class = service::class_of(ft_total, m.mix.fc.get());
@@ -841,96 +972,172 @@ fn complete<'a>(member: Member<'a>, stations: Vec<Station>, x_shear: f64, fire: 
     an
 }
 
-/// A brief analysis kept for trying other floor live loads on the same
-/// member and span: the prestress history, the flexural strength and the
-/// release stresses at each station do not depend on the live load (the
-/// losses of Zia et al. take the sustained dead loads only), so a trial
-/// load recomputes moments, shears, service stresses, shear strength,
+/// A brief analysis kept for trying other uniform variable loads on the
+/// same member and span: the prestress history, the flexural strength and
+/// the release stresses at each station do not depend on the variable
+/// load (the losses of Zia et al. take the sustained dead loads only), so a
+/// trial load recomputes moments, shears, service stresses, shear strength,
 /// camber and frequency, and runs the checks. The capacity envelope tries
-/// many loads per span.
+/// many loads per span. The load varied is the one the bay's use names
+/// ([`DesignCase::with_varied`]); placed loads stay as they are.
 pub struct Prepared<'a> {
-    base: Analysis<'a>,
-    /// Per-layer strand stress with full development (sets ℓd), psi.
-    full: Vec<f64>,
+    bases: Vec<(Unit, Analysis<'a>)>,
+    /// Per-layer strand stress with full development (sets ℓd), psi, of each base.
+    full: Vec<Vec<f64>>,
 }
 
 impl<'a> Prepared<'a> {
-    /// Prepare a candidate under a case (its live load is replaced by each trial).
+    /// Prepare a candidate under a case (its varied load is replaced by each trial).
     pub fn new(cand: &Candidate<'a>, case: &'a DesignCase) -> Prepared<'a> {
-        let base = analyse_with(cand, case, true);
-        let full = base.full.clone();
-        Prepared { base, full }
+        // the arrangements of a loaded case: a trial load may add a roof load the case lacks
+        let probe = case.with_varied(crate::units::AreaLoad::from_unit(1.0, "psf"));
+        let top_w = case.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
+        let units = crate::loads::units(case, cand.section, cand.mix.unit_weight.get(), top_w);
+        let arrs = crate::loads::arrangements(&probe);
+        let mut bases = Vec::new();
+        for u in units {
+            for &a in &arrs {
+                let an = analyse_unit(cand, case, &u, a, true, None);
+                bases.push((u.clone(), an));
+            }
+        }
+        let full = bases.iter().map(|b| b.1.full.clone()).collect();
+        Prepared { bases, full }
     }
 
     /// The brief evaluation at the case's own loads (as [`evaluate_brief`]).
     pub fn evaluation(&self) -> Evaluation {
-        trimmed(results(&self.base))
+        trimmed(merge(self.bases.iter().map(|b| results(&b.1)).collect()))
     }
 
-    /// The brief evaluation with the floor live load `live` instead of the
-    /// case's: equal to [`evaluate_brief`] of the case with that live load.
-    pub fn with_live(&self, live: crate::units::AreaLoad) -> Evaluation {
-        trimmed(finish(self.analysis(live)))
+    /// The brief evaluation with the varied load `q` instead of the
+    /// case's: equal to [`evaluate_brief`] of [`DesignCase::with_varied`].
+    pub fn with_live(&self, q: crate::units::AreaLoad) -> Evaluation {
+        trimmed(merge((0..self.bases.len()).map(|i| finish(self.analysis(i, q))).collect()))
     }
 
-    /// Only the ratios of the checks `ids` (in registry order) at live load
-    /// `live`: what the envelope's later trials read, without running the
-    /// checks the load cannot change.
-    pub fn ratios_with_live(&self, live: crate::units::AreaLoad, ids: &[&'static str]) -> Vec<(&'static str, f64)> {
-        let an = self.analysis(live);
-        REGISTRY
-            .iter()
-            .filter(|c| ids.contains(&c.info.id))
-            .filter_map(|c| (c.run)(&an))
-            .map(|r| (r.info.id, r.ratio))
-            .collect()
+    /// Only the ratios of the checks `ids` (in registry order) at varied
+    /// load `q`, the worst over the units and arrangements: what the
+    /// envelope's later trials read, without running the checks the load
+    /// cannot change.
+    pub fn ratios_with_live(&self, q: crate::units::AreaLoad, ids: &[&'static str]) -> Vec<(&'static str, f64)> {
+        let mut out: Vec<(&'static str, f64)> = Vec::new();
+        for i in 0..self.bases.len() {
+            let an = self.analysis(i, q);
+            for r in REGISTRY.iter().filter(|c| ids.contains(&c.info.id)).filter_map(|c| (c.run)(&an)) {
+                match out.iter_mut().find(|o| o.0 == r.info.id) {
+                    Some(o) => o.1 = o.1.max(r.ratio),
+                    None => out.push((r.info.id, r.ratio)),
+                }
+            }
+        }
+        out
     }
 
-    fn analysis(&self, live: crate::units::AreaLoad) -> Analysis<'a> {
-        let b = &self.base;
+    fn analysis(&self, i: usize, q: crate::units::AreaLoad) -> Analysis<'a> {
+        let (unit, b) = &self.bases[i];
         let mut member = b.member.clone();
-        member.w[3] = live.get() * member.bare.width_in;
+        let varied = member.case.with_varied(q);
+        let top_w = varied.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
+        member.loads = crate::loads::Loads::new(
+            &varied,
+            member.section,
+            member.mix.unit_weight.get(),
+            top_w,
+            unit,
+            member.arrangement,
+        );
+        member.w = member.loads.w;
         // the station set of a fresh evaluation at this load: the same
-        // load-independent points, and the zero-shear points of these loads
-        let mut xs = stations(&member, b.x_shear, &self.full);
+        // load-independent points, and the turning points of these loads
+        let mut xs = stations(&member, &b.shear_zones, &self.full[i]);
         if symmetric(&member) {
-            let half = member.l / 2.0;
+            let (lo, hi) = member.range();
+            let half = 0.5 * (lo + hi);
             xs.truncate(xs.iter().take_while(|&&x| x <= half + 1e-9).count());
         }
         let stations: Vec<Station> = {
             let mut memo: Option<flexure::Memo> = None;
             xs.iter()
                 .map(|&x| match b.stations.binary_search_by(|s| s.x_in.total_cmp(&x)) {
-                    Ok(i) => {
-                        let s = &b.stations[i];
-                        loaded(&member, s.x_in, s.d_in, b.x_shear, s.prestress, s.flexure, s.release_psi)
+                    Ok(k) => {
+                        let s = &b.stations[k];
+                        loaded(&member, s.x_in, &b.shear_zones, s.prestress, s.flexure, s.release_psi)
                     }
                     Err(_) => {
-                        // a zero-shear point these loads move: worked out afresh
-                        let d = member.end_distance(x);
-                        let pre = member.effective_at(d);
+                        // a turning point these loads move: worked out afresh
+                        let pre = member.effective_at(x);
                         // the same memo a fresh evaluation starts with, so
                         // the answers agree to the bit
                         let memo = memo.get_or_insert_with(|| flexure::Memo::new(&member));
-                        let flex = flexure::at(&member, d, pre, memo);
-                        loaded(&member, x, d, b.x_shear, pre, flex, release::at(&member, d))
+                        let flex = flexure::at(&member, x, pre, memo);
+                        loaded(&member, x, &b.shear_zones, pre, flex, release::at(&member, x))
                     }
                 })
                 .collect()
         };
-        complete(member, stations, b.x_shear, b.fire.clone(), true, self.full.clone())
+        complete(
+            member,
+            stations,
+            b.shear_zones.clone(),
+            b.fire.clone(),
+            true,
+            self.full[i].clone(),
+            b.unit.clone(),
+        )
     }
 }
 
-/// Evaluate every check for one candidate under one case.
+/// Evaluate every check for one candidate under one case: every unit of
+/// the bay the checks must see under every arrangement of its variable
+/// loads, each check at its worst ([`merge`]).
 pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    finish(analyse(cand, case))
+    let evs = scenarios(cand, case)
+        .into_iter()
+        .map(|(u, a)| finish(analyse_unit(cand, case, &u, a, false, None)))
+        .collect();
+    merge(evs)
 }
 
 /// The same numbers as [`evaluate`] without the checks' notes and the
 /// stations: what ranking and the envelope need, in less time and memory.
 pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    trimmed(finish(analyse_with(cand, case, true)))
+    let evs = scenarios(cand, case)
+        .into_iter()
+        .map(|(u, a)| results(&analyse_unit(cand, case, &u, a, true, None)))
+        .collect();
+    trimmed(merge(evs))
+}
+
+/// The evaluations of several units or arrangements as one: each check at
+/// its worst (a failure before a pass, then the higher ratio), its note
+/// naming the unit and arrangement it comes from; the stations, camber and
+/// prestress history are the first's (the loaded unit, variable loads on
+/// the span).
+pub fn merge(mut evs: Vec<Evaluation>) -> Evaluation {
+    if evs.len() == 1 {
+        return evs.pop().expect("one");
+    }
+    let mut out = evs.remove(0);
+    for ev in evs {
+        for c in ev.checks {
+            match out.checks.iter_mut().find(|o| o.info.id == c.info.id) {
+                Some(o) => {
+                    let worse = (!c.pass && o.pass) || (c.pass == o.pass && c.ratio > o.ratio + 1e-12);
+                    if worse {
+                        *o = c;
+                    }
+                }
+                None => out.checks.push(c),
+            }
+        }
+        out.service_class = out.service_class.max(ev.service_class);
+        out.units.extend(ev.units);
+    }
+    out.checks.sort_by_key(|c| REGISTRY.iter().position(|r| r.info.id == c.info.id));
+    out.viable = out.checks.iter().all(|c| c.pass);
+    out.governing = governing_of(&out.checks);
+    out
 }
 
 /// A brief evaluation as kept: no stations, no notes, no spare capacity.
@@ -941,6 +1148,7 @@ fn trimmed(mut ev: Evaluation) -> Evaluation {
     for c in &mut ev.checks {
         c.note = String::new();
     }
+    ev.units = Vec::new();
     ev
 }
 
@@ -950,20 +1158,37 @@ fn finish(an: Analysis) -> Evaluation {
     ev
 }
 
-/// Every check's result on an analysis, without its stations.
-fn results(an: &Analysis) -> Evaluation {
-    let mut checks: Vec<CheckResult> = Vec::with_capacity(REGISTRY.len());
-    checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(an)));
-    // the governing check is the one that limits the load: requirements
-    // the load cannot change (release stresses, cover, fire, strand, length,
-    // minimum strength when met outright) pass or fail but do not govern
-    let governing = checks
+/// The check that limits the load: requirements the load cannot change
+/// (release stresses, cover, fire, strand, length, minimum strength when
+/// met outright) pass or fail but do not govern.
+fn governing_of(checks: &[CheckResult]) -> usize {
+    checks
         .iter()
         .enumerate()
         .filter(|(_, c)| c.governs)
         .max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio))
         .or_else(|| checks.iter().enumerate().max_by(|a, b| a.1.ratio.total_cmp(&b.1.ratio)))
-        .map_or(0, |(i, _)| i);
+        .map_or(0, |(i, _)| i)
+}
+
+/// Every check's result on an analysis, without its stations; each note
+/// names the unit and arrangement when they are not the plain ones.
+fn results(an: &Analysis) -> Evaluation {
+    let mut checks: Vec<CheckResult> = Vec::with_capacity(REGISTRY.len());
+    checks.extend(REGISTRY.iter().filter_map(|c| (c.run)(an)));
+    let plain = an.unit == Unit::loaded().label;
+    if !an.brief && !plain {
+        for c in &mut checks {
+            if c.info.load_driven {
+                c.note = if c.note.is_empty() {
+                    an.unit.clone()
+                } else {
+                    format!("{}; {}", c.note, an.unit)
+                };
+            }
+        }
+    }
+    let governing = governing_of(&checks);
     let viable = checks.iter().all(|c| c.pass);
     Evaluation {
         governing,
@@ -976,7 +1201,34 @@ fn results(an: &Analysis) -> Evaluation {
         fire: an.fire.clone(),
         frequency_hz: an.frequency_hz,
         stations: Vec::new(),
+        units: if an.brief { Vec::new() } else { vec![UnitReport::of(an)] },
         checks,
+    }
+}
+
+/// What the output says of one unit analysed: which it is, how its
+/// variable loads lie, and the share it takes of each placed load.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct UnitReport {
+    /// Which unit, and the arrangement.
+    pub unit: String,
+    /// Strands its opening cuts, of all (0 when uncut).
+    pub strands_cut: usize,
+    /// Strands in all.
+    pub strands: usize,
+    /// The share of each placed load.
+    pub shares: Vec<crate::loads::Share>,
+}
+
+impl UnitReport {
+    fn of(an: &Analysis) -> UnitReport {
+        let m = &an.member;
+        UnitReport {
+            unit: an.unit.clone(),
+            strands_cut: m.layers.iter().filter(|l| l.cut.is_some()).map(|l| l.x.len()).sum(),
+            strands: m.layers.iter().map(|l| l.x.len()).sum(),
+            shares: m.loads.shares.clone(),
+        }
     }
 }
 

@@ -14,6 +14,7 @@
 #![forbid(unsafe_code)]
 
 pub mod bay;
+pub mod beam;
 pub mod camber;
 pub mod case;
 pub mod catalog;
@@ -23,6 +24,7 @@ pub mod files;
 pub mod fire;
 pub mod input;
 pub mod job;
+pub mod loads;
 pub mod material;
 pub mod member;
 pub mod prestress;

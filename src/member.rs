@@ -5,15 +5,18 @@
 
 use serde::Serialize;
 
-use crate::case::{DesignCase, Effects, LoadKind, LossMethod, point, uniform};
+use crate::case::{DesignCase, Effects, LossMethod};
 use crate::catalog::{Pattern, Section};
+use crate::loads::{Arrangement, Cut, Loads, Unit};
 use crate::material::{Aggregate, Mix, StrandKind};
 use crate::prestress::{Losses, ZiaInput, transfer_length, transfer_length_shear, zia};
-use crate::section::{Composite, Properties};
+use crate::section::Composite;
+use crate::section::Properties;
 
-/// One row of strands as the analysis sees it.
+/// One row of strands as the analysis sees it (a row an opening cuts is
+/// split in two: the strands it cuts and the rest).
 #[derive(Debug, Clone, PartialEq)]
-pub struct Layer<'a> {
+pub struct Layer {
     /// Strand area of the row, in².
     pub area: f64,
     /// Height at the hold-downs (or everywhere when straight), in.
@@ -22,8 +25,11 @@ pub struct Layer<'a> {
     pub y_end: f64,
     /// Debonded length at each end, in (0 when fully bonded).
     pub debond: f64,
-    /// Horizontal positions, in (the catalog's own list).
-    pub x: &'a [f64],
+    /// Horizontal positions, in.
+    pub x: Vec<f64>,
+    /// Where an opening cuts these strands, along the span (in from the
+    /// left support): they carry nothing there and bond again from its edges.
+    pub cut: Option<(f64, f64)>,
 }
 
 /// The prestress history, psi.
@@ -82,15 +88,23 @@ pub struct Member<'a> {
     /// Overall depth with topping, in.
     pub h_total: f64,
     /// Strand layers.
-    pub layers: Vec<Layer<'a>>,
+    pub layers: Vec<Layer>,
     /// Strand kind.
     pub strand: &'a StrandKind,
     /// Total strand area, in².
     pub aps: f64,
     /// Uniform loads along the member, lbf/in: self, topping, sdl, live, roof.
     pub w: [f64; 5],
-    /// Point loads (lbf, position in, dead or live).
-    pub points: Vec<(f64, f64, LoadKind)>,
+    /// Every load on the member, by group.
+    pub loads: Loads,
+    /// Which arrangement of the variable loads this model carries.
+    pub arrangement: Arrangement,
+    /// The cut of an opening through this unit, if any.
+    pub cut: Option<Cut>,
+    /// The properties where the cut is (bare, composite), if any.
+    pub net: Option<(Properties, Option<Composite>)>,
+    /// The member ends, in from the left support (left, right).
+    pub ends: (f64, f64),
     /// Prestress history.
     pub history: History,
     /// Transfer length for stresses and flexure, (fse/3000)·db, in.
@@ -106,8 +120,22 @@ pub struct Member<'a> {
 }
 
 impl<'a> Member<'a> {
-    /// Build the model.
+    /// The loaded unit under the first arrangement of its variable loads
+    /// (the only one without overhangs or placed roof loads).
     pub fn new(section: &'a Section, pattern: &'a Pattern, mix: &'a Mix, case: &'a DesignCase) -> Member<'a> {
+        let arr = crate::loads::arrangements(case).first().copied().unwrap_or(Arrangement::PLAIN);
+        Member::build(section, pattern, mix, case, &Unit::loaded(), arr)
+    }
+
+    /// Build the model of `unit` under arrangement `arr`.
+    pub fn build(
+        section: &'a Section,
+        pattern: &'a Pattern,
+        mix: &'a Mix,
+        case: &'a DesignCase,
+        unit: &Unit,
+        arr: Arrangement,
+    ) -> Member<'a> {
         let bare = &section.props;
         let b = bare.width_in;
         let l = case.span.get();
@@ -118,30 +146,39 @@ impl<'a> Member<'a> {
         });
         let h_total = comp.map_or(bare.depth_in, |c| c.depth_in);
         let area = pattern.strand.area.get();
-        let layers: Vec<Layer<'a>> = pattern
-            .rows
-            .iter()
-            .map(|r| Layer {
-                area: r.count as f64 * area,
+        let cut = unit.cut;
+        let mut layers: Vec<Layer> = Vec::with_capacity(pattern.rows.len() + 1);
+        for r in &pattern.rows {
+            let layer = |x: Vec<f64>, cut: Option<(f64, f64)>| Layer {
+                area: x.len() as f64 * area,
                 y_mid: r.height.get(),
                 y_end: r.end_height.unwrap_or(r.height).get(),
                 debond: r.debond.map_or(0.0, |d| d.get()),
-                x: &r.x,
-            })
-            .collect();
+                x,
+                cut,
+            };
+            let (cut_x, kept): (Vec<f64>, Vec<f64>) = match cut {
+                Some(c) => r.x.iter().partition(|&&x| x >= c.across.0 && x <= c.across.1),
+                None => (Vec::new(), r.x.clone()),
+            };
+            if !kept.is_empty() {
+                layers.push(layer(kept, None));
+            }
+            if let (false, Some(c)) = (cut_x.is_empty(), cut) {
+                layers.push(layer(cut_x, Some(c.along)));
+            }
+        }
         let aps: f64 = layers.iter().map(|l| l.area).sum();
-        let w_top = case
-            .topping
-            .as_ref()
-            .map_or(0.0, |t| t.thickness.get() * b * t.mix.unit_weight.get());
-        let w = [
-            section.weight_per_length(mix),
-            w_top,
-            case.sdl.get() * b,
-            case.live.get() * b,
-            case.roof_load() * b,
-        ];
-        let points = case.line_loads.iter().map(|p| (p.w.get() * b, p.at.get(), p.kind)).collect();
+        let top_w = case.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
+        let loads = Loads::new(case, section, mix.unit_weight.get(), top_w, unit, arr);
+        let net = cut.map(|c| {
+            let p = section.geometry.net_properties(bare, c.across.0, c.across.1);
+            let cc = case.topping.as_ref().map(|t| {
+                let n = t.mix.ec().get() / mix.ec().get();
+                Composite::new(&p, t.thickness.get(), p.width_in, n)
+            });
+            (p, cc)
+        });
         let mut m = Member {
             section,
             pattern,
@@ -155,8 +192,12 @@ impl<'a> Member<'a> {
             layers,
             strand: &pattern.strand,
             aps,
-            w,
-            points,
+            w: loads.w,
+            loads,
+            arrangement: arr,
+            cut,
+            net,
+            ends: case.ends(),
             history: History {
                 fpj_psi: 0.0,
                 fpo_psi: 0.0,
@@ -191,19 +232,58 @@ impl<'a> Member<'a> {
         }
     }
 
-    /// Distance from the nearer member end of a span station x, in.
+    /// Distance from the nearer member end of a station x, in.
     pub fn end_distance(&self, x: f64) -> f64 {
-        let half = (self.lm - self.l) / 2.0;
-        (x + half).min(self.l - x + half)
+        (x - self.ends.0).min(self.ends.1 - x)
     }
 
-    /// Prestress force (lbf) and its centroid height (in) at distance `d`
-    /// from the nearer end, for strand stress `f` built up linearly over
-    /// `ltr` from where each layer's bond begins.
-    pub fn force_at(&self, d: f64, f: f64, ltr: f64) -> (f64, f64) {
+    /// Whether the member has an overhang beyond either support.
+    pub fn overhangs(&self) -> bool {
+        self.case.has_overhang()
+    }
+
+    /// How far a layer's strands are bonded on the near side of `x`: from
+    /// the nearer member end less the debonded length, or from the edge of
+    /// the opening that cuts them, where they start again as from an end
+    /// (ACI 318-19 §25.4.8); 0 inside the opening, in.
+    pub fn bonded(&self, layer: &Layer, x: f64) -> f64 {
+        let d = self.end_distance(x) - layer.debond;
+        match layer.cut {
+            None => d,
+            Some((o1, _)) if x <= o1 => d.min(o1 - x),
+            Some((_, o2)) if x >= o2 => d.min(x - o2),
+            Some(_) => 0.0,
+        }
+    }
+
+    /// The section's properties at `x`: bare and composite, the net ones
+    /// where an opening cuts the unit.
+    pub fn props_at(&self, x: f64) -> (&Properties, Option<&Composite>) {
+        match (&self.net, self.cut) {
+            (Some((p, c)), Some(cut)) if x >= cut.along.0 && x <= cut.along.1 => (p, c.as_ref()),
+            _ => (self.bare, self.comp.as_ref()),
+        }
+    }
+
+    /// The web width for shear at `x`: less the webs an opening cuts over
+    /// the opening and h/2 beyond it, in.
+    pub fn bw_at(&self, x: f64) -> f64 {
+        match (&self.net, self.cut) {
+            (Some((p, _)), Some(cut)) if x >= cut.along.0 - self.h_total / 2.0 && x <= cut.along.1 + self.h_total / 2.0 => {
+                p.web_width_min_in
+            }
+            _ => self.bare.web_width_min_in,
+        }
+    }
+
+    /// Prestress force (lbf) and its centroid height (in) at `x`, for
+    /// strand stress `f` built up linearly over `ltr` from where each
+    /// layer's bond begins.
+    pub fn force_at(&self, x: f64, f: f64, ltr: f64) -> (f64, f64) {
+        let d = self.end_distance(x);
         let (mut p, mut py) = (0.0, 0.0);
         for layer in &self.layers {
-            let frac = ((d - layer.debond) / ltr).clamp(0.0, 1.0);
+            let frac = (self.bonded(layer, x) / ltr).clamp(0.0, 1.0);
             let pl = layer.area * f * frac;
             p += pl;
             py += pl * self.layer_y(layer, d);
@@ -211,51 +291,34 @@ impl<'a> Member<'a> {
         if p > 0.0 { (p, py / p) } else { (0.0, self.pattern.centroid()) }
     }
 
-    /// The effective prestress at `d`, for stresses and flexure (over ℓtr)
+    /// The effective prestress at `x`, for stresses and flexure (over ℓtr)
     /// and for shear (over 50 db): what every station reads, found once.
-    pub fn effective_at(&self, d: f64) -> Effective {
-        let (pe, y) = self.force_at(d, self.history.fse_psi, self.ltr);
-        let (pe_shear, y_shear) = self.force_at(d, self.history.fse_psi, self.ltr_shear);
+    pub fn effective_at(&self, x: f64) -> Effective {
+        let (pe, y) = self.force_at(x, self.history.fse_psi, self.ltr);
+        let (pe_shear, y_shear) = self.force_at(x, self.history.fse_psi, self.ltr_shear);
         Effective { pe, y, pe_shear, y_shear }
     }
 
-    /// Vertical component of the effective prestress at `d` (draped layers), lbf.
-    pub fn vp_at(&self, d: f64) -> f64 {
+    /// Vertical component of the effective prestress at `x` (draped layers), lbf.
+    pub fn vp_at(&self, x: f64) -> f64 {
         let Some(hd) = self.hold_down else { return 0.0 };
+        let d = self.end_distance(x);
         if d >= hd {
             return 0.0;
         }
         self.layers
             .iter()
             .map(|layer| {
-                let frac = ((d - layer.debond) / self.ltr_shear).clamp(0.0, 1.0);
+                let frac = (self.bonded(layer, x) / self.ltr_shear).clamp(0.0, 1.0);
                 let slope = (layer.y_end - layer.y_mid) / hd;
                 layer.area * self.history.fse_psi * frac * slope.abs() / (1.0 + slope * slope).sqrt()
             })
             .sum()
     }
 
-    /// Unfactored effects at span station x.
+    /// Unfactored effects at x.
     pub fn effects(&self, x: f64) -> Effects {
-        let u = |w: f64| uniform(w, self.l, x);
-        let (ms, vs) = u(self.w[0]);
-        let (mt, vt) = u(self.w[1]);
-        let (mut md, mut vd) = u(self.w[2]);
-        let (mut ml, mut vl) = u(self.w[3]);
-        let (mr, vr) = u(self.w[4]);
-        for &(p, a, kind) in &self.points {
-            let (m, v) = point(p, a, self.l, x);
-            match kind {
-                LoadKind::Dead => {
-                    md += m;
-                    vd += v;
-                }
-                LoadKind::Live => {
-                    ml += m;
-                    vl += v;
-                }
-            }
-        }
+        let [(ms, vs), (mt, vt), (md, vd), (ml, vl), (mr, vr)] = std::array::from_fn(|g| self.loads.at(g, x));
         Effects {
             m_self: ms,
             m_topping: mt,
@@ -270,50 +333,84 @@ impl<'a> Member<'a> {
         }
     }
 
-    /// Where the shear of each load combination that sets a moment check
-    /// passes through zero, in from the left bearing centre: the maxima of
-    /// the factored moments (ASCE 7-16 §2.3.1 combinations 1–3) and of the
-    /// service moments (sustained D + ψL; D + L, D + (Lr or S),
-    /// D + 0.75L + 0.75(Lr or S), §2.4.1). All loads act downward, so the
-    /// shear of a combination falls along the span and crosses zero once;
-    /// a crossing at a line load's jump is that load's own station.
-    pub fn zero_shear_points(&self) -> Vec<f64> {
+    /// The factors (D, L, Lr or S) of every combination whose moment a
+    /// check reads: ASCE 7-16 §2.3.1 combinations 1–3 and the service
+    /// combinations of §2.4.1 (sustained D + ψL; D + L, D + (Lr or S),
+    /// D + 0.75L + 0.75(Lr or S); D alone).
+    pub fn combinations(&self) -> Vec<(f64, f64, f64)> {
         let psi = self.case.sustained_live;
         let mut combos: Vec<(f64, f64, f64)> = crate::case::COMBINATIONS.iter().map(|c| (c.d, c.l, c.r)).collect();
-        combos.extend([(1.0, psi, 0.0), (1.0, 1.0, 0.0), (1.0, 0.0, 1.0), (1.0, 0.75, 0.75)]);
-        let mut out = Vec::with_capacity(combos.len());
-        for (kd, kl, kr) in combos {
-            let w = kd * (self.w[0] + self.w[1] + self.w[2]) + kl * self.w[3] + kr * self.w[4];
-            let mut loads: Vec<(f64, f64)> = self
-                .points
-                .iter()
-                .map(|&(p, a, k)| (if k == LoadKind::Dead { kd } else { kl } * p, a))
-                .collect();
-            loads.sort_by(|a, b| a.1.total_cmp(&b.1));
-            // shear just right of the left support, then segment by segment
-            let mut v = w * self.l / 2.0 + loads.iter().map(|&(p, a)| p * (self.l - a) / self.l).sum::<f64>();
-            let mut from = 0.0;
-            for (p, a) in loads.into_iter().chain(std::iter::once((0.0, self.l))) {
-                let at_end = v - w * (a - from);
-                if v > 0.0 && at_end <= 0.0 && w > 0.0 {
-                    out.push(from + v / w);
-                    break;
+        combos.extend([
+            (1.0, psi, 0.0),
+            (1.0, 1.0, 0.0),
+            (1.0, 0.0, 1.0),
+            (1.0, 0.75, 0.75),
+            (1.0, 0.0, 0.0),
+        ]);
+        combos
+    }
+
+    /// Where the shear of each combination ([`Member::combinations`])
+    /// passes through zero inside a stretch between two load breaks (the
+    /// moment extrema there), and, with overhangs, where its moment does
+    /// (where the moment changes sign), in from the left support. Between
+    /// breaks the shear is linear and the moment quadratic in x; a zero of
+    /// the shear at a point load's jump is that load's own station.
+    pub fn turning_points(&self) -> Vec<f64> {
+        let breaks = self.loads.breaks();
+        let (lo, hi) = self.range();
+        let mut cuts: Vec<f64> = breaks.iter().map(|b| b.0).filter(|&x| x > lo && x < hi).collect();
+        cuts.insert(0, lo);
+        cuts.push(hi);
+        let combos = self.combinations();
+        let hog = self.overhangs();
+        let mut out = Vec::new();
+        for w in cuts.windows(2) {
+            let (a, b) = (w[0], w[1]);
+            if b - a < 1e-9 {
+                continue;
+            }
+            // each group's moment at the quarter points and the middle
+            let xs = [a + 0.25 * (b - a), a + 0.5 * (b - a), a + 0.75 * (b - a)];
+            let e = xs.map(|x| self.effects(x));
+            for &(kd, kl, kr) in &combos {
+                let mv = |e: &Effects| {
+                    (
+                        kd * e.m_dead() + kl * e.m_live + kr * e.m_roof,
+                        kd * e.v_dead() + kl * e.v_live + kr * e.v_roof,
+                    )
+                };
+                let [(m0, v0), (m1, _), (m2, v2)] = e.each_ref().map(mv);
+                // shear: linear, through the quarter points
+                let (va, vb) = (1.5 * v0 - 0.5 * v2, 1.5 * v2 - 0.5 * v0);
+                if (va > 0.0 && vb < 0.0) || (va < 0.0 && vb > 0.0) {
+                    out.push(a + (b - a) * va / (va - vb));
                 }
-                // past the load the shear drops by its weight
-                v = at_end - p;
-                from = a;
-                if v <= 0.0 {
-                    break;
+                if hog {
+                    // moment: the parabola through the three points, t in [0, 1]
+                    let (c2, c1, c0) = quadratic(m0, m1, m2);
+                    for t in roots(c2, c1, c0) {
+                        if t > 1e-9 && t < 1.0 - 1e-9 {
+                            out.push(a + t * (b - a));
+                        }
+                    }
                 }
             }
         }
         out
     }
 
-    /// Self-weight moment at release at distance `d` from the end: the
-    /// member rests on the bed at its ends, over its full length (lbf·in).
-    pub fn release_moment(&self, d: f64) -> f64 {
-        uniform(self.w[0], self.lm, d).0
+    /// The stretch of the member the checks cover, in from the left
+    /// support: between the bearing centres, and out to the tip of each overhang.
+    pub fn range(&self) -> (f64, f64) {
+        let (a1, a2) = (self.case.overhang.0.get(), self.case.overhang.1.get());
+        (if a1 > 0.0 { -a1 } else { 0.0 }, if a2 > 0.0 { self.l + a2 } else { self.l })
+    }
+
+    /// Self-weight moment at release at `x`: the member rests on the bed at
+    /// its ends, over its full length (lbf·in).
+    pub fn release_moment(&self, x: f64) -> f64 {
+        self.loads.release_moment(x)
     }
 
     fn prestress(&self) -> History {
@@ -383,4 +480,36 @@ fn zero_losses() -> Losses {
         c_factor: 1.0,
         c_clamped: false,
     }
+}
+
+/// The parabola c2 t² + c1 t + c0 through (0.25, m0), (0.5, m1), (0.75, m2),
+/// as (c2, c1, c0).
+fn quadratic(m0: f64, m1: f64, m2: f64) -> (f64, f64, f64) {
+    // second difference over a step of 0.25
+    let c2 = (m0 - 2.0 * m1 + m2) / (2.0 * 0.0625);
+    let slope = (m2 - m0) / 0.5;
+    let c1 = slope - 2.0 * c2 * 0.5;
+    let c0 = m1 - c2 * 0.25 - c1 * 0.5;
+    (c2, c1, c0)
+}
+
+/// Real roots of c2 t² + c1 t + c0.
+fn roots(c2: f64, c1: f64, c0: f64) -> Vec<f64> {
+    let scale = c2.abs().max(c1.abs()).max(c0.abs());
+    if scale == 0.0 {
+        return Vec::new();
+    }
+    if c2.abs() < 1e-12 * scale {
+        return if c1.abs() > 1e-12 * scale { vec![-c0 / c1] } else { Vec::new() };
+    }
+    let disc = c1 * c1 - 4.0 * c2 * c0;
+    if disc < 0.0 {
+        return Vec::new();
+    }
+    let q = -0.5 * (c1 + c1.signum() * disc.sqrt());
+    let mut r = vec![q / c2];
+    if q != 0.0 {
+        r.push(c0 / q);
+    }
+    r
 }

@@ -33,7 +33,7 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     let g = &m.section.geometry;
     let mut least = f64::INFINITY;
     for l in &m.layers {
-        for &x in l.x {
+        for &x in &l.x {
             for y in [l.y_mid, l.y_end] {
                 // clear cover to the soffit
                 least = least.min(y - db / 2.0);

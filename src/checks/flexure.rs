@@ -52,47 +52,58 @@ pub struct AtStation {
     pub mcr_lbin: f64,
 }
 
-fn concrete<'m>(m: &'m Member) -> Concrete<'m> {
-    let topping = m
-        .case
-        .topping
-        .as_ref()
-        .map(|t| (t.thickness.get(), m.bare.width_in, t.mix.fc.get()));
+/// The member's concrete for flexure: the full section, or with `net` the
+/// section an opening leaves (its part of the precast and of the topping
+/// taken out).
+fn concrete<'m>(m: &'m Member, net: bool) -> Concrete<'m> {
+    let (props, cut) = match (&m.net, m.cut, net) {
+        (Some((p, _)), Some(c), true) => (p, Some(c.across)),
+        _ => (m.bare, None),
+    };
+    let topping = m.case.topping.as_ref().map(|t| (t.thickness.get(), props.width_in, t.mix.fc.get()));
     let b1 = m.case.topping.as_ref().map_or(m.mix.beta1(), |t| beta1(t.mix.fc));
     Concrete {
         geometry: &m.section.geometry,
         fc: m.mix.fc.get(),
         topping,
         beta1: b1,
-        top_band: m.bare.top_band,
+        top_band: props.top_band,
+        cut,
     }
 }
 
-/// Steel layers at distance `d` from the end; `full` gives the developed
-/// stresses that set ℓd (None: no development limit).
-fn layers<'m>(m: &'m Member, d: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>> {
+/// Whether `x` lies where an opening cuts the unit (the net section).
+fn over_cut(m: &Member, x: f64) -> bool {
+    m.cut.is_some_and(|c| x >= c.along.0 && x <= c.along.1)
+}
+
+/// Steel layers at `x`; `full` gives the developed stresses that set ℓd
+/// (None: no development limit).
+fn layers<'m>(m: &'m Member, x: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>> {
     let mut out = Vec::with_capacity(m.layers.len() + m.pattern.bars.len());
-    layers_into(m, d, m.effective_at(d), full, &mut out);
+    layers_into(m, x, m.effective_at(x), full, &mut out);
     out
 }
 
 /// [`layers`] into a buffer (a station's flexure reuses one).
-fn layers_into<'m>(m: &'m Member, d: f64, pre: Effective, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
+fn layers_into<'m>(m: &'m Member, x: f64, pre: Effective, full: Option<&[f64]>, out: &mut Vec<SteelLayer<'m>>) {
     out.clear();
     let fse = m.history.fse_psi;
     let ec = m.ec;
+    let d = m.end_distance(x);
+    let b = m.props_at(x).0;
     let (pe, y) = (pre.pe, pre.y);
-    let e = m.bare.yb_in - y;
+    let e = b.yb_in - y;
     out.extend(m.layers.iter().enumerate().map(|(i, layer)| {
         let yi = m.layer_y(layer, d);
-        let ei = m.bare.yb_in - yi;
+        let ei = b.yb_in - yi;
         // decompression: concrete strain at the strand level from prestress
-        let eps2 = (pe / m.bare.area_in2 + pe * e * ei / m.bare.ix_in4) / ec;
+        let eps2 = (pe / b.area_in2 + pe * e * ei / b.ix_in4) / ec;
         let cap = match full {
             None => m.strand.fpu.get(),
             Some(f) => {
                 let ld = development_length(fse, f[i], m.db(), layer.debond > 0.0);
-                developed_stress(d - layer.debond, fse, f[i], m.ltr, ld)
+                developed_stress(m.bonded(layer, x), fse, f[i], m.ltr, ld)
             }
         };
         SteelLayer {
@@ -120,11 +131,11 @@ fn layers_into<'m>(m: &'m Member, d: f64, pre: Effective, full: Option<&[f64]>, 
 /// φ where strand is not fully developed, ACI 318-19 Table 21.2.3
 /// (reference sheet §4.3, from memory, medium confidence): 0.75 from the
 /// point where bonding begins to ℓtr, then linear to 0.90 at ℓd.
-fn phi_development(m: &Member, d: f64, full: &[f64]) -> (f64, bool) {
+fn phi_development(m: &Member, at: f64, full: &[f64]) -> (f64, bool) {
     let mut phi: f64 = 0.90;
     let mut developed = true;
     for (i, layer) in m.layers.iter().enumerate() {
-        let x = d - layer.debond;
+        let x = m.bonded(layer, at);
         let ld = development_length(m.history.fse_psi, full[i], m.db(), layer.debond > 0.0);
         let p = if x <= m.ltr {
             0.75
@@ -141,28 +152,28 @@ fn phi_development(m: &Member, d: f64, full: &[f64]) -> (f64, bool) {
     (phi, developed)
 }
 
-/// Cracking moment with the effective prestress at `d`, lbf·in:
+/// Cracking moment with the effective prestress at `x`, lbf·in:
 /// Mcr = Sb (fr + Pe/A + Pe e/Sb) bare, or for an unshored topping
 /// Mcr = Sbc (fr + Pe/A + Pe e/Sb − Mnc/Sb) + Mnc (PCI Design Handbook form;
 /// reference sheet §4.5, from memory, high confidence), Mnc the moment of
-/// self-weight and topping at the same section (their loads are uniform,
-/// so it is the same at either end's distance `d`).
-pub fn mcr(m: &Member, d: f64) -> f64 {
-    mcr_with(m, d, m.effective_at(d))
+/// self-weight and topping at the same section; the net section where an
+/// opening cuts the unit.
+pub fn mcr(m: &Member, x: f64) -> f64 {
+    mcr_with(m, x, m.effective_at(x))
 }
 
 /// [`mcr`] with the effective prestress at the station already found.
-fn mcr_with(m: &Member, d: f64, pre: Effective) -> f64 {
+fn mcr_with(m: &Member, x: f64, pre: Effective) -> f64 {
     let (pe, y) = (pre.pe, pre.y);
-    let e = m.bare.yb_in - y;
+    let (b, comp) = m.props_at(x);
+    let e = b.yb_in - y;
     let fr = m.mix.fr().get();
-    let pre = pe / m.bare.area_in2 + pe * e / m.bare.sb_in3;
-    match m.comp {
-        None => m.bare.sb_in3 * (fr + pre),
+    let pre = pe / b.area_in2 + pe * e / b.sb_in3;
+    match comp {
+        None => b.sb_in3 * (fr + pre),
         Some(c) => {
-            let x = (d - (m.lm - m.l) / 2.0).clamp(0.0, m.l);
-            let mnc = crate::case::uniform(m.w[0] + m.w[1], m.l, x).0;
-            c.sb_in3 * (fr + pre - mnc / m.bare.sb_in3) + mnc
+            let mnc = m.loads.at(crate::loads::SELF, x).0 + m.loads.at(crate::loads::TOPPING, x).0;
+            c.sb_in3 * (fr + pre - mnc / b.sb_in3) + mnc
         }
     }
 }
@@ -173,8 +184,10 @@ fn mcr_with(m: &Member, d: f64, pre: Effective) -> f64 {
 /// full development at midspan (psi), which sets ℓd.
 #[derive(Debug)]
 pub struct Memo<'m> {
-    entries: Vec<(Vec<SteelLayer<'m>>, crate::strength::Flexure)>,
+    entries: Vec<(bool, Vec<SteelLayer<'m>>, crate::strength::Flexure)>,
     conc: Concrete<'m>,
+    /// The concrete where an opening cuts the unit.
+    conc_net: Concrete<'m>,
     scratch: Vec<SteelLayer<'m>>,
     /// Per-layer strand stress with full development at midspan, psi.
     pub full: Vec<f64>,
@@ -187,15 +200,18 @@ impl<'m> Memo<'m> {
         Memo {
             full: full.to_vec(),
             entries: Vec::new(),
-            conc: concrete(m),
+            conc: concrete(m, false),
+            conc_net: concrete(m, true),
             scratch: Vec::new(),
         }
     }
 
     /// The memo of a member, holding its midspan answer.
     pub fn new(m: &'m Member) -> Memo<'m> {
-        let conc = concrete(m);
-        let ls = layers(m, m.lm / 2.0, None);
+        let conc = concrete(m, false);
+        // the middle of the member, every strand bonded there counted
+        // developed: the stresses that set each layer's ℓd
+        let ls = layers(m, 0.5 * (m.ends.0 + m.ends.1), None);
         let f = strain_compatibility(&conc, &ls);
         let full: Vec<f64> = f.stresses.iter().copied().take(m.layers.len()).collect();
         // the same answer holds with each strand capped at its own stress,
@@ -208,8 +224,9 @@ impl<'m> Memo<'m> {
         }
         Memo {
             full,
-            entries: vec![(capped, f)],
+            entries: vec![(false, capped, f)],
             conc,
+            conc_net: concrete(m, true),
             scratch: Vec::new(),
         }
     }
@@ -231,21 +248,22 @@ fn same(a: &[SteelLayer], b: &[SteelLayer]) -> bool {
         })
 }
 
-/// Flexure at distance `d` from the nearer end.
-pub fn at<'m>(m: &'m Member, d: f64, pre: Effective, memo: &mut Memo<'m>) -> AtStation {
+/// Flexure at `x`.
+pub fn at<'m>(m: &'m Member, x: f64, pre: Effective, memo: &mut Memo<'m>) -> AtStation {
     let mut ls = std::mem::take(&mut memo.scratch);
-    layers_into(m, d, pre, Some(&memo.full), &mut ls);
-    let i = match memo.entries.iter().position(|(x, _)| same(x, &ls)) {
+    layers_into(m, x, pre, Some(&memo.full), &mut ls);
+    let net = over_cut(m, x);
+    let i = match memo.entries.iter().position(|(n, l, _)| *n == net && same(l, &ls)) {
         Some(i) => i,
         None => {
-            let f = strain_compatibility(&memo.conc, &ls);
-            memo.entries.push((ls.clone(), f));
+            let f = strain_compatibility(if net { &memo.conc_net } else { &memo.conc }, &ls);
+            memo.entries.push((net, ls.clone(), f));
             memo.entries.len() - 1
         }
     };
     memo.scratch = ls;
-    let f = &memo.entries[i].1;
-    let (phi_dev, developed) = phi_development(m, d, &memo.full);
+    let f = &memo.entries[i].2;
+    let (phi_dev, developed) = phi_development(m, x, &memo.full);
     let phi = f.phi.min(phi_dev);
     AtStation {
         mn_lbin: f.mn,
@@ -254,13 +272,13 @@ pub fn at<'m>(m: &'m Member, d: f64, pre: Effective, memo: &mut Memo<'m>) -> AtS
         eps_t: f.eps_t,
         c_in: f.c,
         developed,
-        mcr_lbin: mcr_with(m, d, pre),
+        mcr_lbin: mcr_with(m, x, pre),
     }
 }
 
 /// Mn at midspan by ACI Eq. 20.3.2.3.1 (lbf·in) and its fps (psi).
 pub fn approximate_mn(m: &Member) -> (f64, f64) {
-    let conc = concrete(m);
+    let conc = concrete(m, false);
     let dp = m.h_total - m.pattern.centroid();
     let fc = m.case.topping.as_ref().map_or(m.mix.fc.get(), |t| t.mix.fc.get());
     let fps = fps_approx(m.aps, m.strand.fpu.get(), m.strand.fpy.get(), m.bare.width_in, dp, fc, conc.beta1);
@@ -316,8 +334,7 @@ fn search(an: &Analysis) -> Option<Worst> {
         }
         let memo = memo.get_or_insert_with(|| Memo::with_full(m, &an.full));
         let mut state = |x: f64| {
-            let d = m.end_distance(x);
-            let f = at(m, d, m.effective_at(d), memo);
+            let f = at(m, x, m.effective_at(x), memo);
             let (mu, combo, _, _) = crate::case::factored(&m.effects(x));
             (f, mu, combo)
         };

@@ -45,17 +45,15 @@ pub const TENSION: CheckInfo = CheckInfo {
     load_driven: false,
 };
 
-/// (top, bottom) fibre stress at release at distance `d` from the end, psi,
-/// compression positive.
-pub fn at(m: &Member, d: f64) -> (f64, f64) {
-    let (p, y) = m.force_at(d, m.history.fpo_psi, m.ltr);
-    let e = m.bare.yb_in - y;
-    let mg = m.release_moment(d);
-    let a = m.bare.area_in2;
-    (
-        p / a - p * e / m.bare.st_in3 + mg / m.bare.st_in3,
-        p / a + p * e / m.bare.sb_in3 - mg / m.bare.sb_in3,
-    )
+/// (top, bottom) fibre stress at release at `x`, psi, compression
+/// positive; the net section where an opening cuts the unit.
+pub fn at(m: &Member, x: f64) -> (f64, f64) {
+    let (p, y) = m.force_at(x, m.history.fpo_psi, m.ltr);
+    let b = m.props_at(x).0;
+    let e = b.yb_in - y;
+    let mg = m.release_moment(x);
+    let a = b.area_in2;
+    (p / a - p * e / b.st_in3 + mg / b.st_in3, p / a + p * e / b.sb_in3 - mg / b.sb_in3)
 }
 
 /// Whether `d` lies in the end region (within ℓtr of the member end). A
@@ -74,7 +72,7 @@ fn fibre(an: &Analysis, pick: usize, sign: f64, end: f64, other: f64) -> Option<
         an,
         move |_, r| get(r),
         |d, at_station| if in_end(an, d, at_station) { end } else { other },
-        |_, d| get(at(m, d)),
+        |x, _| get(at(m, x)),
     )
 }
 

@@ -20,7 +20,7 @@
 use serde::Serialize;
 
 use super::{Analysis, CheckInfo, CheckResult, Group, Peak, Reads, peak};
-use crate::case::{Effects, ServiceClass, service_moments};
+use crate::case::{Effects, ServiceClass, service_least, service_moments};
 use crate::member::{Effective, Member};
 
 /// Registry entry: tension (class).
@@ -79,20 +79,27 @@ pub struct AtStation {
     pub topping_total_psi: f64,
     /// Topping top fibre, sustained load (0 untopped).
     pub topping_sustained_psi: f64,
+    /// Precast top fibre under the least service moment (the most hogging
+    /// of D alone and the combinations above): where an overhang hogs.
+    pub top_least_psi: f64,
+    /// Precast bottom fibre under the least service moment.
+    pub bottom_least_psi: f64,
 }
 
-/// Service stresses at distance `d` from the end.
-pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
+/// Service stresses at `x`, with the prestress there: the net section
+/// where an opening cuts the unit.
+pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     let (pe, y) = (pre.pe, pre.y);
-    let e = m.bare.yb_in - y;
-    let b = m.bare;
+    let (b, comp) = m.props_at(x);
+    let e = b.yb_in - y;
     let pre_top = pe / b.area_in2 - pe * e / b.st_in3;
     let pre_bot = pe / b.area_in2 + pe * e / b.sb_in3;
     let mnc = eff.m_self + eff.m_topping;
     let (sus, tot) = service_moments(eff, m.case.sustained_live);
-    match m.comp {
+    let least = service_least(eff, m.case.sustained_live);
+    match comp {
         Some(c) => {
-            let (ms, mt) = (sus - mnc, tot - mnc);
+            let (ms, mt, ml) = (sus - mnc, tot - mnc, least - mnc);
             AtStation {
                 bottom_total_psi: pre_bot - mnc / b.sb_in3 - mt / c.sb_in3,
                 top_total_psi: pre_top + mnc / b.st_in3 + mt / c.st_precast_in3,
@@ -100,6 +107,8 @@ pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
                 top_sustained_psi: pre_top + mnc / b.st_in3 + ms / c.st_precast_in3,
                 topping_total_psi: mt / c.st_topping_in3,
                 topping_sustained_psi: ms / c.st_topping_in3,
+                top_least_psi: pre_top + mnc / b.st_in3 + ml / c.st_precast_in3,
+                bottom_least_psi: pre_bot - mnc / b.sb_in3 - ml / c.sb_in3,
             }
         }
         None => AtStation {
@@ -109,6 +118,8 @@ pub fn at(m: &Member, pre: Effective, eff: &Effects) -> AtStation {
             top_sustained_psi: pre_top + sus / b.st_in3,
             topping_total_psi: 0.0,
             topping_sustained_psi: 0.0,
+            top_least_psi: pre_top + least / b.st_in3,
+            bottom_least_psi: pre_bot - least / b.sb_in3,
         },
     }
 }
@@ -125,14 +136,14 @@ pub fn class_of(ft: f64, fc: f64) -> ServiceClass {
 }
 
 /// The service stresses at any x, for the vertex of a segment.
-fn exact(m: &Member, x: f64, d: f64) -> AtStation {
-    at(m, m.effective_at(d), &m.effects(x))
+fn exact(m: &Member, x: f64) -> AtStation {
+    at(m, x, m.effective_at(x), &m.effects(x))
 }
 
 /// One service fibre's worst point against a constant limit.
 fn worst(an: &Analysis, pick: fn(&AtStation) -> f64, limit: f64) -> Option<Peak> {
     let m = &an.member;
-    peak(an, move |s, _| pick(s), |_, _| limit, |x, d| pick(&exact(m, x, d)))
+    peak(an, move |s, _| pick(s), |_, _| limit, |x, _| pick(&exact(m, x)))
 }
 
 /// The greatest bottom-fibre tension under total service load (psi,

@@ -148,19 +148,24 @@ pub fn vs_provided(m: &Member, dp: f64) -> Option<f64> {
     Some(n * w.area.get() * w.fy.get().min(FYT_MAX_PSI) * dp / w.spacing.get())
 }
 
-/// Shear strength at distance `d` from the end, from the station's
-/// unfactored effects: every combination of ASCE 7-16 §2.3.1.
-pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects) -> AtStation {
+/// Shear strength at `x`, from the station's unfactored effects: every
+/// combination of ASCE 7-16 §2.3.1. Where an opening cuts the unit, the net
+/// section and the webs left (over the opening and h/2 beyond). Where a
+/// combination's moment does not sag (over a support with an overhang),
+/// Eq. 22.5.6.3.1a, written for flexure-shear cracking from the soffit,
+/// does not apply and Vci is taken at its lower bound 1.7λ√f′c bw dp, with
+/// dp = 0.8h (conservative; common practice, no source).
+pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     let lam = m.mix.aggregate.lambda();
     let rt = m.mix.fc.get().sqrt().min(100.0);
-    let b = m.bare;
-    let bw = b.web_width_min_in;
+    let (b, comp) = m.props_at(x);
+    let bw = m.bw_at(x);
     let (pe, y) = (pre.pe_shear, pre.y_shear);
     let dp = (m.h_total - y).max(0.8 * m.h_total);
     let e = b.yb_in - y;
     let fpe = pe / b.area_in2 + pe * e / b.sb_in3;
     let mnc = eff.m_self + eff.m_topping;
-    let (s_ext, fd, fpc) = match m.comp {
+    let (s_ext, fd, fpc) = match comp {
         Some(c) => {
             // stress at the composite centroid (or the web–flange junction
             // when that centroid lies in the flange) from prestress and the
@@ -177,8 +182,9 @@ pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects) -> AtStation {
     let mcre_raw = s_ext * (6.0 * lam * rt + fpe - fd);
     let mcre = mcre_raw.max(0.0);
     let vd = eff.v_dead().abs();
-    let vcw = (3.5 * lam * rt + 0.3 * fpc) * bw * dp + m.vp_at(d);
+    let vcw = (3.5 * lam * rt + 0.3 * fpc) * bw * dp + m.vp_at(x);
     let vci_min = 1.7 * lam * rt * bw * dp;
+    let vci_hog = 1.7 * lam * rt * bw * 0.8 * m.h_total;
     // §22.5.1.2: Vs counted at most 8√f′c bw d; stems whose reinforcement
     // the catalog does not give are taken to receive ordinary stem
     // reinforcement, at most 4√f′c bw d (beyond it §9.7.6.2.2 halves the
@@ -194,9 +200,13 @@ pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects) -> AtStation {
         let (mu, v) = c.apply(eff);
         k += 1;
         let vu = v.abs();
-        let vi = (vu - vd).max(0.0);
-        let mmax = (mu - eff.m_dead()).max(1e-6);
-        let vci_raw = 0.6 * lam * rt * bw * dp + vd + vi * mcre / mmax;
+        let (vci_raw, vci_min) = if mu > 0.0 {
+            let vi = (vu - vd).max(0.0);
+            let mmax = (mu - eff.m_dead()).max(1e-6);
+            (0.6 * lam * rt * bw * dp + vd + vi * mcre / mmax, vci_min)
+        } else {
+            (vci_hog, vci_hog)
+        };
         let vci = vci_raw.max(vci_min);
         let vc = vci.min(vcw).max(0.0);
         Combo {
@@ -220,10 +230,9 @@ pub fn at(m: &Member, d: f64, pre: Effective, eff: &Effects) -> AtStation {
     AtStation { combos, gov }
 }
 
-/// Shear strength at any x of the span.
+/// Shear strength at any x.
 pub fn at_x(m: &Member, x: f64) -> AtStation {
-    let d = m.end_distance(x);
-    at(m, d, m.effective_at(d), &m.effects(x))
+    at(m, x, m.effective_at(x), &m.effects(x))
 }
 
 /// The worst point of a shear ratio over the member.
@@ -252,10 +261,15 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
             .max_by(|a, b| a.1.total_cmp(&b.1))
             .expect("three")
     };
-    let pts: Vec<(f64, AtStation)> = an.stations.iter().filter_map(|s| s.shear.map(|v| (s.x_in, v))).collect();
+    let pts: Vec<(usize, f64, AtStation)> = an
+        .stations
+        .iter()
+        .enumerate()
+        .filter_map(|(i, s)| s.shear.map(|v| (i, s.x_in, v)))
+        .collect();
     let mut best = pts
         .iter()
-        .map(|(x, a)| {
+        .map(|(_, x, a)| {
             let (i, r) = top(a);
             Worst {
                 x_in: *x,
@@ -268,8 +282,9 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
     // this fraction of the worst point found
     const SCREEN: f64 = 2e-3;
     for w in pts.windows(2) {
-        let ((x0, a0), (x1, a1)) = (w[0], w[1]);
-        if x1 - x0 < 1e-6 {
+        let ((i0, x0, a0), (i1, x1, a1)) = (w[0], w[1]);
+        // two shear zones (span and overhang) are not one stretch
+        if x1 - x0 < 1e-6 || i1 != i0 + 1 {
             continue;
         }
         let mut mid: Option<AtStation> = None;

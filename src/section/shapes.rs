@@ -366,6 +366,63 @@ fn clip_band(points: &[(f64, f64)], lo: f64, hi: f64) -> Vec<(f64, f64)> {
     clip(&a, &|y| y <= hi, hi)
 }
 
+/// Sutherland–Hodgman clip of a polygon to the box x0 ≤ x ≤ x1,
+/// lo ≤ y ≤ hi; exact for the area integrals, as [`clip_band`].
+pub fn clip_box(points: &[(f64, f64)], (x0, x1): (f64, f64), (lo, hi): (f64, f64)) -> Vec<(f64, f64)> {
+    fn clip(pts: &[(f64, f64)], axis: usize, keep_above: bool, at: f64) -> Vec<(f64, f64)> {
+        let get = |p: (f64, f64)| if axis == 0 { p.0 } else { p.1 };
+        let inside = |p: (f64, f64)| if keep_above { get(p) >= at } else { get(p) <= at };
+        let mut out = Vec::with_capacity(pts.len() + 4);
+        for i in 0..pts.len() {
+            let p = pts[i];
+            let q = pts[(i + 1) % pts.len()];
+            let (pin, qin) = (inside(p), inside(q));
+            if pin {
+                out.push(p);
+            }
+            if pin != qin {
+                let t = (at - get(p)) / (get(q) - get(p));
+                out.push((p.0 + t * (q.0 - p.0), p.1 + t * (q.1 - p.1)));
+            }
+        }
+        out
+    }
+    let mut v = points.to_vec();
+    for (axis, above, at) in [(0, true, x0), (0, false, x1), (1, true, lo), (1, false, hi)] {
+        if v.len() < 3 {
+            return Vec::new();
+        }
+        if at.is_finite() {
+            v = clip(&v, axis, above, at);
+        }
+    }
+    v
+}
+
+/// Where the horizontal line at `y` is inside a polygon: sorted intervals of x.
+pub fn intervals(points: &[(f64, f64)], y: f64) -> Vec<(f64, f64)> {
+    let n = points.len();
+    let mut xs: Vec<f64> = Vec::new();
+    for i in 0..n {
+        let (a, b) = (points[i], points[(i + 1) % n]);
+        // half-open in y, so a vertex on the line counts once
+        if (a.1 <= y) != (b.1 <= y) {
+            xs.push(a.0 + (y - a.1) / (b.1 - a.1) * (b.0 - a.0));
+        }
+    }
+    xs.sort_by(f64::total_cmp);
+    xs.chunks_exact(2).map(|c| (c[0], c[1])).collect()
+}
+
+/// Points of a curved shape's outline dense enough for area integrals to
+/// 0.01 % (a 256-gon for a circle), or a polygon's own points.
+pub fn outline_points(s: &Shape) -> Vec<(f64, f64)> {
+    match s {
+        Shape::Polygon(p) => p.points.clone(),
+        _ => s.boundary_points(256),
+    }
+}
+
 impl Polygon {
     /// Area integrals of the part between heights `lo` and `hi`.
     pub fn moments_between(&self, lo: f64, hi: f64) -> Moments {
