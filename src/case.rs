@@ -250,6 +250,9 @@ pub struct DesignCase {
     /// Overhangs beyond the left and right supports (balcony, eave), from
     /// the bearing centre to the tip.
     pub overhang: (Length, Length),
+    /// Mild top reinforcement over a support with an overhang, area per
+    /// unit (Grade 60, in the topping or grouted keyways), in².
+    pub top_bars: crate::units::Area,
     /// Composite topping, if any.
     pub topping: Option<Topping>,
     /// Floor or roof.
@@ -299,6 +302,7 @@ impl DesignCase {
             free_edge: false,
             stem_share: StemShare::Lever,
             overhang: (Length::new(0.0), Length::new(0.0)),
+            top_bars: crate::units::Area::new(0.0),
             topping: None,
             member_use: Use::Floor,
             class_allowed: ServiceClass::U,

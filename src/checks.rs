@@ -11,14 +11,18 @@ pub mod cover;
 pub mod deflection;
 pub mod fire;
 pub mod flexure;
+pub mod hogging;
 pub mod horizontal_shear;
 pub mod jacking;
 pub mod min_strength;
 pub mod production_length;
+pub mod punching;
 pub mod release;
 pub mod service;
 pub mod shear;
 pub mod spacing;
+pub mod tip;
+pub mod top_tension;
 pub mod vibration;
 pub mod web_steel;
 
@@ -229,12 +233,20 @@ pub const REGISTRY: &[Check] = &[
         run: flexure::run,
     },
     Check {
+        info: hogging::INFO,
+        run: hogging::run,
+    },
+    Check {
         info: min_strength::INFO,
         run: min_strength::run,
     },
     Check {
         info: shear::INFO,
         run: shear::run,
+    },
+    Check {
+        info: punching::INFO,
+        run: punching::run,
     },
     Check {
         info: shear::DEEP_INFO,
@@ -261,6 +273,10 @@ pub const REGISTRY: &[Check] = &[
         run: service::run_tension,
     },
     Check {
+        info: top_tension::INFO,
+        run: top_tension::run,
+    },
+    Check {
         info: service::SUSTAINED,
         run: service::run_sustained,
     },
@@ -279,6 +295,10 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: deflection::AFTER,
         run: deflection::run_after,
+    },
+    Check {
+        info: tip::INFO,
+        run: tip::run,
     },
     Check {
         info: vibration::INFO,
@@ -315,6 +335,8 @@ pub struct Station {
     pub d_in: f64,
     /// Governing factored moment, lbf·in.
     pub mu_lbin: f64,
+    /// The most hogging factored moment (0 when no combination hogs), lbf·in.
+    pub mu_neg_lbin: f64,
     /// Its combination.
     pub mu_combo: &'static str,
     /// Governing factored shear (magnitude), lbf.
@@ -915,10 +937,12 @@ fn loaded(member: &Member, x: f64, zones: &[(f64, f64)], pre: Effective, flexure
     let eff = member.effects(x);
     let (mu, mu_combo, vu, vu_combo) = factored(&eff);
     let shear = in_zones(zones, x).then(|| shear::at(member, x, pre, &eff));
+    let mu_neg = crate::case::COMBINATIONS.iter().map(|c| c.apply(&eff).0).fold(0.0, f64::min);
     Station {
         x_in: x,
         d_in: member.end_distance(x),
         mu_lbin: mu,
+        mu_neg_lbin: mu_neg,
         mu_combo,
         vu_lbf: vu,
         effects: eff,

@@ -11,7 +11,7 @@
 //! a flag's text; what was typed in the UI.
 
 use crate::bay::{Bay, Objective};
-use crate::case::{Attachment, LossMethod, ServiceClass, Use};
+use crate::case::{Attachment, LossMethod, ServiceClass, StemShare, UnitShare, Use};
 use crate::fire::Exposure;
 use crate::input::diag::suggestion;
 use crate::section::Family;
@@ -28,6 +28,10 @@ pub enum Quantity {
     Stress,
     /// An area (in²).
     Area,
+    /// A force (lbf).
+    Force,
+    /// A force per length (lbf/in).
+    LineLoad,
 }
 
 impl Quantity {
@@ -38,6 +42,8 @@ impl Quantity {
             Quantity::AreaLoad => AreaLoad::parse(text).map(|q| q.get()),
             Quantity::Stress => Stress::parse(text).map(|q| q.get()),
             Quantity::Area => Area::parse(text).map(|q| q.get()),
+            Quantity::Force => crate::units::Force::parse(text).map(|q| q.get()),
+            Quantity::LineLoad => crate::units::LineLoad::parse(text).map(|q| q.get()),
         };
         r.map_err(|e| e.to_string())
     }
@@ -48,6 +54,8 @@ impl Quantity {
             Quantity::AreaLoad => AreaLoad::new(v).in_unit(unit),
             Quantity::Stress => Stress::new(v).in_unit(unit),
             Quantity::Area => Area::new(v).in_unit(unit),
+            Quantity::Force => crate::units::Force::new(v).in_unit(unit),
+            Quantity::LineLoad => crate::units::LineLoad::new(v).in_unit(unit),
         }
     }
     /// The plain name, for messages and the schema ("a length").
@@ -58,6 +66,8 @@ impl Quantity {
             Quantity::AreaLoad => crate::units::AreaLoadK::NAME,
             Quantity::Stress => crate::units::StressK::NAME,
             Quantity::Area => crate::units::AreaK::NAME,
+            Quantity::Force => crate::units::ForceK::NAME,
+            Quantity::LineLoad => crate::units::LineLoadK::NAME,
         }
     }
 }
@@ -112,6 +122,15 @@ pub enum Form {
     ChoiceList(&'static [&'static str]),
     /// Free text (no control characters).
     Text,
+    /// One of a set of words, or a quantity within a range.
+    ChoiceOrQuantity {
+        /// The words.
+        choices: &'static [&'static str],
+        /// The quantity's kind.
+        q: Quantity,
+        /// Its allowed range.
+        range: Range,
+    },
 }
 
 /// A criterion's value, in internal units.
@@ -167,6 +186,8 @@ const EXPOSURES: &[&str] = &["interior", "weather"];
 const ATTACHED: &[&str] = &["none", "tolerant", "sensitive"];
 const OBJECTIVES: &[&str] = &["lightest", "shallowest", "least-steel", "cheapest", "most-reserve"];
 const FAMILIES: &[&str] = &["hollow-core", "double-tee", "generic"];
+const SHARES: &[&str] = &["whole", "rule"];
+const STEM_SHARES: &[&str] = &["lever", "one"];
 
 /// The area-load range every load criterion allows, psf.
 const LOAD_RANGE: Range = Range {
@@ -439,6 +460,123 @@ pub const CRITERIA: &[Criterion] = &[
         set: |b, v| b.case.bearing = Length::new(num(&v)),
     },
     Criterion {
+        key: "overhang_left",
+        label: "Overhang (L)",
+        flag: Some("overhang-left"),
+        help: "overhang beyond the left support (a balcony, an eave), bearing centre to tip",
+        form: Form::Quantity {
+            q: LENGTH,
+            range: Range {
+                lo: 0.0,
+                hi: 30.0,
+                unit: "ft",
+            },
+        },
+        default: "0 ft",
+        required: false,
+        inherit: false,
+        units: ("ft-in", "m"),
+        get: |b| Value::Num(Some(b.case.overhang.0.get())),
+        set: |b, v| b.case.overhang.0 = Length::new(num(&v)),
+    },
+    Criterion {
+        key: "overhang_right",
+        label: "Overhang (R)",
+        flag: Some("overhang-right"),
+        help: "overhang beyond the right support, bearing centre to tip",
+        form: Form::Quantity {
+            q: LENGTH,
+            range: Range {
+                lo: 0.0,
+                hi: 30.0,
+                unit: "ft",
+            },
+        },
+        default: "0 ft",
+        required: false,
+        inherit: false,
+        units: ("ft-in", "m"),
+        get: |b| Value::Num(Some(b.case.overhang.1.get())),
+        set: |b, v| b.case.overhang.1 = Length::new(num(&v)),
+    },
+    Criterion {
+        key: "top_bars",
+        label: "Top bars",
+        flag: Some("top-bars"),
+        help: "mild top reinforcement over a support with an overhang, area per unit (Grade 60, centroid 2 in below the top: in the topping or grouted keyways)",
+        form: Form::Quantity {
+            q: Quantity::Area,
+            range: Range {
+                lo: 0.0,
+                hi: 20.0,
+                unit: "in2",
+            },
+        },
+        default: "0 in2",
+        required: false,
+        inherit: false,
+        units: ("in2", "mm2"),
+        get: |b| Value::Num(Some(b.case.top_bars.get())),
+        set: |b, v| b.case.top_bars = Area::new(num(&v)),
+    },
+    Criterion {
+        key: "share",
+        label: "Share (units)",
+        flag: Some("share"),
+        help: "how hollow-core units share a point, strip or patch load: whole (the loaded unit carries it all; conservative), rule (the published distribution width, from memory — low confidence), or an effective width such as \"8 ft\"",
+        form: Form::ChoiceOrQuantity {
+            choices: SHARES,
+            q: LENGTH,
+            range: Range {
+                lo: 1.0,
+                hi: 100.0,
+                unit: "ft",
+            },
+        },
+        default: "whole",
+        required: false,
+        inherit: true,
+        units: ("ft-in", "m"),
+        get: |b| match b.case.unit_share {
+            UnitShare::Whole => Value::Pick(0),
+            UnitShare::Rule => Value::Pick(1),
+            UnitShare::Width(w) => Value::Num(Some(w.get())),
+        },
+        set: |b, v| {
+            b.case.unit_share = match v {
+                Value::Pick(1) => UnitShare::Rule,
+                Value::Num(Some(w)) => UnitShare::Width(Length::new(w)),
+                _ => UnitShare::Whole,
+            }
+        },
+    },
+    Criterion {
+        key: "free_edge",
+        label: "Free edge",
+        flag: Some("free-edge"),
+        help: "the loaded unit has no grouted neighbour on one side (the published rule then takes half its width)",
+        form: Form::Flag,
+        default: "false",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| Value::Flag(b.case.free_edge),
+        set: |b, v| b.case.free_edge = v == Value::Flag(true),
+    },
+    Criterion {
+        key: "stem_share",
+        label: "Share (stems)",
+        flag: Some("stem-share"),
+        help: "how a double tee's stems share a load: lever (statics across the flange) or one (one stem carries it all; conservative)",
+        form: Form::Choice(STEM_SHARES),
+        default: "lever",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| Value::Pick(if b.case.stem_share == StemShare::OneStem { 1 } else { 0 }),
+        set: |b, v| b.case.stem_share = if pick(&v) == 1 { StemShare::OneStem } else { StemShare::Lever },
+    },
+    Criterion {
         key: "sustained",
         label: "Sustained",
         flag: Some("sustained"),
@@ -620,38 +758,6 @@ pub const CRITERIA: &[Criterion] = &[
     },
 ];
 
-/// The line-load intensity range, klf.
-pub const LINE_W: Range = Range {
-    lo: 0.0,
-    hi: 100.0,
-    unit: "klf",
-};
-
-/// Whether a load is dead or live.
-pub const LOAD_KINDS: &[&str] = &["dead", "live"];
-
-/// A line load across the member, from its parts as text: intensity
-/// (`w`, 0–100 klf), place from the left support (`at`, within `span`),
-/// dead or live (default dead). A problem names the part it is in.
-pub fn line_load(w: &str, at: &str, kind: Option<&str>, span: Length) -> Result<crate::case::LineLoadSpec, (&'static str, String)> {
-    let wv = crate::units::LineLoad::parse(w).map_err(|e| ("w", e.to_string()))?;
-    if !(LINE_W.lo..=LINE_W.hi).contains(&wv.in_unit("klf")) {
-        return Err(("w", range_error(w, &LINE_W)));
-    }
-    let a = Length::parse(at).map_err(|e| ("at", e.to_string()))?;
-    if a.get() < 0.0 || a.get() > span.get() + 1e-9 {
-        return Err(("at", format!("{} is not within the {} span", quoted(at.trim()), fmt_ft_in(span))));
-    }
-    let kind = match kind {
-        None => crate::case::LoadKind::Dead,
-        Some(k) => match choose(k, LOAD_KINDS).map_err(|e| ("kind", e))? {
-            0 => crate::case::LoadKind::Dead,
-            _ => crate::case::LoadKind::Live,
-        },
-    };
-    Ok(crate::case::LineLoadSpec { w: wv, at: a, kind })
-}
-
 /// A criterion by its job-file key.
 pub fn find(key: &str) -> Option<&'static Criterion> {
     CRITERIA.iter().find(|c| c.key == key)
@@ -684,7 +790,7 @@ pub fn check_text(s: &str) -> Result<(), String> {
     }
 }
 
-fn range_error(text: &str, r: &Range) -> String {
+pub(crate) fn range_error(text: &str, r: &Range) -> String {
     format!(
         "{} is outside the allowed range {} to {} {}",
         quoted(text.trim()),
@@ -694,7 +800,7 @@ fn range_error(text: &str, r: &Range) -> String {
     )
 }
 
-fn choose(text: &str, choices: &[&str]) -> Result<usize, String> {
+pub(crate) fn choose(text: &str, choices: &[&str]) -> Result<usize, String> {
     let t = text.trim();
     choices.iter().position(|c| c.eq_ignore_ascii_case(t)).ok_or_else(|| {
         format!(
@@ -754,6 +860,26 @@ impl Criterion {
                 Ok(Value::Count(Some(v as u32)))
             }
             Form::Choice(choices) => choose(text, choices).map(Value::Pick),
+            Form::ChoiceOrQuantity { choices, q, range } => {
+                if let Ok(i) = choose(text, choices) {
+                    return Ok(Value::Pick(i));
+                }
+                let t = text.trim();
+                if !t.starts_with(|c: char| c.is_ascii_digit() || c == '.') {
+                    return Err(format!(
+                        "{} is not allowed{}; use one of: {}, or {} such as \"8 ft\"",
+                        quoted(t),
+                        suggestion(t, choices.iter().copied()),
+                        choices.join(", "),
+                        q.name()
+                    ));
+                }
+                let v = q.parse(text)?;
+                if !(range.lo..=range.hi).contains(&q.in_unit(v, range.unit)) {
+                    return Err(range_error(text, &range));
+                }
+                Ok(Value::Num(Some(v)))
+            }
             Form::Flag => match text.trim() {
                 "true" | "yes" => Ok(Value::Flag(true)),
                 "false" | "no" => Ok(Value::Flag(false)),
@@ -854,7 +980,7 @@ impl Criterion {
     pub fn write(&self, bay: &Bay, like: Option<&str>, sys: System) -> String {
         let v = self.value(bay);
         match (like, self.form) {
-            (Some(l), Form::Quantity { q, .. }) => match v {
+            (Some(l), Form::Quantity { q, .. } | Form::ChoiceOrQuantity { q, .. }) => match v {
                 Value::Num(Some(x)) => format_like(q, x, l).unwrap_or_else(|| self.format(&v, sys, true)),
                 _ => self.format(&v, sys, true),
             },
@@ -886,7 +1012,8 @@ impl Criterion {
 
     fn format(&self, v: &Value, sys: System, exact: bool) -> String {
         match (self.form, v) {
-            (Form::Quantity { q, .. }, Value::Num(Some(x))) => self.quantity_text(q, *x, sys, exact),
+            (Form::Quantity { q, .. } | Form::ChoiceOrQuantity { q, .. }, Value::Num(Some(x))) => self.quantity_text(q, *x, sys, exact),
+            (Form::ChoiceOrQuantity { choices, .. }, Value::Pick(i)) => choices.get(*i).copied().unwrap_or("").to_string(),
             (_, Value::Num(None)) | (_, Value::Count(None)) | (_, Value::Text(None)) => "none".into(),
             (Form::Number { .. }, Value::Num(Some(x))) => trim_number(*x, 6),
             (Form::Rating, Value::Num(Some(h))) => format!("{} h", trim_number(*h, 2)),
@@ -944,6 +1071,14 @@ impl Criterion {
             ),
             Form::ChoiceList(c) => format!("\"all\", or a list of: {}", c.join(", ")),
             Form::Text => "text, no control characters".into(),
+            Form::ChoiceOrQuantity { choices, q, range } => format!(
+                "{}, or {} from {} to {} {}",
+                choices.join(", "),
+                q.name(),
+                trim_number(range.lo, 6),
+                trim_number(range.hi, 6),
+                range.unit
+            ),
         }
     }
 }

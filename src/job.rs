@@ -15,7 +15,7 @@ use toml::de::{DeTable, DeValue};
 
 pub use crate::bay::{Bay, Objective};
 use crate::catalog::{Problems, content_hash};
-use crate::criteria::{CRITERIA, Criterion, Form, Value, check_text, find, line_load};
+use crate::criteria::{CRITERIA, Criterion, Form, Value, check_text, find};
 use crate::input::diag::suggestion;
 use crate::input::{Ctx, S, de, join, span, tables};
 use crate::units::{Length, System};
@@ -61,8 +61,9 @@ struct RawJobMeta {
 }
 
 const TOP_KEYS: &[&str] = &["job", "defaults", "bay"];
-/// Bay keys that are not criteria: line loads and the shortlist marks.
-const BAY_EXTRA: &[&str] = &["line", "marked"];
+/// Bay keys that are not criteria: the items ([`crate::items::ITEMS`]:
+/// line, point, strip and patch loads, openings) and the shortlist marks.
+const BAY_EXTRA: &[&str] = &["line", "point", "strip", "patch", "opening", "marked"];
 
 /// A value as the criteria read it: its text, and where it is.
 #[derive(Debug, Clone)]
@@ -183,55 +184,71 @@ fn bay(cx: &mut Ctx, table: &Spanned<DeValue>, defaults: &BTreeMap<&'static str,
     }
     for (key, v) in extra {
         match key.as_str() {
-            "line" => {
-                let DeValue::Array(items) = v.get_ref() else {
+            key if crate::items::find(key).is_some() => {
+                let kind = crate::items::find(key).expect("an item kind");
+                // with no span to measure against, places are not judged
+                let mut case = b.case.clone();
+                if !span_ok {
+                    case.span = Length::new(f64::INFINITY);
+                }
+                let DeValue::Array(list) = v.get_ref() else {
                     cx.rep.error(
                         Some(v.span()),
-                        &join(&name, "line"),
-                        "a list of tables is needed, e.g. [{ w = \"0.6 klf\", at = \"8 ft\" }]",
+                        &join(&name, key),
+                        format!("a list of tables is needed, e.g. {key} = [{{ {} }}]", toml_example(kind)),
                     );
                     ok = false;
                     continue;
                 };
-                for (i, item) in items.iter().enumerate() {
-                    let lp = join(&name, &format!("line {}", i + 1));
+                let mut read = Vec::with_capacity(list.len());
+                for (i, item) in list.iter().enumerate() {
+                    let lp = join(&name, &format!("{key} {}", i + 1));
                     let DeValue::Table(lt) = item.get_ref() else {
-                        cx.rep.error(Some(item.span()), &lp, "a table { w, at, kind } is needed");
-                        ok = false;
-                        continue;
-                    };
-                    let field = |f: &str| lt.iter().find(|(k, _)| k.get_ref() == f).map(|(_, v)| v);
-                    for (k, _) in lt.iter() {
-                        if !["w", "at", "kind"].contains(&k.get_ref().as_ref()) {
-                            cx.rep.error(
-                                Some(k.span()),
-                                &lp,
-                                format!("unknown key '{}'; allowed here: w, at, kind", k.get_ref()),
-                            );
-                            ok = false;
-                        }
-                    }
-                    let text = |f: &str| field(f).and_then(|v| v.get_ref().as_str());
-                    let (Some(w), Some(at)) = (text("w"), text("at")) else {
                         cx.rep.error(
                             Some(item.span()),
                             &lp,
-                            "needs w (a line load, e.g. \"0.6 klf\") and at (a length from the left support) as quoted strings",
+                            format!("a table is needed, e.g. {{ {} }}", toml_example(kind)),
                         );
                         ok = false;
                         continue;
                     };
-                    // with no span to measure against, the place is not judged
-                    let span = if span_ok { b.case.span } else { Length::new(f64::INFINITY) };
-                    match line_load(w, at, text("kind"), span) {
-                        Ok(l) => b.case.line_loads.push(l),
-                        Err((f, e)) => {
-                            let at = field(f).map_or(item.span(), |v| v.span());
-                            cx.rep.error(Some(at), &join(&lp, f), e);
+                    let mut pairs: Vec<(&str, &str)> = Vec::with_capacity(lt.len());
+                    let mut fine = true;
+                    for (k, val) in lt.iter() {
+                        match val.get_ref().as_str() {
+                            Some(t) => pairs.push((k.get_ref().as_ref(), t)),
+                            None => {
+                                cx.rep.error(
+                                    Some(val.span()),
+                                    &join(&lp, k.get_ref()),
+                                    format!("found {}; a quoted string is needed, e.g. \"12 ft\"", val.get_ref().type_str()),
+                                );
+                                fine = false;
+                            }
+                        }
+                    }
+                    if !fine {
+                        ok = false;
+                        continue;
+                    }
+                    match kind.read(&pairs, &case) {
+                        Ok(vals) => read.push(vals),
+                        Err((part, e)) => {
+                            let at = part
+                                .and_then(|p| lt.iter().find(|(k, _)| k.get_ref() == p).map(|(_, v)| v.span()))
+                                .or_else(|| {
+                                    // an unknown part: point at its key
+                                    lt.iter()
+                                        .find(|(k, _)| !kind.parts.iter().any(|p| p.key == k.get_ref().as_ref()))
+                                        .map(|(k, _)| k.span())
+                                })
+                                .unwrap_or(item.span());
+                            cx.rep.error(Some(at), &part.map_or(lp.clone(), |p| join(&lp, p)), e);
                             ok = false;
                         }
                     }
                 }
+                kind.store(&mut b.case, read);
             }
             "marked" => match v.get_ref() {
                 DeValue::Array(a) if a.iter().all(|e| e.get_ref().as_str().is_some()) => {
@@ -547,17 +564,96 @@ fn item_text(item: Option<&toml_edit::Item>) -> Option<String> {
     item.and_then(|i| i.as_str()).map(str::to_string)
 }
 
-/// The line loads of a bay as a TOML array of inline tables.
-fn lines_value(b: &Bay) -> toml_edit::Value {
+/// An item as a TOML inline table of its parts (in the display system).
+fn item_table(kind: &crate::items::ItemKind, v: &[crate::items::Val], sys: System) -> toml_edit::InlineTable {
+    let mut t = toml_edit::InlineTable::new();
+    for (k, text) in kind.parts_text(v, sys) {
+        t.insert(k, text.into());
+    }
+    t
+}
+
+/// The items of one kind as a TOML array of inline tables.
+fn items_value(kind: &crate::items::ItemKind, b: &Bay, sys: System) -> toml_edit::Value {
     let mut a = toml_edit::Array::new();
-    for l in &b.case.line_loads {
-        let mut t = toml_edit::InlineTable::new();
-        t.insert("w", format!("{} klf", crate::units::trim_number(l.w.in_unit("klf"), 6)).into());
-        t.insert("at", crate::units::fmt_ft_in(l.at).into());
-        t.insert("kind", if l.kind == crate::case::LoadKind::Dead { "dead" } else { "live" }.into());
-        a.push(t);
+    for v in kind.list(&b.case) {
+        a.push(item_table(kind, &v, sys));
     }
     a.into()
+}
+
+/// An example of a kind's table, for messages.
+fn toml_example(kind: &crate::items::ItemKind) -> String {
+    kind.example()
+        .trim_matches('"')
+        .split(", ")
+        .map(|p| match p.split_once('=') {
+            Some((k, v)) => format!("{k} = \"{v}\""),
+            None => p.to_string(),
+        })
+        .collect::<Vec<_>>()
+        .join(", ")
+}
+
+/// Edit the list of one kind of item in a bay's table in place: an item
+/// that did not change keeps its text; a changed one is written anew; one
+/// taken out or added is taken out or added, the rest untouched.
+fn edit_items(table: &mut toml_edit::Table, kind: &crate::items::ItemKind, now: &Bay, before: &Bay, sys: System) {
+    let (a, b) = (kind.list(&now.case), kind.list(&before.case));
+    if a == b {
+        return;
+    }
+    if a.is_empty() {
+        table.remove(kind.key);
+        return;
+    }
+    // one item taken out of the middle: remove just that one
+    let removed = (b.len() == a.len() + 1)
+        .then(|| (0..b.len()).find(|&k| b[..k] == a[..k] && b[k + 1..] == a[k..]))
+        .flatten();
+    match table.get_mut(kind.key) {
+        Some(toml_edit::Item::Value(toml_edit::Value::Array(arr))) => {
+            if let Some(k) = removed {
+                arr.remove(k);
+                return;
+            }
+            for (i, v) in a.iter().enumerate() {
+                if b.get(i) != Some(v) {
+                    let t = item_table(kind, v, sys);
+                    if i < arr.len() {
+                        arr.replace(i, t);
+                    } else {
+                        arr.push(t);
+                    }
+                }
+            }
+            while arr.len() > a.len() {
+                arr.remove(arr.len() - 1);
+            }
+        }
+        Some(toml_edit::Item::ArrayOfTables(arr)) => {
+            if let Some(k) = removed {
+                arr.remove(k);
+                return;
+            }
+            for (i, v) in a.iter().enumerate() {
+                if b.get(i) != Some(v) {
+                    let mut t = toml_edit::Table::new();
+                    for (k, text) in kind.parts_text(v, sys) {
+                        t.insert(k, toml_edit::value(text));
+                    }
+                    match arr.get_mut(i) {
+                        Some(old) => *old = t,
+                        None => arr.push(t),
+                    }
+                }
+            }
+            while arr.len() > a.len() {
+                arr.remove(arr.len() - 1);
+            }
+        }
+        _ => put(table, kind.key, items_value(kind, now, sys)),
+    }
 }
 
 fn strings(items: &[String]) -> toml_edit::Value {
@@ -630,8 +726,8 @@ impl Job {
                 let text = c.write(now, like.as_deref(), sys);
                 put(table, c.key, toml_value(c, &text));
             }
-            if now.case.line_loads != before.case.line_loads {
-                put(table, "line", lines_value(now));
+            for kind in crate::items::ITEMS {
+                edit_items(table, kind, now, before, sys);
             }
             if now.marked != before.marked {
                 if now.marked.is_empty() {
@@ -673,8 +769,10 @@ impl Job {
                 }
                 t.insert(c.key, toml_edit::Item::Value(toml_value(c, &c.write(b, None, sys))));
             }
-            if !b.case.line_loads.is_empty() {
-                t.insert("line", toml_edit::Item::Value(lines_value(b)));
+            for kind in crate::items::ITEMS {
+                if !kind.list(&b.case).is_empty() {
+                    t.insert(kind.key, toml_edit::Item::Value(items_value(kind, b, sys)));
+                }
             }
             if !b.marked.is_empty() {
                 t.insert("marked", toml_edit::Item::Value(strings(&b.marked)));

@@ -23,6 +23,7 @@ pub mod criteria;
 pub mod files;
 pub mod fire;
 pub mod input;
+pub mod items;
 pub mod job;
 pub mod loads;
 pub mod material;

@@ -220,6 +220,44 @@ impl Geometry {
         }
     }
 
+    /// The section turned upside down (y → depth − y): its soffit becomes
+    /// the compression face of a hogging moment.
+    pub fn flipped(&self) -> Geometry {
+        let h = self.depth;
+        let flip_poly = |p: &Polygon| Polygon {
+            points: p.points.iter().rev().map(|&(x, y)| (x, h - y)).collect(),
+        };
+        Geometry {
+            outline: flip_poly(&self.outline),
+            voids: self
+                .voids
+                .iter()
+                .map(|v| match *v {
+                    Shape::Polygon(ref p) => Shape::Polygon(flip_poly(p)),
+                    Shape::Circle { cx, cy, r } => Shape::Circle { cx, cy: h - cy, r },
+                    Shape::Stadium { cx, cy, w, h: hh } => Shape::Stadium { cx, cy: h - cy, w, h: hh },
+                    Shape::RoundedRect { cx, cy, w, h: hh, r } => Shape::RoundedRect {
+                        cx,
+                        cy: h - cy,
+                        w,
+                        h: hh,
+                        r,
+                    },
+                })
+                .collect(),
+            reduction: self.reduction.map(|r| AreaReduction {
+                area: r.area,
+                centroid: h - r.centroid,
+            }),
+            width: self.width,
+            depth: h,
+            top_flange: self.bottom_flange,
+            bottom_flange: self.top_flange,
+            stems: self.stems.clone(),
+            chamfer: 0.0,
+        }
+    }
+
     /// Net width of concrete cut by the horizontal line at `y`, in: the
     /// summed web width at that height. A lumped reduction is ignored here.
     pub fn width_at(&self, y: f64) -> f64 {

@@ -57,6 +57,8 @@ pub enum Action {
     LiveDownFine,
     /// Edit the selected bay value.
     Edit,
+    /// Remove the selected load or opening.
+    Remove,
     /// Start a search.
     Search,
     /// Next ranking objective.
@@ -175,6 +177,18 @@ pub enum Mode {
 /// The bay fields shown and edited in the criteria pane: every bay
 /// criterion, read and written through its one definition.
 pub use crate::criteria::CRITERIA as FIELDS;
+
+/// A row of the criteria pane: a criterion, one of the bay's loads or
+/// openings, or the row that adds one of a kind.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum PaneRow {
+    /// A criterion, by index in [`FIELDS`].
+    Criterion(usize),
+    /// An item of a kind, by index within the kind.
+    Item(&'static crate::items::ItemKind, usize),
+    /// Add an item of a kind.
+    Add(&'static crate::items::ItemKind),
+}
 
 /// One ranked candidate, owned (no borrows into the catalog).
 #[derive(Debug, Clone, PartialEq)]
@@ -504,18 +518,85 @@ impl App {
         }
     }
 
+    /// Every row of the criteria pane: the criteria, then the bay's loads
+    /// and openings, then a row to add each kind.
+    pub fn pane_rows(&self) -> Vec<PaneRow> {
+        let mut rows: Vec<PaneRow> = (0..FIELDS.len()).map(PaneRow::Criterion).collect();
+        for (k, i, _) in crate::items::all(&self.current_bay().case) {
+            rows.push(PaneRow::Item(k, i));
+        }
+        rows.extend(crate::items::ITEMS.iter().map(PaneRow::Add));
+        rows
+    }
+
+    /// The row `i` of the criteria pane.
+    pub fn pane_row(&self, i: usize) -> PaneRow {
+        let rows = self.pane_rows();
+        rows.get(i).copied().unwrap_or(PaneRow::Criterion(0))
+    }
+
+    /// Label and value of row `i` of the criteria pane, in the display units.
+    pub fn row_text(&self, i: usize) -> (String, String) {
+        match self.pane_row(i) {
+            PaneRow::Criterion(c) => (FIELDS[c].label.to_string(), self.field_text(c)),
+            PaneRow::Item(k, j) => {
+                let v = k.list(&self.current_bay().case);
+                (
+                    format!("{} {}", k.label, j + 1),
+                    v.get(j).map_or(String::new(), |v| k.text(v, self.units)),
+                )
+            }
+            PaneRow::Add(k) => (format!("+ {}", k.label.to_lowercase()), "enter to add".into()),
+        }
+    }
+
     /// The value of bay field `i` as text, in the display units.
     pub fn field_text(&self, i: usize) -> String {
         FIELDS[i].show(self.current_bay(), self.units)
     }
 
-    /// Whether field `i` takes one of a few values, stepped with ← → or
+    /// Whether pane row `i` takes one of a few values, stepped with ← → or
     /// Enter rather than typed.
-    pub fn field_cycles(i: usize) -> bool {
-        matches!(
-            FIELDS[i].form,
-            crate::criteria::Form::Choice(_) | crate::criteria::Form::Flag | crate::criteria::Form::Rating
-        )
+    pub fn field_cycles(&self, i: usize) -> bool {
+        match self.pane_row(i) {
+            PaneRow::Criterion(c) => matches!(
+                FIELDS[c].form,
+                crate::criteria::Form::Choice(_) | crate::criteria::Form::Flag | crate::criteria::Form::Rating
+            ),
+            _ => false,
+        }
+    }
+
+    /// What an edit of pane row `i` asks for, in words.
+    pub fn row_allowed(&self, i: usize) -> (String, String) {
+        match self.pane_row(i) {
+            PaneRow::Criterion(c) => (FIELDS[c].label.to_string(), FIELDS[c].allowed()),
+            PaneRow::Item(k, _) | PaneRow::Add(k) => (
+                k.label.to_string(),
+                format!(
+                    "key=value parts ({}), e.g. {}; empty removes",
+                    k.parts.iter().map(|p| p.key).collect::<Vec<_>>().join(", "),
+                    k.example()
+                ),
+            ),
+        }
+    }
+
+    /// Remove the load or opening on pane row `i`.
+    fn remove_item(&mut self, i: usize) {
+        let PaneRow::Item(k, j) = self.pane_row(i) else {
+            self.say("only a load or opening can be removed", true);
+            return;
+        };
+        let case = &mut self.job.bays[self.bay].case;
+        let mut all = k.list(case);
+        if j < all.len() {
+            all.remove(j);
+            k.store(case, all);
+        }
+        self.field = self.field.min(self.pane_rows().len() - 1);
+        self.changed();
+        self.say(format!("removed {} {}", k.label.to_lowercase(), j + 1), false);
     }
 
     fn say(&mut self, msg: impl Into<String>, error: bool) {
@@ -534,11 +615,19 @@ impl App {
         };
         let c = &mut self.job.bays[self.bay].case;
         let new = (c.span.get() + step.get()).clamp(48.0, 2400.0);
-        c.line_loads.retain(|l| l.at.get() <= new);
         c.span = Length::new(new);
+        // loads and openings beyond a shortened span fall away
+        let dropped = crate::items::keep_on_member(c);
         let s = self.show_len(Length::new(new));
         self.changed();
-        self.say(format!("span {s}"), false);
+        self.say(
+            if dropped > 0 {
+                format!("span {s}; {dropped} load(s) or opening(s) no longer on the member removed")
+            } else {
+                format!("span {s}")
+            },
+            dropped > 0,
+        );
     }
 
     fn step_live(&mut self, psf: f64) {
@@ -557,7 +646,10 @@ impl App {
     /// Cycle an enumerated field forward (`dir` = 1) or back (−1).
     fn cycle_field(&mut self, dir: i32) {
         use crate::criteria::{Form, Value};
-        let c = &FIELDS[self.field];
+        let PaneRow::Criterion(ci) = self.pane_row(self.field) else {
+            return;
+        };
+        let c = &FIELDS[ci];
         let b = &mut self.job.bays[self.bay];
         let step = |i: usize, n: usize| (i as i32 + dir).rem_euclid(n as i32) as usize;
         let v = match (c.form, c.value(b)) {
@@ -571,25 +663,61 @@ impl App {
             _ => return,
         };
         c.set(b, v);
-        let t = self.field_text(self.field);
+        let t = self.field_text(ci);
         self.changed();
         self.say(format!("{}: {t}", c.label), false);
     }
 
     fn apply_edit(&mut self, text: &str) {
-        let c = &FIELDS[self.field];
-        let b = &mut self.job.bays[self.bay];
-        match c.apply(b, text) {
-            Ok(()) => {
-                // line loads beyond a shortened span fall away
-                let span = b.case.span.get();
-                b.case.line_loads.retain(|l| l.at.get() <= span);
-                self.job.typed.insert((self.bay, c.key), text.trim().to_string());
-                let t = self.field_text(self.field);
-                self.changed();
-                self.say(format!("{}: {t}", c.label), false);
+        match self.pane_row(self.field) {
+            PaneRow::Criterion(ci) => {
+                let c = &FIELDS[ci];
+                let b = &mut self.job.bays[self.bay];
+                match c.apply(b, text) {
+                    Ok(()) => {
+                        // loads and openings off a shortened member fall away
+                        let dropped = crate::items::keep_on_member(&mut b.case);
+                        self.job.typed.insert((self.bay, c.key), text.trim().to_string());
+                        let t = self.field_text(ci);
+                        self.changed();
+                        let more = if dropped > 0 {
+                            format!("; {dropped} load(s) or opening(s) no longer on the member removed")
+                        } else {
+                            String::new()
+                        };
+                        self.say(format!("{}: {t}{more}", c.label), false);
+                    }
+                    Err(e) => self.say(format!("{}: {e}", c.label), true),
+                }
             }
-            Err(e) => self.say(format!("{}: {e}", c.label), true),
+            PaneRow::Item(..) if text.trim().is_empty() => self.remove_item(self.field),
+            row @ (PaneRow::Item(..) | PaneRow::Add(_)) => {
+                let (k, index) = match row {
+                    PaneRow::Item(k, j) => (k, Some(j)),
+                    PaneRow::Add(k) => (k, None),
+                    PaneRow::Criterion(_) => return,
+                };
+                let case = &mut self.job.bays[self.bay].case;
+                match k.parse(text, case) {
+                    Ok(v) => {
+                        let mut all = k.list(case);
+                        let n = match index {
+                            Some(j) if j < all.len() => {
+                                all[j] = v;
+                                j
+                            }
+                            _ => {
+                                all.push(v);
+                                all.len() - 1
+                            }
+                        };
+                        k.store(case, all);
+                        self.changed();
+                        self.say(format!("{} {}: {}", k.label, n + 1, text.trim()), false);
+                    }
+                    Err(e) => self.say(format!("{}: {e}", k.label), true),
+                }
+            }
         }
     }
 
@@ -633,8 +761,9 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             let down = action == Action::Down;
             match app.focus {
                 Focus::Bay => {
+                    let n = app.pane_rows().len();
                     app.field = if down {
-                        (app.field + 1).min(FIELDS.len() - 1)
+                        (app.field + 1).min(n - 1)
                     } else {
                         app.field.saturating_sub(1)
                     };
@@ -654,7 +783,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         }
         Action::Left | Action::Right => {
             let dir = if action == Action::Right { 1 } else { -1 };
-            if app.focus == Focus::Bay && App::field_cycles(app.field) {
+            if app.focus == Focus::Bay && app.field_cycles(app.field) {
                 app.cycle_field(dir);
             } else {
                 return update(app, if dir > 0 { Action::NextPane } else { Action::PrevPane });
@@ -675,9 +804,12 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         Action::LiveUpFine => app.step_live(1.0),
         Action::LiveDownFine => app.step_live(-1.0),
         Action::Edit => match app.focus {
-            Focus::Bay if App::field_cycles(app.field) => app.cycle_field(1),
+            Focus::Bay if app.field_cycles(app.field) => app.cycle_field(1),
             Focus::Bay => {
-                let t = app.field_text(app.field);
+                let t = match app.pane_row(app.field) {
+                    PaneRow::Add(k) => k.example().trim_matches('"').to_string(),
+                    _ => app.row_text(app.field).1,
+                };
                 app.mode = Mode::Edit(t);
             }
             _ => {
@@ -685,6 +817,13 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                 app.focus = Focus::Detail;
             }
         },
+        Action::Remove => {
+            if app.focus == Focus::Bay {
+                app.remove_item(app.field);
+            } else {
+                app.say("select a load or opening in the bay pane to remove it", true);
+            }
+        }
         Action::Search => {
             app.mode = Mode::Search;
             app.say("search: type to narrow, enter to keep, esc to clear", false);

@@ -33,6 +33,10 @@ fn samples(c: &Criterion) -> (Option<String>, String) {
         Form::ChoiceList(ch) => (Some("hollowcore".into()), ch[0].to_string()),
         Form::Text if c.required => (Some("tab\u{1b}[31mred".into()), "A bay".into()),
         Form::Text => (Some("mix\u{1b}[2J".into()), "topping-4000".into()),
+        Form::ChoiceOrQuantity { range, .. } => (
+            Some(format!("{} {}", fmt(range.hi * 10.0 + 1.0), range.unit)),
+            format!("{} {}", fmt((range.lo + range.hi) / 2.0), range.unit),
+        ),
     }
 }
 
@@ -112,7 +116,7 @@ fn every_criterion_reads_the_same_through_all_four_routes() {
                 );
             }
             // 3. the UI editor (criteria typed as text)
-            if !App::field_cycles(i) {
+            if !matches!(c.form, Form::Choice(_) | Form::Flag | Form::Rating) {
                 let job = Job::single("p", Bay::new("b", Length::from_unit(20.0, "ft")));
                 let mut a = App::new(cat.clone(), job, None);
                 a.focus = Focus::Bay;

@@ -84,6 +84,9 @@ pub struct AtStation {
     pub top_least_psi: f64,
     /// Precast bottom fibre under the least service moment.
     pub bottom_least_psi: f64,
+    /// Precast bottom fibre under the least sustained moment (D, or D + ψL
+    /// where the live load hogs).
+    pub bottom_least_sustained_psi: f64,
 }
 
 /// Service stresses at `x`, with the prestress there: the net section
@@ -97,9 +100,11 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     let mnc = eff.m_self + eff.m_topping;
     let (sus, tot) = service_moments(eff, m.case.sustained_live);
     let least = service_least(eff, m.case.sustained_live);
+    let d = eff.m_dead();
+    let least_sus = d.min(d + m.case.sustained_live * eff.m_live);
     match comp {
         Some(c) => {
-            let (ms, mt, ml) = (sus - mnc, tot - mnc, least - mnc);
+            let (ms, mt, ml, mls) = (sus - mnc, tot - mnc, least - mnc, least_sus - mnc);
             AtStation {
                 bottom_total_psi: pre_bot - mnc / b.sb_in3 - mt / c.sb_in3,
                 top_total_psi: pre_top + mnc / b.st_in3 + mt / c.st_precast_in3,
@@ -109,6 +114,7 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
                 topping_sustained_psi: ms / c.st_topping_in3,
                 top_least_psi: pre_top + mnc / b.st_in3 + ml / c.st_precast_in3,
                 bottom_least_psi: pre_bot - mnc / b.sb_in3 - ml / c.sb_in3,
+                bottom_least_sustained_psi: pre_bot - mnc / b.sb_in3 - mls / c.sb_in3,
             }
         }
         None => AtStation {
@@ -120,6 +126,7 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
             topping_sustained_psi: 0.0,
             top_least_psi: pre_top + least / b.st_in3,
             bottom_least_psi: pre_bot - least / b.sb_in3,
+            bottom_least_sustained_psi: pre_bot - least_sus / b.sb_in3,
         },
     }
 }
@@ -223,32 +230,35 @@ fn compression(an: &Analysis, info: &'static CheckInfo, k: f64, fc: f64, fibres:
 
 /// Compression under prestress + sustained load: the precast top and
 /// bottom fibres (near the ends the bottom fibre carries the most), at
-/// every station and segment vertex.
+/// every station and segment vertex; with an overhang, also the bottom
+/// fibre under the least sustained moment (a hogging moment adds its
+/// compression there, so it is a load limit).
 pub fn run_sustained(an: &Analysis) -> Option<CheckResult> {
-    compression(
-        an,
-        &SUSTAINED,
-        0.45,
-        an.member.mix.fc.get(),
-        &[
-            (|a| a.top_sustained_psi, "precast top fibre", true),
-            (|a| a.bottom_sustained_psi, "precast bottom fibre", false),
-        ],
-    )
+    let mut fibres: Vec<Fibre> = vec![
+        (|a| a.top_sustained_psi, "precast top fibre", true),
+        (|a| a.bottom_sustained_psi, "precast bottom fibre", false),
+    ];
+    if an.member.overhangs() {
+        fibres.push((
+            |a| a.bottom_least_sustained_psi,
+            "precast bottom fibre under the least moment",
+            true,
+        ));
+    }
+    compression(an, &SUSTAINED, 0.45, an.member.mix.fc.get(), &fibres)
 }
 
-/// Compression under prestress + total load: the precast top and bottom fibres.
+/// Compression under prestress + total load: the precast top and bottom
+/// fibres; with an overhang, also the bottom fibre under the least moment.
 pub fn run_total(an: &Analysis) -> Option<CheckResult> {
-    compression(
-        an,
-        &TOTAL,
-        0.60,
-        an.member.mix.fc.get(),
-        &[
-            (|a| a.top_total_psi, "precast top fibre", true),
-            (|a| a.bottom_total_psi, "precast bottom fibre", false),
-        ],
-    )
+    let mut fibres: Vec<Fibre> = vec![
+        (|a| a.top_total_psi, "precast top fibre", true),
+        (|a| a.bottom_total_psi, "precast bottom fibre", false),
+    ];
+    if an.member.overhangs() {
+        fibres.push((|a| a.bottom_least_psi, "precast bottom fibre under the least moment", true));
+    }
+    compression(an, &TOTAL, 0.60, an.member.mix.fc.get(), &fibres)
 }
 
 /// Topping compression: the top of the topping against its own f′c, the

@@ -6,9 +6,8 @@
 use clap::{Arg, ArgAction, ArgMatches, Args, Command, FromArgMatches};
 
 use plankwise::bay::{Bay, Objective};
-use plankwise::case::LoadKind;
 use plankwise::catalog::Catalog;
-use plankwise::criteria::{CRITERIA, Form, line_load};
+use plankwise::criteria::{CRITERIA, Form};
 use plankwise::input::diag::suggestion;
 use plankwise::units::Length;
 
@@ -24,6 +23,8 @@ pub struct BayFlags {
     pub line_dead: Vec<String>,
     /// Live line loads.
     pub line_live: Vec<String>,
+    /// Items by kind key, as typed: "p=4 kip, at=12 ft".
+    pub items: Vec<(&'static str, String)>,
 }
 
 /// The values a choice may take, offered to shell completion and help;
@@ -67,6 +68,21 @@ impl Args for BayFlags {
             }
             cmd = cmd.arg(a);
         }
+        for k in plankwise::items::ITEMS {
+            let parts: Vec<&str> = k.parts.iter().map(|p| p.key).collect();
+            cmd = cmd.arg(
+                Arg::new(k.key)
+                    .long(k.flag)
+                    .value_name("PARTS")
+                    .action(ArgAction::Append)
+                    .help(format!(
+                        "{} as key=value parts ({}), e.g. {} (repeatable)",
+                        k.help,
+                        parts.join(", "),
+                        k.example()
+                    )),
+            );
+        }
         cmd.arg(
             Arg::new("line_dead")
                 .long("line-dead")
@@ -106,6 +122,11 @@ impl FromArgMatches for BayFlags {
         }
         f.line_dead = m.get_many::<String>("line_dead").map(|v| v.cloned().collect()).unwrap_or_default();
         f.line_live = m.get_many::<String>("line_live").map(|v| v.cloned().collect()).unwrap_or_default();
+        for k in plankwise::items::ITEMS {
+            for v in m.get_many::<String>(k.key).into_iter().flatten() {
+                f.items.push((k.key, v.clone()));
+            }
+        }
         Ok(f)
     }
     fn update_from_arg_matches(&mut self, m: &ArgMatches) -> Result<(), clap::Error> {
@@ -153,18 +174,26 @@ impl BayFlags {
                 None => {}
             }
         }
-        for (texts, kind, flag) in [
-            (&self.line_dead, LoadKind::Dead, "line-dead"),
-            (&self.line_live, LoadKind::Live, "line-live"),
-        ] {
+        let line = plankwise::items::find("line").expect("line loads are items");
+        for (texts, kind, flag) in [(&self.line_dead, "dead", "line-dead"), (&self.line_live, "live", "line-live")] {
             for t in texts {
                 let (w, at) = t
                     .split_once('@')
                     .ok_or_else(|| msg(format!("--{flag}: '{t}' should read like \"0.8 klf @ 12 ft\"")))?;
-                let kind = if kind == LoadKind::Dead { "dead" } else { "live" };
-                let l = line_load(w, at, Some(kind), bay.case.span).map_err(|(_, e)| msg(format!("--{flag}: {e}")))?;
-                bay.case.line_loads.push(l);
+                let v = line
+                    .read(&[("w", w.trim()), ("at", at.trim()), ("kind", kind)], &bay.case)
+                    .map_err(|(_, e)| msg(format!("--{flag}: {e}")))?;
+                let mut all = line.list(&bay.case);
+                all.push(v);
+                line.store(&mut bay.case, all);
             }
+        }
+        for (key, text) in &self.items {
+            let k = plankwise::items::find(key).expect("a kind");
+            let v = k.parse(text, &bay.case).map_err(|e| msg(format!("--{}: {e}", k.flag)))?;
+            let mut all = k.list(&bay.case);
+            all.push(v);
+            k.store(&mut bay.case, all);
         }
         if let Some(id) = &bay.topping_mix {
             if !cat.mixes.iter().any(|m| &m.id == id) {

@@ -30,6 +30,7 @@ fn key_of(ev: event::KeyEvent) -> Option<Key> {
         KeyCode::BackTab => Key::BackTab,
         KeyCode::Enter => Key::Enter,
         KeyCode::Esc => Key::Esc,
+        KeyCode::Delete => Key::Delete,
         KeyCode::Backspace => Key::Backspace,
         KeyCode::PageUp => Key::PageUp,
         KeyCode::PageDown => Key::PageDown,

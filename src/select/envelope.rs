@@ -56,8 +56,8 @@ fn top(v: &[(&'static str, f64)]) -> (f64, &'static str) {
 pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     let span_ft = base.span.get() / 12.0;
     // one analysis per span; each trial load reuses what the load leaves alone
-    let mut unloaded = base.clone();
-    unloaded.live = AreaLoad::from_unit(0.0, "psf");
+    // the load the bay's use names is varied; placed loads stay
+    let unloaded = base.with_varied(AreaLoad::from_unit(0.0, "psf"));
     let prep = Prepared::new(&entry.candidate(), &unloaded);
     let at = |q: f64| prep.with_live(AreaLoad::from_unit(q, "psf"));
     let e0 = prep.evaluation();
@@ -242,6 +242,7 @@ pub fn envelope(entry: &Entry, base: &DesignCase, spans_ft: &[f64]) -> Vec<LoadL
     let at = |s: f64| {
         let mut c = base.clone();
         c.span = Length::from_unit(s, "ft");
+        crate::items::keep_on_member(&mut c);
         max_live(entry, &c)
     };
     // spans are independent: over the cores, one span at a time, since short
@@ -257,6 +258,7 @@ pub fn longest_span(entry: &Entry, base: &DesignCase, max_ft: f64) -> Option<f64
     let ok = |s: f64| {
         let mut c = base.clone();
         c.span = Length::from_unit(s, "ft");
+        crate::items::keep_on_member(&mut c);
         evaluate_brief(&cand, &c).viable
     };
     let mut s = max_ft.floor();
@@ -291,6 +293,7 @@ pub struct SpanRun {
 fn winner(cat: &Catalog, bay: &Bay, span_ft: f64, objective: Objective) -> Option<String> {
     let mut b = bay.clone();
     b.case.span = Length::from_unit(span_ft, "ft");
+    crate::items::keep_on_member(&mut b.case);
     rank_bay(cat, &b, Some(objective)).viable.first().map(|r| r.entry.label())
 }
 
@@ -342,6 +345,6 @@ pub fn bay_envelope(cat: &Catalog, bay: &Bay, entry: &Entry, spans_ft: &[f64]) -
 /// The evaluation of an entry at the bay's own loads (for the forward check in tests).
 pub fn forward(cat: &Catalog, bay: &Bay, entry: Entry, live_psf: f64) -> Evaluation {
     let mut b = bay.clone();
-    b.case.live = AreaLoad::from_unit(live_psf, "psf");
+    b.case = b.case.with_varied(AreaLoad::from_unit(live_psf, "psf"));
     evaluation(cat, &b, &entry)
 }

@@ -41,6 +41,8 @@ pub enum Key {
     PageUp,
     /// Page down.
     PageDown,
+    /// Delete.
+    Delete,
 }
 
 impl fmt::Display for Key {
@@ -60,6 +62,7 @@ impl fmt::Display for Key {
             Key::Backspace => write!(f, "backspace"),
             Key::PageUp => write!(f, "pgup"),
             Key::PageDown => write!(f, "pgdn"),
+            Key::Delete => write!(f, "del"),
         }
     }
 }
@@ -79,6 +82,7 @@ impl Key {
             "backspace" => Key::Backspace,
             "pgup" => Key::PageUp,
             "pgdn" => Key::PageDown,
+            "del" => Key::Delete,
             "space" => Key::Char(' '),
             _ => {
                 if let Some(c) = s.strip_prefix("ctrl-") {
@@ -142,7 +146,18 @@ impl Default for Keymap {
                 b(Action::LiveDown, "live_down", "live − 10 psf (0.5 kPa)", &[Char('[')]),
                 b(Action::LiveUpFine, "live_up_fine", "live + 1 psf (0.05 kPa)", &[Char('}')]),
                 b(Action::LiveDownFine, "live_down_fine", "live − 1 psf (0.05 kPa)", &[Char('{')]),
-                b(Action::Edit, "edit", "edit the bay value / open", &[Enter]),
+                b(
+                    Action::Edit,
+                    "edit",
+                    "edit the bay value or load / add a load or opening / open",
+                    &[Enter],
+                ),
+                b(
+                    Action::Remove,
+                    "remove",
+                    "remove the selected load or opening",
+                    &[Delete, Char('d')],
+                ),
                 b(Action::Search, "search", "search candidates", &[Char('/')]),
                 b(Action::CycleObjective, "objective", "next ranking objective", &[Char('o')]),
                 b(Action::ToggleFailing, "toggle_failing", "show / hide non-viable", &[Char('x')]),

@@ -75,30 +75,29 @@ fn title_bar(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
 
 fn bay_pane(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     let focused = app.focus == Focus::Bay;
-    // every criterion; a window that keeps the selected one in sight
+    // every criterion, load and opening; a window that keeps the selected one in sight
+    let rows = app.pane_rows().len();
     let height = (area.height as usize).saturating_sub(2).max(1);
-    let start = app.field.saturating_sub(height - 1).min(FIELDS.len().saturating_sub(height));
+    let start = app.field.saturating_sub(height - 1).min(rows.saturating_sub(height));
     let label_w = FIELDS.iter().map(|c| c.label.chars().count()).max().unwrap_or(10).min(13) + 1;
-    let lines: Vec<Line> = FIELDS
-        .iter()
-        .enumerate()
-        .skip(start)
+    let lines: Vec<Line> = (start..rows)
         .take(height)
-        .map(|(i, c)| {
+        .map(|i| {
+            let (label, text) = app.row_text(i);
             let value = match (&app.mode, i == app.field) {
                 (Mode::Edit(buf), true) => format!("{buf}▏"),
-                _ => app.field_text(i),
+                _ => text,
             };
             let style = if focused && i == app.field { t.selected } else { Style::new() };
-            let label: String = c.label.chars().take(label_w - 1).collect();
+            let label: String = label.chars().take(label_w - 1).collect();
             Line::from(vec![
                 Span::styled(format!("{label:<label_w$}"), t.muted),
-                Span::styled(value, style),
+                Span::styled(crate::input::escape_controls(&value), style),
             ])
         })
         .collect();
-    let title = if FIELDS.len() > height {
-        format!(" Bay criteria {}/{} ", app.field + 1, FIELDS.len())
+    let title = if rows > height {
+        format!(" Bay criteria {}/{} ", app.field + 1, rows)
     } else {
         " Bay criteria ".into()
     };
@@ -361,14 +360,10 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             t.status,
         ),
         Mode::Prompt(PromptKind::SaveJob, p) => (format!("save the job as: {p}▏  enter to save, esc to cancel"), t.status),
-        Mode::Edit(_) => (
-            format!(
-                "edit {}: {}; enter to apply, esc to cancel",
-                FIELDS[app.field].label,
-                FIELDS[app.field].allowed()
-            ),
-            t.status,
-        ),
+        Mode::Edit(_) => {
+            let (label, allowed) = app.row_allowed(app.field);
+            (format!("edit {label}: {allowed}; enter to apply, esc to cancel"), t.status)
+        }
         Mode::Confirm(Question::Quit) => ("the job has unsaved edits — quit anyway? y / n".into(), t.error),
         Mode::Confirm(Question::Overwrite(p, _)) => (format!("'{}' exists — replace it? y / n", p.display()), t.error),
         _ => (app.status.0.clone(), if app.status.1 { t.error } else { t.status }),

@@ -1,0 +1,285 @@
+//! Flexural strength where the moment hogs, over a support with an
+//! overhang: φMn ≥ |Mu| with the soffit in compression and the top strands
+//! and any mild top bars in tension.
+//!
+//! Clauses: ACI 318-19 §22.2 and §22.3 (strain compatibility, as for the
+//! sagging moment, on the section turned upside down: the topping is then
+//! on the tension side and carries nothing), §25.4.8.3 (the strand stress
+//! is limited by development from where its bond begins: at the tip of a
+//! short overhang the top strands are far from developed at the support),
+//! §21.2.2 and §21.2.3 (φ); ASCE 7-16 §2.3.1. Mild top bars (`top_bars`,
+//! Grade 60) are taken with their centroid 2 in below the top and fully
+//! developed (common practice, no source: they are detailed to be). A
+//! member with no strand or bar in its top half has no reinforcement on
+//! the tension side and is given no hogging strength: the couple its
+//! bottom strands make against the soffit is not counted.
+//! Where the strands and bars given fall short, the note estimates the
+//! Grade 60 top bars needed, As ≈ (|Mu|/φ − Mn)/(fy · 0.9 d), φ 0.9.
+//!
+//! Where the worst point lies: the hogging moment is a station's own (the
+//! supports are stations, both sides); between stations the ratio is
+//! bounded by the larger moment over the smaller strength at the segment's
+//! ends and searched by successive parabolas where the bound exceeds the
+//! worst station, as for the sagging moment.
+
+use super::{Analysis, CheckInfo, CheckResult, Group, Reads, kipft};
+use crate::member::Member;
+use crate::prestress::{developed_stress, development_length};
+use crate::strength::{Concrete, Flexure, Steel, SteelLayer, phi_flexure, strain_compatibility};
+
+/// Registry entry.
+pub const INFO: CheckInfo = CheckInfo {
+    id: "flexure_hogging",
+    title: "Flexural strength where the moment hogs (overhang)",
+    clause: "ACI 318-19 22.2, 22.3, 21.2.2, 21.2.3, 25.4.8.3; ASCE 7-16 2.3.1",
+    unit: "kip-ft",
+    group: Group::Strength,
+    reads: Reads::Demand,
+    load_driven: true,
+};
+
+/// Yield strength of mild top bars, psi (Grade 60).
+pub const BAR_FY_PSI: f64 = 60_000.0;
+/// Depth of the top bars' centroid below the top, in (common practice, no source).
+pub const BAR_DEPTH_IN: f64 = 2.0;
+
+/// Steel in tension under a hogging moment at `x`, depths measured up
+/// from the soffit (the compression face); `full` caps each strand by its
+/// development (None: uncapped, for the stresses that set ℓd).
+fn steel<'m>(m: &'m Member, x: f64, full: Option<&[f64]>) -> Vec<SteelLayer<'m>> {
+    let d = m.end_distance(x);
+    let pre = m.effective_at(x);
+    let b = m.props_at(x).0;
+    let e = b.yb_in - pre.y;
+    let fse = m.history.fse_psi;
+    let mut out: Vec<SteelLayer<'m>> = m
+        .layers
+        .iter()
+        .enumerate()
+        .map(|(i, layer)| {
+            let yi = m.layer_y(layer, d);
+            let eps2 = (pre.pe / b.area_in2 + pre.pe * e * (b.yb_in - yi) / b.ix_in4) / m.ec;
+            let cap = match full {
+                None => m.strand.fpu.get(),
+                Some(f) => {
+                    let ld = development_length(fse, f[i], m.db(), layer.debond > 0.0);
+                    developed_stress(m.bonded(layer, x), fse, f[i], m.ltr, ld)
+                }
+            };
+            SteelLayer {
+                area: layer.area,
+                depth: yi,
+                steel: Steel::Strand {
+                    kind: m.strand,
+                    prestrain: fse / m.strand.eps.get() + eps2,
+                    cap,
+                },
+            }
+        })
+        .collect();
+    for bar in &m.pattern.bars {
+        out.push(SteelLayer {
+            area: bar.count as f64 * bar.area.get(),
+            depth: bar.height.get(),
+            steel: Steel::Bar {
+                fy: bar.fy.get(),
+                es: 29_000_000.0,
+            },
+        });
+    }
+    let top = m.case.top_bars.get();
+    if top > 0.0 {
+        out.push(SteelLayer {
+            area: top,
+            depth: m.h_total - BAR_DEPTH_IN,
+            steel: Steel::Bar {
+                fy: BAR_FY_PSI,
+                es: 29_000_000.0,
+            },
+        });
+    }
+    out
+}
+
+/// The hogging strength at a point.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct AtPoint {
+    /// Distance from the left bearing centre, in.
+    pub x_in: f64,
+    /// The most hogging factored moment there (magnitude), lbf·in.
+    pub mu_lbin: f64,
+    /// Nominal strength (≤ 0 when nothing resists), lbf·in.
+    pub mn_lbin: f64,
+    /// φ used.
+    pub phi: f64,
+    /// Design strength (≥ 0), lbf·in.
+    pub phi_mn_lbin: f64,
+}
+
+/// What finds the hogging strength along one member.
+struct Hog<'m> {
+    m: &'m Member<'m>,
+    flipped: crate::section::Geometry,
+    full: Vec<f64>,
+    /// Whether any strand or bar lies in the top half, the tension side:
+    /// without it the top is unreinforced and the strength is taken as nil
+    /// (the couple of bottom strands against the soffit is no reinforcement).
+    top_steel: bool,
+}
+
+impl<'m> Hog<'m> {
+    fn new(m: &'m Member<'m>) -> Hog<'m> {
+        let flipped = m.section.geometry.flipped();
+        let half = m.bare.depth_in / 2.0;
+        let top_steel = m.case.top_bars.get() > 0.0
+            || m.layers.iter().any(|l| l.y_mid.min(l.y_end) > half)
+            || m.pattern.bars.iter().any(|b| b.height.get() > half);
+        let mut h = Hog {
+            m,
+            flipped,
+            full: Vec::new(),
+            top_steel,
+        };
+        let mid = 0.5 * (m.ends.0 + m.ends.1);
+        let f = h.solve(mid, None);
+        h.full = f.stresses.iter().copied().take(m.layers.len()).collect();
+        h
+    }
+
+    fn solve(&self, x: f64, full: Option<&[f64]>) -> Flexure {
+        let m = self.m;
+        let cut = m.cut.filter(|c| x >= c.along.0 && x <= c.along.1).map(|c| c.across);
+        let conc = Concrete {
+            geometry: &self.flipped,
+            fc: m.mix.fc.get(),
+            topping: None,
+            beta1: m.mix.beta1(),
+            top_band: if cut.is_some() { (0.0, 0.0) } else { self.flipped.top_band() },
+            cut,
+        };
+        strain_compatibility(&conc, &steel(m, x, full))
+    }
+
+    /// φ where strand in tension is not developed (Table 21.2.3, from
+    /// memory, medium): 0.75 to ℓtr, rising to 0.90 at ℓd.
+    fn phi_dev(&self, x: f64, c: f64) -> f64 {
+        let m = self.m;
+        let d = m.end_distance(x);
+        let mut phi: f64 = 0.90;
+        for (i, layer) in m.layers.iter().enumerate() {
+            if m.layer_y(layer, d) <= c {
+                continue;
+            }
+            let at = m.bonded(layer, x);
+            let ld = development_length(m.history.fse_psi, self.full[i], m.db(), layer.debond > 0.0);
+            let p = if at <= m.ltr {
+                0.75
+            } else if at < ld {
+                0.75 + 0.15 * (at - m.ltr) / (ld - m.ltr)
+            } else {
+                0.90
+            };
+            phi = phi.min(p);
+        }
+        phi
+    }
+
+    fn at(&self, x: f64, mu: f64) -> AtPoint {
+        if !self.top_steel {
+            return AtPoint {
+                x_in: x,
+                mu_lbin: mu,
+                mn_lbin: 0.0,
+                phi: 0.0,
+                phi_mn_lbin: 0.0,
+            };
+        }
+        let f = self.solve(x, Some(&self.full));
+        let phi = phi_flexure(f.eps_t).min(self.phi_dev(x, f.c));
+        AtPoint {
+            x_in: x,
+            mu_lbin: mu,
+            mn_lbin: f.mn,
+            phi,
+            phi_mn_lbin: (phi * f.mn).max(0.0),
+        }
+    }
+}
+
+fn ratio(p: &AtPoint) -> f64 {
+    if p.phi_mn_lbin > 0.0 {
+        (p.mu_lbin / p.phi_mn_lbin).min(super::RATIO_NONE)
+    } else if p.mu_lbin > 0.0 {
+        super::RATIO_NONE
+    } else {
+        0.0
+    }
+}
+
+/// The worst point where the moment hogs, if it hogs anywhere.
+pub fn worst(an: &Analysis) -> Option<AtPoint> {
+    let m = &an.member;
+    if !m.overhangs() {
+        return None;
+    }
+    let hog = Hog::new(m);
+    let pts: Vec<AtPoint> = an
+        .stations
+        .iter()
+        .filter(|s| s.mu_neg_lbin < 0.0)
+        .map(|s| hog.at(s.x_in, -s.mu_neg_lbin))
+        .collect();
+    let mut best = *pts.iter().max_by(|a, b| ratio(a).total_cmp(&ratio(b)))?;
+    let most = |x: f64| {
+        let e = m.effects(x);
+        -crate::case::COMBINATIONS.iter().map(|c| c.apply(&e).0).fold(0.0, f64::min)
+    };
+    for w in pts.windows(2) {
+        let (a, b) = (w[0], w[1]);
+        let cap = a.phi_mn_lbin.min(b.phi_mn_lbin);
+        if b.x_in - a.x_in < 1e-6 || cap <= 0.0 || a.mu_lbin.max(b.mu_lbin) / cap <= ratio(&best) * (1.0 + 1e-12) {
+            continue;
+        }
+        let (x, r) = super::refine_max(|x| ratio(&hog.at(x, most(x))), a.x_in, ratio(&a), b.x_in, ratio(&b));
+        if r > ratio(&best) {
+            best = hog.at(x, most(x));
+        }
+    }
+    Some(best)
+}
+
+/// Run the check (members with an overhang only).
+pub fn run(an: &Analysis) -> Option<CheckResult> {
+    let w = worst(an)?;
+    let m = &an.member;
+    let note = if an.brief {
+        String::new()
+    } else {
+        let top = m.case.top_bars.get();
+        let bars = if top > 0.0 {
+            format!("; top bars {top:.2} in² Grade 60 at {BAR_DEPTH_IN} in below the top counted")
+        } else {
+            String::new()
+        };
+        let short = if ratio(&w) > 1.0 {
+            let d = m.h_total - BAR_DEPTH_IN;
+            let need = (w.mu_lbin / 0.9 - w.mn_lbin.max(0.0)) / (BAR_FY_PSI * 0.9 * d);
+            format!(
+                "; needs mild top reinforcement: about {:.2} in² more of Grade 60 bars {BAR_DEPTH_IN} in below the top (give it as top_bars)",
+                need.max(0.0)
+            )
+        } else {
+            String::new()
+        };
+        if w.phi == 0.0 {
+            format!("no strand or bar in the top half: the top is unreinforced where the moment hogs{short}")
+        } else {
+            format!(
+                "the soffit in compression, the top strands{} in tension; strand stress limited by development from the member end (§25.4.8.3); φ = {:.2}{bars}{short}",
+                if m.pattern.bars.is_empty() { "" } else { " and bars" },
+                w.phi
+            )
+        }
+    };
+    Some(CheckResult::new(&INFO, kipft(w.mu_lbin), kipft(w.phi_mn_lbin), Some(w.x_in), note))
+}
