@@ -616,6 +616,9 @@ pub struct Evaluation {
     pub stations: Vec<Station>,
     /// The units analysed (not kept by a brief evaluation).
     pub units: Vec<UnitReport>,
+    /// What each opening does to the units of this member (not kept by a
+    /// brief evaluation).
+    pub openings: Vec<String>,
 }
 
 impl Evaluation {
@@ -1120,7 +1123,107 @@ pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
         .into_iter()
         .map(|(u, a)| finish(analyse_unit(cand, case, &u, a, false, None)))
         .collect();
-    merge(evs)
+    let mut ev = merge(evs);
+    ev.openings = describe_openings(cand, case);
+    ev
+}
+
+/// What each opening does to units of this member laid side by side from
+/// the joint its place across is measured from: the units it cuts through
+/// (their pieces hang on headers), those it cuts partly (strands and web
+/// width lost), and those the headers bear on.
+pub fn describe_openings(cand: &Candidate, case: &DesignCase) -> Vec<String> {
+    describe_openings_as(cand, case, false)
+}
+
+/// [`describe_openings`], `short` for a shortlist line: the units only.
+pub fn describe_openings_as(cand: &Candidate, case: &DesignCase, short: bool) -> Vec<String> {
+    let b = cand.section.props.width_in;
+    let g = &cand.section.geometry;
+    let props = &cand.section.props;
+    case.openings
+        .iter()
+        .enumerate()
+        .map(|(k, o)| {
+            let lay = crate::loads::layout(o, b);
+            let mut parts = Vec::new();
+            if !lay.through.is_empty() {
+                let units: Vec<String> = lay.through.iter().map(|j| (j + 1).to_string()).collect();
+                parts.push(format!(
+                    "cuts unit{} {} through (not members: their pieces hang on headers)",
+                    if units.len() > 1 { "s" } else { "" },
+                    units.join(", ")
+                ));
+            }
+            for (j, cut) in &lay.partly {
+                let strands: usize = cand
+                    .pattern
+                    .rows
+                    .iter()
+                    .map(|r| r.x.iter().filter(|&&x| x >= cut.across.0 && x <= cut.across.1).count())
+                    .sum();
+                let total: usize = cand.pattern.rows.iter().map(|r| r.x.len()).sum();
+                let net = g.net_properties(props, cut.across.0, cut.across.1);
+                parts.push(format!(
+                    "cuts unit {} over {:.1}–{:.1} in of its width: {} of {} strands, web width {:.2} → {:.2} in, area {:.0} → {:.0} in²",
+                    j + 1,
+                    cut.across.0,
+                    cut.across.1,
+                    strands,
+                    total,
+                    props.web_width_min_in,
+                    net.web_width_min_in,
+                    props.area_in2,
+                    net.area_in2
+                ));
+            }
+            let (l, r) = lay.bearing;
+            if short {
+                let mut v = Vec::new();
+                if !lay.through.is_empty() {
+                    v.push(format!(
+                        "unit(s) {} cut through",
+                        lay.through.iter().map(|j| (j + 1).to_string()).collect::<Vec<_>>().join(", ")
+                    ));
+                }
+                for (j, cut) in &lay.partly {
+                    let strands: usize = cand
+                        .pattern
+                        .rows
+                        .iter()
+                        .map(|r| r.x.iter().filter(|&&x| x >= cut.across.0 && x <= cut.across.1).count())
+                        .sum();
+                    v.push(format!("unit {} cut partly ({strands} strand(s))", j + 1));
+                }
+                v.push(if l == r {
+                    format!("headers on unit {}", l + 1)
+                } else {
+                    format!("headers on units {} and {}", l + 1, r + 1)
+                });
+                return format!("opening {}: {}", k + 1, v.join(", "));
+            }
+            parts.push(if l == r {
+                format!("its headers bear on unit {}", l + 1)
+            } else {
+                format!("its headers bear on units {} and {}", l + 1, r + 1)
+            });
+            format!(
+                "opening {} ({} to {} along, {:.1} in wide from {:.1} in across; {} in units of {:.1} in): {}",
+                k + 1,
+                crate::units::fmt_ft_in(o.from),
+                crate::units::fmt_ft_in(o.to),
+                o.across.1.get() - o.across.0.get(),
+                o.across.0.get(),
+                if lay.partly.is_empty() && lay.through.is_empty() {
+                    "no unit cut"
+                } else {
+                    "units numbered from that joint"
+                },
+                b,
+                parts.join("; ")
+            )
+        })
+        .collect()
 }
 
 /// The same numbers as [`evaluate`] without the checks' notes and the
@@ -1173,6 +1276,7 @@ fn trimmed(mut ev: Evaluation) -> Evaluation {
         c.note = String::new();
     }
     ev.units = Vec::new();
+    ev.openings = Vec::new();
     ev
 }
 
@@ -1226,6 +1330,7 @@ fn results(an: &Analysis) -> Evaluation {
         frequency_hz: an.frequency_hz,
         stations: Vec::new(),
         units: if an.brief { Vec::new() } else { vec![UnitReport::of(an)] },
+        openings: Vec::new(),
         checks,
     }
 }

@@ -648,6 +648,18 @@ impl ItemKind {
             .collect()
     }
 
+    /// An item for a reader: every part given (defaults too), none left out
+    /// but the absent ones.
+    pub fn describe(&self, v: &[Val], sys: System) -> String {
+        self.parts
+            .iter()
+            .zip(v)
+            .filter(|(_, val)| **val != Val::Num(None))
+            .map(|(p, val)| format!("{}={}", p.key, p.show(*val, sys)))
+            .collect::<Vec<_>>()
+            .join(", ")
+    }
+
     /// An item as its text form.
     pub fn text(&self, v: &[Val], sys: System) -> String {
         self.parts_text(v, sys)

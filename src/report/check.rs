@@ -160,12 +160,26 @@ pub struct CheckJson {
     pub concrete: ConcreteJson,
     /// Sign convention.
     pub sign_convention: &'static str,
+    /// The bay's placed loads and openings, as typed (US).
+    pub items: Vec<String>,
+    /// Each unit analysed, with the shares it takes.
+    pub units: Vec<crate::checks::UnitReport>,
+    /// What each opening does to the units.
+    pub openings: Vec<String>,
     /// Every check.
     pub checks: Vec<CheckResult>,
     /// Stations.
     pub stations: Vec<StationJson>,
     /// Cautions.
     pub cautions: Vec<&'static str>,
+}
+
+/// Every load and opening of a case as "kind n: parts" (US units).
+pub fn items_text(case: &DesignCase) -> Vec<String> {
+    crate::items::all(case)
+        .into_iter()
+        .map(|(k, i, v)| format!("{} {}: {}", k.key, i + 1, k.describe(&v, crate::units::System::Us)))
+        .collect()
 }
 
 /// Build the JSON view.
@@ -243,6 +257,9 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             beta1: cand.mix.beta1(),
         },
         sign_convention: SIGN_CONVENTION,
+        items: items_text(case),
+        units: ev.units.clone(),
+        openings: ev.openings.clone(),
         checks: ev.checks.clone(),
         stations: ev
             .stations
@@ -296,6 +313,33 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
         case.class_allowed.name(),
         case.humidity
     )?;
+    if case.has_overhang() {
+        writeln!(
+            w,
+            "overhangs: left {}, right {} (bearing centre to tip); top bars {:.2} in² Grade 60",
+            crate::units::fmt_ft_in(case.overhang.0),
+            crate::units::fmt_ft_in(case.overhang.1),
+            case.top_bars.in_unit("in2")
+        )?;
+    }
+    let shares = ev.units.first().map(|u| u.shares.as_slice()).unwrap_or(&[]);
+    for line in items_text(case) {
+        let what = line.split(':').next().unwrap_or("");
+        match shares.iter().find(|s| s.what == what) {
+            Some(s) => writeln!(w, "{line}\n    share: {}", s.how)?,
+            None => writeln!(w, "{line}")?,
+        }
+    }
+    for o in &ev.openings {
+        writeln!(w, "{o}")?;
+    }
+    if ev.units.len() > 1 || ev.units.iter().any(|u| u.unit != "the loaded unit") {
+        writeln!(
+            w,
+            "units checked: {}; each check shows its worst",
+            ev.units.iter().map(|u| u.unit.as_str()).collect::<Vec<_>>().join("; ")
+        )?;
+    }
     writeln!(w)?;
     writeln!(
         w,

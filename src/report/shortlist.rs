@@ -47,6 +47,8 @@ struct Row {
     fire: String,
     member_length: String,
     pieces: Option<u64>,
+    /// What the bay's openings do to units of this member.
+    openings: Vec<String>,
 }
 
 /// A listed member's row: its checks are evaluated again (a ranking keeps
@@ -90,6 +92,10 @@ fn row(cat: &Catalog, r: &Ranked, bay: &Bay) -> Row {
         fire,
         member_length: fmt_ft_in(crate::units::Length::new(e.member_length_in)),
         pieces,
+        openings: {
+            let case = crate::select::case_for(bay, r.entry.topping, &crate::select::topping_mix(cat, bay));
+            crate::checks::describe_openings_as(&r.entry.candidate(), &case, true)
+        },
     }
 }
 
@@ -108,12 +114,27 @@ fn criteria(bay: &Bay) -> Vec<String> {
         c.roof_live.in_unit("psf"),
         c.snow.in_unit("psf")
     )];
-    for l in &c.line_loads {
+    if c.has_overhang() {
         v.push(format!(
-            "line load {:.2} klf at {} ({})",
-            l.w.in_unit("klf"),
-            fmt_ft_in(l.at),
-            if l.kind == crate::case::LoadKind::Dead { "dead" } else { "live" }
+            "overhangs: left {}, right {}; top bars {:.2} in2",
+            fmt_ft_in(c.overhang.0),
+            fmt_ft_in(c.overhang.1),
+            c.top_bars.in_unit("in2")
+        ));
+    }
+    v.extend(crate::report::check::items_text(c));
+    if !c.placed.is_empty() || !c.openings.is_empty() {
+        v.push(format!(
+            "shared between hollow-core units: {}; between double-tee stems: {}",
+            match c.unit_share {
+                crate::case::UnitShare::Whole => "the loaded unit carries it all".to_string(),
+                crate::case::UnitShare::Width(w) => format!("over {}", fmt_ft_in(w)),
+                crate::case::UnitShare::Rule => format!("published rule ({})", crate::loads::RULE_MARK),
+            },
+            match c.stem_share {
+                crate::case::StemShare::Lever => "lever rule",
+                crate::case::StemShare::OneStem => "one stem carries it all",
+            }
         ));
     }
     v.push(format!(
@@ -281,6 +302,9 @@ fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &Ba
             x.fire,
             x.pieces.map_or(String::new(), |p| format!("; {p} pieces"))
         )?;
+        for o in &x.openings {
+            writeln!(w, "     {o}")?;
+        }
     }
     Ok(())
 }
@@ -357,6 +381,23 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
                 x.pieces.map_or("-".into(), |p| p.to_string())
             )?;
         }
+        let cuts: Vec<(usize, Row)> = if b.bay.case.openings.is_empty() {
+            Vec::new()
+        } else {
+            b.ranking
+                .viable
+                .iter()
+                .take(top)
+                .enumerate()
+                .map(|(k, r)| (k, row(cat, r, b.bay)))
+                .collect()
+        };
+        if !cuts.is_empty() {
+            writeln!(w)?;
+            for (k, x) in cuts {
+                writeln!(w, "- {} (`{}`): {}", k + 1, x.id, x.openings.join("; "))?;
+            }
+        }
     }
     Ok(())
 }
@@ -389,7 +430,7 @@ fn q(s: &str) -> String {
 fn csv_head(w: &mut impl Write) -> io::Result<()> {
     writeln!(
         w,
-        "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces"
+        "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces,units_cut"
     )
 }
 
@@ -397,14 +438,14 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
     let b = BayList { bay, ranking };
     {
         if b.ranking.viable.is_empty() {
-            writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
+            writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
             return Ok(());
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
             let x = row(cat, r, b.bay);
             writeln!(
                 w,
-                "{},{},{},{},{},{},{},{:.1},{:.2},{},{:.3},{:.3},{:.3},{},{:.3},{:.3},{:.3},{},{},{}",
+                "{},{},{},{},{},{},{},{:.1},{:.2},{},{:.3},{:.3},{:.3},{},{:.3},{:.3},{:.3},{},{},{},{}",
                 q(&job.project),
                 q(&b.bay.name),
                 k + 1,
@@ -424,7 +465,8 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
                 x.defl_live,
                 q(&x.fire),
                 q(&x.member_length),
-                x.pieces.map_or(String::new(), |p| p.to_string())
+                x.pieces.map_or(String::new(), |p| p.to_string()),
+                q(&x.openings.join("; "))
             )?;
         }
     }
