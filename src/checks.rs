@@ -759,7 +759,8 @@ pub const JUMP_IN: f64 = 1e-3;
 /// the check itself:
 /// - the ends of the shear zones ([`shear_zones`]);
 /// - where each layer's bond begins (after its debonded length, and at the
-///   edges of an opening that cuts it), and the transfer lengths
+///   edges of an opening that cuts it), the middle of each bonded piece
+///   (where the distances from its two ends cross), and the transfer lengths
 ///   (fse/3000)·db and 50 db and the development length ℓd from there
 ///   (`full`: the strand stresses with full development, psi); ℓtr from
 ///   each member end (the end-region release limits of Tables
@@ -801,6 +802,9 @@ fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
             from(&mut xs, e, dir, hd);
         }
     }
+    // the middle of each bonded piece of strand, where the distances from
+    // its two ends cross (the prestress of a short piece peaks there)
+    xs.push(0.5 * (e0 + e1));
     for (i, layer) in m.layers.iter().enumerate() {
         let fps = full.get(i).copied().unwrap_or(m.strand.fpu.get());
         let mut origins = vec![
@@ -809,6 +813,7 @@ fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
         ];
         if let Some((o1, o2)) = layer.cut {
             origins.extend([(o2, 1.0, false), (o1, -1.0, false)]);
+            xs.extend([0.5 * (e0 + layer.debond + o1), 0.5 * (o2 + e1 - layer.debond)]);
         }
         for (o, dir, debonded) in origins {
             let ld = crate::prestress::development_length(m.history.fse_psi, fps, m.db(), debonded);

@@ -316,9 +316,22 @@ impl<'a> Member<'a> {
             .sum()
     }
 
-    /// Unfactored effects at x.
+    /// Unfactored effects at x. At either end of the stretch checked — a
+    /// free tip, or a support with no overhang beyond it — the moment is
+    /// nil, and is returned as exactly nil rather than a rounding away.
     pub fn effects(&self, x: f64) -> Effects {
         let [(ms, vs), (mt, vt), (md, vd), (ml, vl), (mr, vr)] = std::array::from_fn(|g| self.loads.at(g, x));
+        let (lo, hi) = self.range();
+        if x <= lo + 1e-9 || x >= hi - 1e-9 {
+            return Effects {
+                v_self: vs,
+                v_topping: vt,
+                v_sdl: vd,
+                v_live: vl,
+                v_roof: vr,
+                ..Effects::default()
+            };
+        }
         Effects {
             m_self: ms,
             m_topping: mt,

@@ -30,8 +30,7 @@ fn closed_forms_fix_the_signs() {
 #[test]
 fn diagrams_agree_with_pycba() {
     let root = Path::new(env!("CARGO_MANIFEST_DIR"));
-    let refs: serde_json::Value =
-        serde_json::from_str(&std::fs::read_to_string(root.join("tests/reference/beams.json")).unwrap()).unwrap();
+    let refs: serde_json::Value = serde_json::from_str(&std::fs::read_to_string(root.join("tests/reference/beams.json")).unwrap()).unwrap();
     assert!(refs["library"].as_str().unwrap().starts_with("pycba"));
     let beams = refs["beams"].as_object().unwrap();
     assert!(beams.len() >= 5);

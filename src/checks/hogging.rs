@@ -160,14 +160,16 @@ impl<'m> Hog<'m> {
         strain_compatibility(&conc, &steel(m, x, full))
     }
 
-    /// φ where strand in tension is not developed (Table 21.2.3, from
-    /// memory, medium): 0.75 to ℓtr, rising to 0.90 at ℓd.
-    fn phi_dev(&self, x: f64, c: f64) -> f64 {
+    /// φ where strand of the tension side (the top half) is not developed
+    /// (Table 21.2.3, from memory, medium): 0.75 to ℓtr, rising to 0.90 at
+    /// ℓd. Strand in the bottom half is not the hogging reinforcement.
+    fn phi_dev(&self, x: f64) -> f64 {
         let m = self.m;
         let d = m.end_distance(x);
+        let half = m.bare.depth_in / 2.0;
         let mut phi: f64 = 0.90;
         for (i, layer) in m.layers.iter().enumerate() {
-            if m.layer_y(layer, d) <= c {
+            if m.layer_y(layer, d) <= half {
                 continue;
             }
             let at = m.bonded(layer, x);
@@ -195,7 +197,7 @@ impl<'m> Hog<'m> {
             };
         }
         let f = self.solve(x, Some(&self.full));
-        let phi = phi_flexure(f.eps_t).min(self.phi_dev(x, f.c));
+        let phi = phi_flexure(f.eps_t).min(self.phi_dev(x));
         AtPoint {
             x_in: x,
             mu_lbin: mu,
@@ -223,17 +225,35 @@ pub fn worst(an: &Analysis) -> Option<AtPoint> {
         return None;
     }
     let hog = Hog::new(m);
-    let pts: Vec<AtPoint> = an
+    let most = |x: f64| {
+        let e = m.effects(x);
+        -crate::case::COMBINATIONS.iter().map(|c| c.apply(&e).0).fold(0.0, f64::min)
+    };
+    let mut pts: Vec<AtPoint> = an
         .stations
         .iter()
         .filter(|s| s.mu_neg_lbin < 0.0)
         .map(|s| hog.at(s.x_in, -s.mu_neg_lbin))
         .collect();
+    // the development lengths of the hogging strand stresses end at points
+    // of their own (the station set holds those of the sagging ones)
+    let (lo, hi) = m.range();
+    for (i, layer) in m.layers.iter().enumerate() {
+        let ld = development_length(m.history.fse_psi, hog.full[i], m.db(), layer.debond > 0.0);
+        let mut origins = vec![(m.ends.0 + layer.debond, 1.0), (m.ends.1 - layer.debond, -1.0)];
+        if let Some((o1, o2)) = layer.cut {
+            origins.extend([(o2, 1.0), (o1, -1.0)]);
+        }
+        for (o, dir) in origins {
+            let x = o + dir * ld;
+            let mu = most(x);
+            if x > lo && x < hi && mu > 0.0 {
+                pts.push(hog.at(x, mu));
+            }
+        }
+    }
+    pts.sort_by(|a, b| a.x_in.total_cmp(&b.x_in));
     let mut best = *pts.iter().max_by(|a, b| ratio(a).total_cmp(&ratio(b)))?;
-    let most = |x: f64| {
-        let e = m.effects(x);
-        -crate::case::COMBINATIONS.iter().map(|c| c.apply(&e).0).fold(0.0, f64::min)
-    };
     for w in pts.windows(2) {
         let (a, b) = (w[0], w[1]);
         let cap = a.phi_mn_lbin.min(b.phi_mn_lbin);
