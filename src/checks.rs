@@ -883,6 +883,12 @@ pub fn evaluate_on_stations(cand: &Candidate, case: &DesignCase, xs: &[f64]) -> 
     merge(evs)
 }
 
+/// The analysis of one unit of the bay under one arrangement of its
+/// variable loads ([`scenarios`] lists them all).
+pub fn analyse_as<'a>(cand: &Candidate<'a>, case: &'a DesignCase, unit: &Unit, arr: Arrangement) -> Analysis<'a> {
+    analyse_unit(cand, case, unit, arr, false, None)
+}
+
 fn analyse_unit<'a>(
     cand: &Candidate<'a>,
     case: &'a DesignCase,
