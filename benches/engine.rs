@@ -56,6 +56,49 @@ fn rank_demo_bay(b: divan::Bencher) {
     b.bench(|| rank_bay(&cat, divan::black_box(&job.bays[1]), None));
 }
 
+/// The bay of the placed-loads target: 30 ft, every family of the demo
+/// catalog; `placed` adds ten point loads along the span (dead, live and
+/// roof live, placed where they do most harm across) and a 24 in opening
+/// inside one unit, 10 to 13 ft along.
+fn placed_bay(placed: bool) -> plankwise::bay::Bay {
+    use plankwise::case::{LoadKind, Opening, Placed, PlacedLoad, PointLoad};
+    use plankwise::units::{AreaLoad, Force, Length};
+    let mut bay = plankwise::bay::Bay::new("placed", Length::from_unit(30.0, "ft"));
+    bay.case.sdl = AreaLoad::from_unit(20.0, "psf");
+    bay.case.live = AreaLoad::from_unit(50.0, "psf");
+    if placed {
+        let kinds = [LoadKind::Dead, LoadKind::Live, LoadKind::RoofLive];
+        for i in 0..10 {
+            bay.case.placed.push(PlacedLoad {
+                load: Placed::Point(PointLoad {
+                    p: Force::from_unit(0.4 + 0.1 * i as f64, "kip"),
+                    at: Length::from_unit(1.5 + 2.9 * i as f64, "ft"),
+                    across: None,
+                    size: (Length::new(6.0), Length::new(6.0)),
+                }),
+                kind: kinds[i % 3],
+            });
+        }
+        bay.case.openings.push(Opening {
+            from: Length::from_unit(10.0, "ft"),
+            to: Length::from_unit(13.0, "ft"),
+            across: (Length::new(12.0), Length::new(36.0)),
+            header: None,
+        });
+    }
+    bay
+}
+
+/// Target: the bay with ten point loads and an opening ranks the demo
+/// catalog in under 3 × the time of the same bay without them (compare
+/// the two in one run).
+#[divan::bench(args = [false, true])]
+fn rank_demo_with_ten_points_and_an_opening(b: divan::Bencher, placed: bool) {
+    let (cat, _) = demo();
+    let bay = placed_bay(placed);
+    b.bench(|| rank_bay(&cat, divan::black_box(&bay), None));
+}
+
 #[divan::bench(sample_count = 10)]
 fn rank_10000_candidates(b: divan::Bencher) {
     let cat = Catalog::from_str(&synthetic::catalog(2000, 5), "synthetic.toml").unwrap();

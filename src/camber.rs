@@ -147,35 +147,38 @@ enum Target {
     RightTip,
 }
 
-/// The moment of a unit downward load at the target, on the member on its
-/// supports at 0 and ℓ (virtual work; any mechanics text).
-fn unit_moment(t: Target, l: f64, (lo, hi): (f64, f64), x: f64) -> f64 {
+/// The moment of a unit downward load at the target, on a member on
+/// supports at `s0` and `s1` whose ends are `lo` and `hi` (virtual work;
+/// any mechanics text).
+fn unit_moment(t: Target, (s0, s1): (f64, f64), (lo, hi): (f64, f64), x: f64) -> f64 {
+    let l = s1 - s0;
+    let u = x - s0;
     match t {
         Target::Mid => {
-            if x < 0.0 || x > l {
+            if u < 0.0 || u > l {
                 0.0
-            } else if x <= l / 2.0 {
-                x / 2.0
+            } else if u <= l / 2.0 {
+                u / 2.0
             } else {
-                (l - x) / 2.0
+                (l - u) / 2.0
             }
         }
         Target::RightTip => {
-            let a = hi - l;
-            if x <= 0.0 {
+            let a = hi - s1;
+            if u <= 0.0 {
                 0.0
-            } else if x <= l {
-                -a * x / l
+            } else if u <= l {
+                -a * u / l
             } else {
                 -(hi - x)
             }
         }
         Target::LeftTip => {
-            let a = -lo;
-            if x >= l {
+            let a = s0 - lo;
+            if u >= l {
                 0.0
-            } else if x >= 0.0 {
-                -a * (l - x) / l
+            } else if u >= 0.0 {
+                -a * (l - u) / l
             } else {
                 -(x - lo)
             }
@@ -184,24 +187,30 @@ fn unit_moment(t: Target, l: f64, (lo, hi): (f64, f64), x: f64) -> f64 {
 }
 
 /// The deflection at `t` (downward positive) from a curvature κ(x) =
-/// M/EI (sagging positive): ∫ κ·m dx over the member, by Simpson's rule on
-/// each stretch between `breaks` (κ is smooth between them, so eight
-/// panels per stretch are exact for the piecewise-quadratic moments of
-/// uniform loads and constant sections).
+/// M/EI (sagging positive), on the member in place (supports at the
+/// bearing centres, the whole member with its overhangs).
 fn deflection_at(m: &Member, t: Target, breaks: &[f64], kappa: impl Fn(f64) -> f64) -> f64 {
-    let (lo, hi) = m.range();
-    let l = m.l;
+    deflection_on(t, (0.0, m.l), m.range(), breaks, kappa)
+}
+
+/// The deflection at `t` (downward positive) of a member on supports at
+/// `supports` reaching over `range`, from a curvature κ(x) = M/EI: ∫ κ·m dx
+/// by Simpson's rule on each stretch between `breaks`, the supports and
+/// the middle (κ is smooth between them — piecewise quadratic for uniform
+/// loads on constant sections, piecewise linear for prestress — so eight
+/// panels per stretch are exact).
+fn deflection_on(t: Target, supports: (f64, f64), (lo, hi): (f64, f64), breaks: &[f64], kappa: impl Fn(f64) -> f64) -> f64 {
+    let (s0, s1) = supports;
     let mut cuts: Vec<f64> = breaks.iter().copied().filter(|&x| x > lo && x < hi).collect();
-    cuts.extend([lo, hi, l / 2.0]);
-    if lo < 0.0 {
-        cuts.push(0.0);
-    }
-    if hi > l {
-        cuts.push(l);
+    cuts.extend([lo, hi, 0.5 * (s0 + s1)]);
+    for s in [s0, s1] {
+        if s > lo && s < hi {
+            cuts.push(s);
+        }
     }
     cuts.sort_by(f64::total_cmp);
     cuts.dedup_by(|a, b| (*a - *b).abs() < 1e-9);
-    let f = |x: f64| kappa(x) * unit_moment(t, l, (lo, hi), x);
+    let f = |x: f64| kappa(x) * unit_moment(t, supports, (lo, hi), x);
     let mut sum = 0.0;
     for w in cuts.windows(2) {
         let (a, b) = (w[0], w[1]);
@@ -275,27 +284,40 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         let p = layer.area * po;
         let (ee, ec) = (b.yb_in - layer.y_end, b.yb_in - layer.y_mid);
         if layer.debond > 0.0 || layer.cut.is_some() {
-            // debonded or cut: integrate M/EI with the layer inactive where it is not bonded
+            // debonded or cut: M/EI with the layer inactive where it is not
+            // bonded, on the bed (supported at the member's ends)
             let hd = m.hold_down;
             let e_at = |d: f64| match hd {
                 Some(h) if d < h => ee + (ec - ee) * d / h,
                 _ => ec,
             };
-            let e0 = m.ends.0;
-            prestress += integrate_camber(lm, 2000, |t| {
-                let x = e0 + t;
-                let d = t.min(lm - t);
-                if m.bonded(layer, x) <= 0.0 { 0.0 } else { p * e_at(d) / eci_i }
+            let (e0, e1) = m.ends;
+            let mut breaks = vec![e0 + layer.debond, e1 - layer.debond];
+            if let Some(h) = hd {
+                breaks.extend([e0 + h, e1 - h]);
+            }
+            if let Some((o1, o2)) = layer.cut {
+                breaks.extend([o1, o2]);
+            }
+            prestress += deflection_on(Target::Mid, (e0, e1), (e0, e1), &breaks, |x| {
+                if m.bonded(layer, x) <= 0.0 {
+                    0.0
+                } else {
+                    p * e_at(m.end_distance(x)) / eci_i
+                }
             });
         } else {
             prestress += layer_camber(p, ee, ec, a, lm, eci_i);
         }
     }
-    let self_rel = if m.cut.is_none() {
-        uniform_deflection(m.w[0], lm, eci_i)
-    } else {
-        let e0 = m.ends.0;
-        integrate_camber(lm, 2000, |t| m.release_moment(e0 + t) / (m.eci * m.props_at(e0 + t).0.ix_in4))
+    let self_rel = match m.cut {
+        None => uniform_deflection(m.w[0], lm, eci_i),
+        Some(c) => {
+            let (e0, e1) = m.ends;
+            deflection_on(Target::Mid, (e0, e1), (e0, e1), &[c.along.0, c.along.1], |x| {
+                m.release_moment(x) / (m.eci * m.props_at(x).0.ix_in4)
+            })
+        }
     };
     let mult = if m.comp.is_some() { MARTIN_TOPPED } else { MARTIN_UNTOPPED };
     let l = m.l;

@@ -982,7 +982,20 @@ fn complete<'a>(
     let frequency_hz = vibration::frequency(&member);
     let mids = stations
         .windows(2)
-        .map(|w| Mid::at(&member, (w[0].x_in + w[1].x_in) / 2.0))
+        .map(|w| {
+            let x = (w[0].x_in + w[1].x_in) / 2.0;
+            if w[1].x_in - w[0].x_in <= 2.0 * JUMP_IN * (1.0 + 1e-9) {
+                // the two sides of a shear step: one section, no vertex between
+                Mid {
+                    x_in: x,
+                    d_in: member.end_distance(x),
+                    release_psi: w[0].release_psi,
+                    service: w[0].service,
+                }
+            } else {
+                Mid::at(&member, x)
+            }
+        })
         .collect();
     let mut an = Analysis {
         member,
@@ -1084,6 +1097,7 @@ impl<'a> Prepared<'a> {
             top_w,
             unit,
             member.arrangement,
+            member.net.as_ref().map_or(0.0, |(p, _)| member.bare.area_in2 - p.area_in2),
         );
         member.w = member.loads.w;
         // the station set of a fresh evaluation at this load: the same
@@ -1174,7 +1188,7 @@ pub fn describe_openings_as(cand: &Candidate, case: &DesignCase, short: bool) ->
                     .map(|r| r.x.iter().filter(|&&x| x >= cut.across.0 && x <= cut.across.1).count())
                     .sum();
                 let total: usize = cand.pattern.rows.iter().map(|r| r.x.len()).sum();
-                let net = g.net_properties(props, cut.across.0, cut.across.1);
+                let net = g.net_properties(&g.net(cut.across.0, cut.across.1), props, cut.across.0, cut.across.1);
                 parts.push(format!(
                     "cuts unit {} over {:.1}–{:.1} in of its width: {} of {} strands, web width {:.2} → {:.2} in, area {:.0} → {:.0} in²",
                     j + 1,

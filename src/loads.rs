@@ -524,7 +524,16 @@ impl Loads {
     /// The loads of `unit` under `arr` for a member of `section` in
     /// concrete of unit weight `mix_weight` (lbf/in³), with a topping of
     /// weight per area `topping_weight` (psi).
-    pub fn new(case: &DesignCase, section: &Section, mix_weight: f64, topping_weight: f64, unit: &Unit, arr: Arrangement) -> Loads {
+    /// `removed` is the area of concrete the unit's cut takes (in², 0 uncut).
+    pub fn new(
+        case: &DesignCase,
+        section: &Section,
+        mix_weight: f64,
+        topping_weight: f64,
+        unit: &Unit,
+        arr: Arrangement,
+        removed: f64,
+    ) -> Loads {
         let b = section.props.width_in;
         let l = case.span.get();
         let (a1, a2) = (case.overhang.0.get(), case.overhang.1.get());
@@ -549,10 +558,6 @@ impl Loads {
         // an opening removes the floor over its cut, and its share of the unit's weight
         if let Some(cut) = unit.cut {
             let frac = (cut.across.1 - cut.across.0) / b;
-            let removed = section
-                .geometry
-                .moments_within(0.0, section.geometry.depth, cut.across.0, cut.across.1)
-                .area;
             let take = [
                 removed * mix_weight,
                 w[TOPPING] * frac,
@@ -707,10 +712,6 @@ impl Loads {
             b: e1 - e0,
         }];
         if let Some(cut) = unit.cut {
-            let removed = section
-                .geometry
-                .moments_within(0.0, section.geometry.depth, cut.across.0, cut.across.1)
-                .area;
             own.push(Load::Span {
                 w: -removed * mix_weight,
                 a: cut.along.0 - e0,

@@ -101,8 +101,10 @@ pub struct Member<'a> {
     pub arrangement: Arrangement,
     /// The cut of an opening through this unit, if any.
     pub cut: Option<Cut>,
-    /// The properties where the cut is (bare, composite), if any.
+    /// Where the cut is: its section, its properties (bare, composite), if any.
     pub net: Option<(Properties, Option<Composite>)>,
+    /// The section the cut leaves ([`crate::section::Geometry::net`]).
+    pub net_geometry: Option<crate::section::Geometry>,
     /// The member ends, in from the left support (left, right).
     pub ends: (f64, f64),
     /// Prestress history.
@@ -170,9 +172,12 @@ impl<'a> Member<'a> {
         }
         let aps: f64 = layers.iter().map(|l| l.area).sum();
         let top_w = case.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
-        let loads = Loads::new(case, section, mix.unit_weight.get(), top_w, unit, arr);
-        let net = cut.map(|c| {
-            let p = section.geometry.net_properties(bare, c.across.0, c.across.1);
+        let net_geometry = cut.map(|c| section.geometry.net(c.across.0, c.across.1));
+        // the cut unit's loads take out the concrete the cut removes
+        let removed = net_geometry.as_ref().map_or(0.0, |g| bare.area_in2 - g.moments().area);
+        let loads = Loads::new(case, section, mix.unit_weight.get(), top_w, unit, arr, removed);
+        let net = cut.zip(net_geometry.as_ref()).map(|(c, g)| {
+            let p = section.geometry.net_properties(g, bare, c.across.0, c.across.1);
             let cc = case.topping.as_ref().map(|t| {
                 let n = t.mix.ec().get() / mix.ec().get();
                 Composite::new(&p, t.thickness.get(), p.width_in, n)
@@ -197,6 +202,7 @@ impl<'a> Member<'a> {
             arrangement: arr,
             cut,
             net,
+            net_geometry,
             ends: case.ends(),
             history: History {
                 fpj_psi: 0.0,

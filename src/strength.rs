@@ -24,10 +24,6 @@ pub struct Concrete<'a> {
     /// plain rectangle of this width: (width, depth); (0, 0) when not. A
     /// shortcut for the common stress block inside the top flange.
     pub top_band: (f64, f64),
-    /// The part across (from, to; in from the left edge) an opening takes
-    /// out of the precast section, if any (its topping width is already
-    /// the net one, and `top_band` the net band).
-    pub cut: Option<(f64, f64)>,
 }
 
 /// How a steel layer responds to strain.
@@ -114,10 +110,7 @@ impl Concrete<'_> {
             force += f;
             moment += f * (self.depth() - h + into_precast / 2.0);
         } else if into_precast > 0.0 {
-            let mut m = self.geometry.moments_between(h - into_precast, h);
-            if let Some((x0, x1)) = self.cut {
-                m = m.minus(self.geometry.moments_within(h - into_precast, h, x0, x1));
-            }
+            let m = self.geometry.moments_between(h - into_precast, h);
             if m.area > 0.0 {
                 let f = 0.85 * self.fc * m.area;
                 let y = m.qx / m.area;
@@ -382,7 +375,6 @@ mod tests {
             topping: None,
             beta1: 0.80,
             top_band: (0.0, 0.0),
-            cut: None,
         };
         let fps = fps_approx(0.918, 270_000.0, 243_000.0, 48.0, 6.75, 5000.0, 0.80);
         assert_relative_eq!(fps, 255_540.0, max_relative = 1e-4);
@@ -402,7 +394,6 @@ mod tests {
             topping: None,
             beta1: 0.80,
             top_band: (0.0, 0.0),
-            cut: None,
         };
         let s = builtin_strand("1/2 in").unwrap();
         let ec = 57_000.0 * 5000f64.sqrt();
@@ -443,7 +434,6 @@ mod tests {
             topping: Some((2.0, 48.0, 4000.0)),
             beta1: 0.85,
             top_band: g.top_band(),
-            cut: None,
         };
         let (f, y) = conc.compression(1.0);
         assert_relative_eq!(f, 0.85 * 4000.0 * 48.0);

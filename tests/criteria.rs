@@ -200,3 +200,150 @@ fn saving_a_job_changes_only_the_edited_line() {
     assert_eq!(back.bays[1].marked, job.bays[1].marked);
     assert_eq!(back.bays[1].case.fire_rating, None, "fire = \"none\" drops an inherited rating");
 }
+
+/// Every kind of load and opening through the same four routes: a job
+/// file, a flag, the UI's pane (add, edit, remove) and the writer — the same
+/// item read, the same words for a refused one.
+#[test]
+fn every_item_reads_the_same_through_all_four_routes() {
+    use plankwise::items::ITEMS;
+    let cat = Catalog::from_str(DEMO_US, "demo-us.toml").unwrap();
+    let good = |key: &str| match key {
+        "line" => "w=0.6 klf, at=8 ft, kind=live",
+        "point" => "p=4 kip, at=12 ft, across=24 in, long=8 in, wide=8 in, kind=snow",
+        "strip" => "w=0.5 klf, from=2 ft, to=18 ft, kind=dead",
+        "patch" => "q=150 psf, from=10 ft, to=16 ft, across=6 in, wide=30 in, kind=roof-live",
+        _ => "from=8 ft, to=11 ft, across=12 in, wide=20 in, header=0.2 klf",
+    };
+    // a place beyond the 20 ft span: refused in the same words everywhere
+    let bad = |key: &str| match key {
+        "line" => "w=0.6 klf, at=28 ft",
+        "point" => "p=4 kip, at=28 ft",
+        "strip" => "w=0.5 klf, from=2 ft, to=28 ft",
+        "patch" => "q=150 psf, from=10 ft, to=28 ft, wide=30 in",
+        _ => "from=8 ft, to=28 ft, wide=20 in",
+    };
+    let as_toml = |text: &str| {
+        let parts: Vec<String> = text
+            .split(',')
+            .map(|p| {
+                let (k, v) = p.split_once('=').unwrap();
+                format!("{} = {}", k.trim(), quote(v.trim()))
+            })
+            .collect();
+        format!("[{{ {} }}]", parts.join(", "))
+    };
+    let job = |key: &str, text: &str| {
+        format!(
+            "[job]\nproject = \"p\"\n\n[[bay]]\nname = \"b\"\nspan = \"20 ft\"\n{key} = {}\n",
+            as_toml(text)
+        )
+    };
+    for k in ITEMS {
+        let base = Bay::new("b", Length::from_unit(20.0, "ft")).case;
+        let want = k.parse(bad(k.key), &base).expect_err(k.key);
+        // 1. the job reader
+        let e = Job::from_str(&job(k.key, bad(k.key)), "j.toml").expect_err(k.key).to_string();
+        assert!(
+            e.contains(want.split_once(": ").map_or(want.as_str(), |p| p.1)),
+            "{}: job said\n{e}\nnot\n{want}",
+            k.key
+        );
+        // 2. the flag
+        let flag = format!("--{}", k.flag);
+        let (code, err) = cli(&["rank", "--top", "1", "--span", "20 ft", &flag, bad(k.key)]);
+        assert_eq!(code, 2, "{}: {err}", k.key);
+        assert!(
+            err.contains(&format!("{flag}: {want}")),
+            "{}: the flag said\n{err}\nnot\n{want}",
+            k.key
+        );
+        // 3. the UI: the add row of the kind, typed
+        let mut a = App::new(cat.clone(), Job::single("p", Bay::new("b", Length::from_unit(20.0, "ft"))), None);
+        a.focus = Focus::Bay;
+        let add = a
+            .pane_rows()
+            .iter()
+            .position(|r| matches!(r, plankwise::tui::PaneRow::Add(x) if x.key == k.key))
+            .unwrap();
+        let type_in = |a: &mut App, row: usize, text: &str| {
+            a.field = row;
+            update(a, Action::Edit);
+            for _ in 0..120 {
+                update(a, Action::Input(Key::Backspace));
+            }
+            for ch in text.chars() {
+                update(a, Action::Input(Key::Char(ch)));
+            }
+            update(a, Action::Input(Key::Enter));
+        };
+        type_in(&mut a, add, bad(k.key));
+        assert!(a.status.1 && a.status.0.contains(&want), "{}: the UI said {:?}", k.key, a.status);
+        type_in(&mut a, add, good(k.key));
+        assert!(!a.status.1, "{}: {:?}", k.key, a.status);
+        let v = k.parse(good(k.key), &base).unwrap();
+        assert_eq!(k.list(&a.current_bay().case), vec![v.clone()], "{}", k.key);
+        // edit it in its own row, then remove it
+        let row = a
+            .pane_rows()
+            .iter()
+            .position(|r| matches!(r, plankwise::tui::PaneRow::Item(x, 0) if x.key == k.key))
+            .unwrap();
+        let shown = a.row_text(row).1;
+        assert_eq!(k.parse(&shown, &base).unwrap(), v, "{}: shown as {shown}", k.key);
+        a.field = row;
+        update(&mut a, Action::Remove);
+        assert!(k.list(&a.current_bay().case).is_empty(), "{}", k.key);
+        // 4. the job file and the writer
+        let from_job = Job::from_str(&job(k.key, good(k.key)), "j.toml").unwrap_or_else(|e| panic!("{}: {e}", k.key));
+        assert_eq!(k.list(&from_job.bays[0].case), vec![v.clone()], "{}", k.key);
+        let (code, err) = cli(&["rank", "--top", "1", "--span", "20 ft", &flag, good(k.key)]);
+        assert!(code == 0 || code == 1, "{}: {err}", k.key);
+        for sys in [System::Us, System::Si] {
+            let text = from_job.to_toml(sys);
+            let back = Job::from_str(&text, "w.toml").unwrap_or_else(|e| panic!("{}: {e}\n{text}", k.key));
+            let got = k.list(&back.bays[0].case);
+            assert_eq!(got.len(), 1, "{}", k.key);
+            for (x, y) in got[0].iter().zip(&v) {
+                match (x, y) {
+                    (plankwise::items::Val::Num(Some(p)), plankwise::items::Val::Num(Some(q))) => {
+                        assert!((p - q).abs() <= 1e-5 * q.abs().max(1.0), "{} ({sys:?}): {p} vs {q}\n{text}", k.key)
+                    }
+                    _ => assert_eq!(x, y, "{} ({sys:?})\n{text}", k.key),
+                }
+            }
+        }
+    }
+}
+
+/// Saving a job whose bay lists loads: an edited item is the only line
+/// that changes; one removed from the middle takes its table with it and
+/// leaves the others as typed.
+#[test]
+fn saving_edits_only_the_item_that_changed() {
+    let original = "[job]\nproject = \"p\"\n\n[[bay]]\nname = \"b\"\nspan = \"24 ft\"\npoint = [\n  { p = \"2 kip\", at = \"4 ft\" },   # a post\n  { p = \"3.0 kip\", at = \"12 ft\", kind = \"live\" },\n  { p = \"13.3 kN\", at = \"6.1 m\" },\n]\n";
+    let job = Job::from_str(original, "j.toml").unwrap();
+    let k = plankwise::items::find("point").unwrap();
+    // edit the second
+    let mut edited = job.clone();
+    let mut all = k.list(&edited.bays[0].case);
+    all[1] = k.parse("p=3.5 kip, at=12 ft, kind=live", &edited.bays[0].case).unwrap();
+    k.store(&mut edited.bays[0].case, all);
+    let saved = edited.save_text(System::Us);
+    let diff: Vec<(&str, &str)> = original.lines().zip(saved.lines()).filter(|(a, b)| a != b).collect();
+    assert_eq!(diff.len(), 1, "{saved}");
+    assert!(diff[0].1.contains("3.5 kip") && diff[0].0.contains("3.0 kip"), "{diff:?}");
+    // remove the first: the comment's line goes, the rest stay as typed
+    let mut removed = job.clone();
+    let mut all = k.list(&removed.bays[0].case);
+    all.remove(0);
+    k.store(&mut removed.bays[0].case, all);
+    let saved = removed.save_text(System::Us);
+    assert!(!saved.contains("2 kip"), "{saved}");
+    assert!(
+        saved.contains("p = \"3.0 kip\"") && saved.contains("p = \"13.3 kN\", at = \"6.1 m\""),
+        "{saved}"
+    );
+    let back = Job::from_str(&saved, "j.toml").unwrap();
+    assert_eq!(k.list(&back.bays[0].case).len(), 2);
+}

@@ -216,7 +216,8 @@ fn an_opening_cuts_strands_which_bond_again_from_its_edges() {
     // net section: the area of the band taken out is gone
     let net = m.props_at(120.0).0;
     let taken = c.section.geometry.moments_within(0.0, 8.0, a, b).area;
-    assert_relative_eq!(net.area_in2, c.section.props.area_in2 - taken, max_relative = 1e-9);
+    // (the cores it cuts traced as 256-gons both ways: within 1e-4)
+    assert_relative_eq!(net.area_in2, c.section.props.area_in2 - taken, max_relative = 1e-4);
     // and the floor over the opening carries nothing: the cut unit's dead
     // load there is the rest of the width's
     let e_cut = m.effects(132.0);

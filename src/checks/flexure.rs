@@ -56,19 +56,18 @@ pub struct AtStation {
 /// section an opening leaves (its part of the precast and of the topping
 /// taken out).
 fn concrete<'m>(m: &'m Member, net: bool) -> Concrete<'m> {
-    let (props, cut) = match (&m.net, m.cut, net) {
-        (Some((p, _)), Some(c), true) => (p, Some(c.across)),
-        _ => (m.bare, None),
+    let (props, geometry) = match (&m.net, &m.net_geometry, net) {
+        (Some((p, _)), Some(g), true) => (p, g),
+        _ => (m.bare, &m.section.geometry),
     };
     let topping = m.case.topping.as_ref().map(|t| (t.thickness.get(), props.width_in, t.mix.fc.get()));
     let b1 = m.case.topping.as_ref().map_or(m.mix.beta1(), |t| beta1(t.mix.fc));
     Concrete {
-        geometry: &m.section.geometry,
+        geometry,
         fc: m.mix.fc.get(),
         topping,
         beta1: b1,
         top_band: props.top_band,
-        cut,
     }
 }
 

@@ -120,6 +120,8 @@ pub struct AtPoint {
 struct Hog<'m> {
     m: &'m Member<'m>,
     flipped: crate::section::Geometry,
+    /// The section an opening leaves, upside down.
+    flipped_net: Option<crate::section::Geometry>,
     full: Vec<f64>,
     /// Whether any strand or bar lies in the top half, the tension side:
     /// without it the top is unreinforced and the strength is taken as nil
@@ -137,6 +139,7 @@ impl<'m> Hog<'m> {
         let mut h = Hog {
             m,
             flipped,
+            flipped_net: m.net_geometry.as_ref().map(|g| g.flipped()),
             full: Vec::new(),
             top_steel,
         };
@@ -148,14 +151,23 @@ impl<'m> Hog<'m> {
 
     fn solve(&self, x: f64, full: Option<&[f64]>) -> Flexure {
         let m = self.m;
-        let cut = m.cut.filter(|c| x >= c.along.0 && x <= c.along.1).map(|c| c.across);
-        let conc = Concrete {
-            geometry: &self.flipped,
-            fc: m.mix.fc.get(),
-            topping: None,
-            beta1: m.mix.beta1(),
-            top_band: if cut.is_some() { (0.0, 0.0) } else { self.flipped.top_band() },
-            cut,
+        let over = m.cut.is_some_and(|c| x >= c.along.0 && x <= c.along.1);
+        let conc = match (&self.flipped_net, over) {
+            // the net section's outline is bridged: no band shortcut on it
+            (Some(g), true) => Concrete {
+                geometry: g,
+                fc: m.mix.fc.get(),
+                topping: None,
+                beta1: m.mix.beta1(),
+                top_band: (0.0, 0.0),
+            },
+            _ => Concrete {
+                geometry: &self.flipped,
+                fc: m.mix.fc.get(),
+                topping: None,
+                beta1: m.mix.beta1(),
+                top_band: self.flipped.top_band(),
+            },
         };
         strain_compatibility(&conc, &steel(m, x, full))
     }
