@@ -753,10 +753,12 @@ fn in_zones(zones: &[(f64, f64)], x: f64) -> bool {
 /// the jump itself, large enough to keep the stations apart.
 pub const JUMP_IN: f64 = 1e-3;
 
-/// Stations: every 1/20 of the span (and every 1/4 of an overhang) plus
-/// every point where a checked quantity or its limit changes its law, so
-/// that each check's maximum is at a station or is found between two by
-/// the check itself:
+/// Stations: every point where a checked quantity or its limit changes
+/// its law, so that each check's maximum is at a station or is found
+/// between two by the check itself, and no two further apart than ℓ/20
+/// (a quarter of an overhang: gaps are filled evenly) so that what is read
+/// at stations only — the first cracking, the stem reinforcement needed —
+/// is read closely:
 /// - the ends of the shear zones ([`shear_zones`]);
 /// - where each layer's bond begins (after its debonded length, and at the
 ///   edges of an opening that cuts it), the middle of each bonded piece
@@ -782,14 +784,7 @@ fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
     let (lo, hi) = m.range();
     let (e0, e1) = m.ends;
     let mut xs: Vec<f64> = Vec::with_capacity(64);
-    xs.extend((0..=20).map(|k| l * k as f64 / 20.0));
-    if lo < 0.0 {
-        xs.extend((0..4).map(|k| lo * (1.0 - k as f64 / 4.0)));
-    }
-    if hi > l {
-        xs.extend((1..=4).map(|k| l + (hi - l) * k as f64 / 4.0));
-    }
-    xs.push(l / 2.0);
+    xs.extend([lo, 0.0, l / 2.0, l, hi]);
     for &(a, b) in zones {
         xs.extend([a, b]);
     }
@@ -846,7 +841,21 @@ fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
     xs.retain(|&x| x >= lo && x <= hi);
     xs.sort_by(f64::total_cmp);
     xs.dedup_by(|a, b| (*a - *b).abs() < 1e-6);
-    xs
+    // no two stations further apart than ℓ/20 (a quarter of an overhang)
+    let mut filled = Vec::with_capacity(xs.len() + 24);
+    for w in xs.windows(2) {
+        let (a, b) = (w[0], w[1]);
+        filled.push(a);
+        let most = if a < 0.0 || b > l {
+            0.25 * if a < 0.0 { -lo } else { hi - l }
+        } else {
+            l / 20.0
+        };
+        let n = ((b - a) / most * (1.0 - 1e-9)).ceil() as usize;
+        filled.extend((1..n).map(|k| a + (b - a) * k as f64 / n as f64));
+    }
+    filled.extend(xs.last());
+    filled
 }
 
 /// Build the analysis of the loaded unit under the first arrangement of
@@ -889,6 +898,20 @@ pub fn analyse_as<'a>(cand: &Candidate<'a>, case: &'a DesignCase, unit: &Unit, a
     analyse_unit(cand, case, unit, arr, false, None)
 }
 
+/// How one analysis is run.
+#[derive(Clone, Copy)]
+struct How<'b, 'a> {
+    /// Notes left out (ranking).
+    brief: bool,
+    /// Every station kept, the mirrored half of a symmetric member too
+    /// (another unit's analysis borrows them).
+    whole: bool,
+    /// The loaded unit's analysis under the same arrangement, for a unit an
+    /// opening cuts: outside the opening's reach the two are the same
+    /// member under the same loads, so its stations are borrowed.
+    base: Option<&'b Analysis<'a>>,
+}
+
 fn analyse_unit<'a>(
     cand: &Candidate<'a>,
     case: &'a DesignCase,
@@ -897,6 +920,47 @@ fn analyse_unit<'a>(
     brief: bool,
     given: Option<&[f64]>,
 ) -> Analysis<'a> {
+    analyse_how(
+        cand,
+        case,
+        unit,
+        arr,
+        given,
+        How {
+            brief,
+            whole: !brief,
+            base: None,
+        },
+    )
+}
+
+/// Where an opening's cut makes a unit differ from the uncut one: its
+/// length along the span and the reach beyond each edge of the strand's
+/// development (the prestress, the strength cap and φ all recover within
+/// ℓd) and of the webs cut (h/2).
+fn reach(m: &Member, full: &[f64]) -> Option<(f64, f64)> {
+    let c = m.cut?;
+    let mut r = m.h_total / 2.0;
+    for (i, layer) in m.layers.iter().enumerate() {
+        if layer.cut.is_some() {
+            let fps = full.get(i).copied().unwrap_or(m.strand.fpu.get());
+            r = r
+                .max(crate::prestress::development_length(m.history.fse_psi, fps, m.db(), false))
+                .max(m.ltr_shear);
+        }
+    }
+    Some((c.along.0 - r - 1e-6, c.along.1 + r + 1e-6))
+}
+
+fn analyse_how<'a>(
+    cand: &Candidate<'a>,
+    case: &'a DesignCase,
+    unit: &Unit,
+    arr: Arrangement,
+    given: Option<&[f64]>,
+    how: How<'_, 'a>,
+) -> Analysis<'a> {
+    let brief = how.brief;
     let member = Member::build(cand.section, cand.pattern, cand.mix, case, unit, arr);
     let zones = shear_zones(&member);
     let mut memo = flexure::Memo::new(&member);
@@ -915,7 +979,32 @@ fn analyse_unit<'a>(
     if let Some(xs) = given {
         let stations = xs.iter().map(|&x| at(x)).collect();
         let fire = fire::assess(&member, brief);
-        return complete(member, stations, zones, fire, brief, full, label);
+        return complete(member, stations, zones, fire, brief, full, label, None);
+    }
+    // a cut unit under the loaded unit's loads: its own state only within
+    // the opening's reach, the loaded unit's elsewhere
+    let borrow = match (how.base, unit.headers.is_empty()) {
+        (Some(b), true) if b.member.cut.is_none() => reach(&member, &full).map(|z| (b, z)),
+        _ => None,
+    };
+    if let Some((b, (z0, z1))) = borrow {
+        // the loaded unit's stations outside the reach, this unit's own within
+        let mut stations: Vec<Station> = Vec::with_capacity(b.stations.len() + xs.len());
+        let mut own = xs.iter().copied().filter(|&x| x >= z0 && x <= z1).peekable();
+        for s in &b.stations {
+            if s.x_in >= z0 && s.x_in <= z1 {
+                continue;
+            }
+            while let Some(&x) = own.peek().filter(|&&x| x < s.x_in) {
+                stations.push(at(x));
+                own.next();
+            }
+            stations.push(s.clone());
+        }
+        stations.extend(own.map(&mut at));
+
+        let fire = fire::assess(&member, brief);
+        return complete(member, stations, zones, fire, brief, full, label, Some((b, (z0, z1))));
     }
     let stations = if symmetric(&member) {
         // the member, its strand and its loads are the same seen from either
@@ -925,11 +1014,11 @@ fn analyse_unit<'a>(
         let half = 0.5 * (lo + hi);
         // xs is sorted: the left half is a prefix
         let n = xs.iter().take_while(|&&x| x <= half + 1e-9).count();
-        let mut all = Vec::with_capacity(if brief { n } else { 2 * n });
+        let mut all = Vec::with_capacity(if how.whole { 2 * n } else { n });
         all.extend(xs[..n].iter().map(|&x| at(x)));
         // a brief evaluation keeps the numbers only: every maximum over the
         // stations is already found on the left half
-        if !brief {
+        if how.whole {
             for i in (0..n).rev() {
                 if all[i].x_in < half - 1e-9 {
                     let m = all[i].mirrored(member.l);
@@ -942,7 +1031,58 @@ fn analyse_unit<'a>(
         xs.into_iter().map(at).collect::<Vec<Station>>()
     };
     let fire = fire::assess(&member, brief);
-    complete(member, stations, zones, fire, brief, full, label)
+    complete(member, stations, zones, fire, brief, full, label, None)
+}
+
+/// Every unit of the bay the checks must see, each under every arrangement
+/// of its variable loads: under each arrangement the loaded unit first,
+/// then the others, a cut unit borrowing the loaded unit's stations away
+/// from its opening.
+fn analyses<'a>(cand: &Candidate<'a>, case: &'a DesignCase, brief: bool) -> Vec<Analysis<'a>> {
+    let mut out = Vec::new();
+    let sc = scenarios(cand, case);
+    let mut arrs: Vec<Arrangement> = Vec::new();
+    for (_, a) in &sc {
+        if !arrs.contains(a) {
+            arrs.push(*a);
+        }
+    }
+    let shares = sc.iter().any(|(u, _)| u.cut.is_some() && u.headers.is_empty());
+    for a in arrs {
+        let mut units = sc.iter().filter(|(_, x)| *x == a).map(|(u, _)| u);
+        let Some(first) = units.next() else { continue };
+        let base = analyse_how(
+            cand,
+            case,
+            first,
+            a,
+            None,
+            How {
+                brief,
+                whole: !brief || shares,
+                base: None,
+            },
+        );
+        let others: Vec<Analysis<'a>> = units
+            .map(|u| {
+                analyse_how(
+                    cand,
+                    case,
+                    u,
+                    a,
+                    None,
+                    How {
+                        brief,
+                        whole: !brief,
+                        base: Some(&base),
+                    },
+                )
+            })
+            .collect();
+        out.push(base);
+        out.extend(others);
+    }
+    out
 }
 
 /// The state at station `x` under the member's loads, given what does not
@@ -969,7 +1109,10 @@ fn loaded(member: &Member, x: f64, zones: &[(f64, f64)], pre: Effective, flexure
     }
 }
 
-/// The analysis from its stations: camber and frequency added.
+/// The analysis from its stations: camber and frequency added. `borrow`:
+/// the loaded unit's analysis and the stretch outside which its midpoints
+/// are this one's too.
+#[allow(clippy::too_many_arguments)]
 fn complete<'a>(
     member: Member<'a>,
     stations: Vec<Station>,
@@ -978,6 +1121,7 @@ fn complete<'a>(
     brief: bool,
     full: Vec<f64>,
     unit: String,
+    borrow: Option<(&Analysis<'a>, (f64, f64))>,
 ) -> Analysis<'a> {
     let frequency_hz = vibration::frequency(&member);
     let mids = stations
@@ -986,15 +1130,21 @@ fn complete<'a>(
             let x = (w[0].x_in + w[1].x_in) / 2.0;
             if w[1].x_in - w[0].x_in <= 2.0 * JUMP_IN * (1.0 + 1e-9) {
                 // the two sides of a shear step: one section, no vertex between
-                Mid {
+                return Mid {
                     x_in: x,
                     d_in: member.end_distance(x),
                     release_psi: w[0].release_psi,
                     service: w[0].service,
-                }
-            } else {
-                Mid::at(&member, x)
+                };
             }
+            if let Some((b, (z0, z1))) = borrow {
+                if w[1].x_in < z0 || w[0].x_in > z1 {
+                    if let Ok(k) = b.mids.binary_search_by(|m| m.x_in.total_cmp(&x)) {
+                        return b.mids[k];
+                    }
+                }
+            }
+            Mid::at(&member, x)
         })
         .collect();
     let mut an = Analysis {
@@ -1046,9 +1196,9 @@ impl<'a> Prepared<'a> {
         let units = crate::loads::units(case, cand.section, cand.mix.unit_weight.get(), top_w);
         let arrs = crate::loads::arrangements(&probe);
         let mut bases = Vec::new();
-        for u in units {
-            for &a in &arrs {
-                let an = analyse_unit(cand, case, &u, a, true, None);
+        for &a in &arrs {
+            for u in &units {
+                let an = analyse_unit(cand, case, u, a, true, None);
                 bases.push((u.clone(), an));
             }
         }
@@ -1097,7 +1247,6 @@ impl<'a> Prepared<'a> {
             top_w,
             unit,
             member.arrangement,
-            member.net.as_ref().map_or(0.0, |(p, _)| member.bare.area_in2 - p.area_in2),
         );
         member.w = member.loads.w;
         // the station set of a fresh evaluation at this load: the same
@@ -1136,6 +1285,7 @@ impl<'a> Prepared<'a> {
             true,
             self.full[i].clone(),
             b.unit.clone(),
+            None,
         )
     }
 }
@@ -1144,10 +1294,7 @@ impl<'a> Prepared<'a> {
 /// the bay the checks must see under every arrangement of its variable
 /// loads, each check at its worst ([`merge`]).
 pub fn evaluate(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    let evs = scenarios(cand, case)
-        .into_iter()
-        .map(|(u, a)| finish(analyse_unit(cand, case, &u, a, false, None)))
-        .collect();
+    let evs = analyses(cand, case, false).into_iter().map(finish).collect();
     let mut ev = merge(evs);
     ev.openings = describe_openings(cand, case);
     ev
@@ -1254,10 +1401,7 @@ pub fn describe_openings_as(cand: &Candidate, case: &DesignCase, short: bool) ->
 /// The same numbers as [`evaluate`] without the checks' notes and the
 /// stations: what ranking and the envelope need, in less time and memory.
 pub fn evaluate_brief(cand: &Candidate, case: &DesignCase) -> Evaluation {
-    let evs = scenarios(cand, case)
-        .into_iter()
-        .map(|(u, a)| results(&analyse_unit(cand, case, &u, a, true, None)))
-        .collect();
+    let evs = analyses(cand, case, true).iter().map(results).collect();
     trimmed(merge(evs))
 }
 

@@ -523,17 +523,12 @@ fn clip(region: Region, kind: LoadKind, (a, b): (f64, f64), l: f64, (lo, hi): (f
 impl Loads {
     /// The loads of `unit` under `arr` for a member of `section` in
     /// concrete of unit weight `mix_weight` (lbf/in³), with a topping of
-    /// weight per area `topping_weight` (psi).
-    /// `removed` is the area of concrete the unit's cut takes (in², 0 uncut).
-    pub fn new(
-        case: &DesignCase,
-        section: &Section,
-        mix_weight: f64,
-        topping_weight: f64,
-        unit: &Unit,
-        arr: Arrangement,
-        removed: f64,
-    ) -> Loads {
+    /// weight per area `topping_weight` (psi). A unit an opening cuts
+    /// carries the loads of the whole unit, the floor over the opening and
+    /// the concrete it removes included (conservative: it keeps the cut unit
+    /// under exactly the loaded unit's loads, so the two differ only near
+    /// the opening).
+    pub fn new(case: &DesignCase, section: &Section, mix_weight: f64, topping_weight: f64, unit: &Unit, arr: Arrangement) -> Loads {
         let b = section.props.width_in;
         let l = case.span.get();
         let (a1, a2) = (case.overhang.0.get(), case.overhang.1.get());
@@ -552,24 +547,6 @@ impl Loads {
             if w[g] != 0.0 {
                 for (s, e) in clip(arr.region, kinds[g], range, l, range) {
                     groups[g].push(Load::Span { w: w[g], a: s, b: e });
-                }
-            }
-        }
-        // an opening removes the floor over its cut, and its share of the unit's weight
-        if let Some(cut) = unit.cut {
-            let frac = (cut.across.1 - cut.across.0) / b;
-            let take = [
-                removed * mix_weight,
-                w[TOPPING] * frac,
-                w[SDL] * frac,
-                w[LIVE] * frac,
-                w[ROOF] * frac,
-            ];
-            for g in 0..GROUPS {
-                if take[g] != 0.0 {
-                    for (s, e) in clip(arr.region, kinds[g], cut.along, l, range) {
-                        groups[g].push(Load::Span { w: -take[g], a: s, b: e });
-                    }
                 }
             }
         }
@@ -706,18 +683,11 @@ impl Loads {
         // on the bed the member rests on its two ends
         let (e0, e1) = case.ends();
         let bed = Beam { l: e1 - e0 };
-        let mut own: Vec<Load> = vec![Load::Span {
+        let own: Vec<Load> = vec![Load::Span {
             w: w_self,
             a: 0.0,
             b: e1 - e0,
         }];
-        if let Some(cut) = unit.cut {
-            own.push(Load::Span {
-                w: -removed * mix_weight,
-                a: cut.along.0 - e0,
-                b: cut.along.1 - e0,
-            });
-        }
         let bed_r = bed.reactions(&own);
         Loads {
             beam,

@@ -173,9 +173,7 @@ impl<'a> Member<'a> {
         let aps: f64 = layers.iter().map(|l| l.area).sum();
         let top_w = case.topping.as_ref().map_or(0.0, |t| t.thickness.get() * t.mix.unit_weight.get());
         let net_geometry = cut.map(|c| section.geometry.net(c.across.0, c.across.1));
-        // the cut unit's loads take out the concrete the cut removes
-        let removed = net_geometry.as_ref().map_or(0.0, |g| bare.area_in2 - g.moments().area);
-        let loads = Loads::new(case, section, mix.unit_weight.get(), top_w, unit, arr, removed);
+        let loads = Loads::new(case, section, mix.unit_weight.get(), top_w, unit, arr);
         let net = cut.zip(net_geometry.as_ref()).map(|(c, g)| {
             let p = section.geometry.net_properties(g, bare, c.across.0, c.across.1);
             let cc = case.topping.as_ref().map(|t| {

@@ -182,6 +182,7 @@ impl Geometry {
         for v in &self.voids {
             w -= match v {
                 Shape::Polygon(p) => inside(&p.points),
+                Shape::CircleSide { .. } => inside(&shapes::outline_points(v)),
                 // the curved voids are symmetric about their centre line
                 Shape::Circle { cx, .. } | Shape::Stadium { cx, .. } | Shape::RoundedRect { cx, .. } => {
                     let half = v.chord(y) / 2.0;
@@ -233,8 +234,33 @@ impl Geometry {
             if b <= x0 || a >= x1 {
                 voids.push(v.clone());
             } else if a < x0 || b > x1 {
-                for piece in sides(&shapes::outline_points(v)) {
-                    voids.push(Shape::Polygon(Polygon { points: piece }));
+                match *v {
+                    // a round core keeps its exact parts either side of the cut
+                    Shape::Circle { cx, cy, r } => {
+                        if a < x0 {
+                            voids.push(Shape::CircleSide {
+                                cx,
+                                cy,
+                                r,
+                                at: x0,
+                                left: true,
+                            });
+                        }
+                        if b > x1 {
+                            voids.push(Shape::CircleSide {
+                                cx,
+                                cy,
+                                r,
+                                at: x1,
+                                left: false,
+                            });
+                        }
+                    }
+                    _ => {
+                        for piece in sides(&shapes::outline_points(v)) {
+                            voids.push(Shape::Polygon(Polygon { points: piece }));
+                        }
+                    }
                 }
             }
         }
@@ -299,6 +325,13 @@ impl Geometry {
                 .map(|v| match *v {
                     Shape::Polygon(ref p) => Shape::Polygon(flip_poly(p)),
                     Shape::Circle { cx, cy, r } => Shape::Circle { cx, cy: h - cy, r },
+                    Shape::CircleSide { cx, cy, r, at, left } => Shape::CircleSide {
+                        cx,
+                        cy: h - cy,
+                        r,
+                        at,
+                        left,
+                    },
                     Shape::Stadium { cx, cy, w, h: hh } => Shape::Stadium { cx, cy: h - cy, w, h: hh },
                     Shape::RoundedRect { cx, cy, w, h: hh, r } => Shape::RoundedRect {
                         cx,
