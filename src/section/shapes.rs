@@ -417,32 +417,9 @@ impl Piece {
     }
 }
 
-/// Sutherland–Hodgman clip of a polygon to lo ≤ y ≤ hi; exact for the area
-/// integrals even where the result has zero-width bridges.
-#[cfg(test)]
-fn clip_band(points: &[(f64, f64)], lo: f64, hi: f64) -> Vec<(f64, f64)> {
-    fn clip(pts: &[(f64, f64)], inside: &dyn Fn(f64) -> bool, at: f64) -> Vec<(f64, f64)> {
-        let mut out = Vec::with_capacity(pts.len() + 4);
-        for i in 0..pts.len() {
-            let p = pts[i];
-            let q = pts[(i + 1) % pts.len()];
-            let (pin, qin) = (inside(p.1), inside(q.1));
-            if pin {
-                out.push(p);
-            }
-            if pin != qin {
-                let t = (at - p.1) / (q.1 - p.1);
-                out.push((p.0 + t * (q.0 - p.0), at));
-            }
-        }
-        out
-    }
-    let a = clip(points, &|y| y >= lo, lo);
-    clip(&a, &|y| y <= hi, hi)
-}
-
 /// Sutherland–Hodgman clip of a polygon to the box x0 ≤ x ≤ x1,
-/// lo ≤ y ≤ hi; exact for the area integrals, as [`clip_band`].
+/// lo ≤ y ≤ hi; exact for the area integrals even where the result has
+/// zero-width bridges.
 pub fn clip_box(points: &[(f64, f64)], (x0, x1): (f64, f64), (lo, hi): (f64, f64)) -> Vec<(f64, f64)> {
     fn clip(pts: &[(f64, f64)], axis: usize, keep_above: bool, at: f64) -> Vec<(f64, f64)> {
         let get = |p: (f64, f64)| if axis == 0 { p.0 } else { p.1 };
