@@ -443,6 +443,11 @@ impl App {
         self.visible.get(self.selected).map(|(i, _)| &self.rows[*i])
     }
 
+    /// The selected row's catalog entry.
+    pub fn selected_entry(&self) -> Option<Entry<'_>> {
+        self.selected_row().map(|r| self.entry_of(r))
+    }
+
     fn entry_of(&self, r: &Row) -> Entry<'_> {
         let s = &self.catalog.sections[r.section];
         Entry {

@@ -262,6 +262,17 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         ))
         .style(t.muted),
     ];
+    // which units the bay's openings cut, for this member's width
+    if let Some(e) = app.selected_entry() {
+        let case = crate::select::case_for(
+            app.current_bay(),
+            r.topping,
+            &crate::select::topping_mix(&app.catalog, app.current_bay()),
+        );
+        for o in crate::checks::describe_openings_as(&e.candidate(), &case, true) {
+            lines.push(Line::from(crate::input::escape_controls(&o)).style(t.muted));
+        }
+    }
     // failures first, then the highest ratios: the ones that matter show first
     let mut checks: Vec<&crate::checks::CheckResult> = ev.checks.iter().collect();
     checks.sort_by(|a, b| a.pass.cmp(&b.pass).then(b.ratio.total_cmp(&a.ratio)));
