@@ -152,11 +152,20 @@ fn a_closed_pipe_is_not_an_error() {
 #[test]
 fn the_example_in_the_catalog_reference_is_valid() {
     let doc = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/catalog/README.md")).unwrap();
-    let start = doc.rfind("```toml").unwrap() + "```toml".len();
+    // the catalog's example is the last one before the job file's section
+    let catalog_part = &doc[..doc.find("# The job file").unwrap()];
+    let start = catalog_part.rfind("```toml").unwrap() + "```toml".len();
     let end = start + doc[start..].find("```").unwrap();
     let cat = plankwise::catalog::Catalog::from_str(&doc[start..end], "catalog/README.md").unwrap();
     assert_eq!(cat.entry_count(), 1);
     assert!(cat.warnings.is_empty());
+    // and the loads and openings of a bay, as that section shows them, read in a job
+    let start = doc.rfind("```toml").unwrap() + "```toml".len();
+    let end = start + doc[start..].find("```").unwrap();
+    let job = format!("[job]\nproject = \"p\"\n\n[[bay]]\nname = \"b\"\nspan = \"34 ft\"\n{}", &doc[start..end]);
+    let j = plankwise::job::Job::from_str(&job, "catalog/README.md").unwrap();
+    assert_eq!(j.bays[0].case.placed.len(), 2);
+    assert_eq!(j.bays[0].case.openings.len(), 1);
 }
 
 #[test]
