@@ -162,7 +162,10 @@ fn the_example_in_the_catalog_reference_is_valid() {
     // and the loads and openings of a bay, as that section shows them, read in a job
     let start = doc.rfind("```toml").unwrap() + "```toml".len();
     let end = start + doc[start..].find("```").unwrap();
-    let job = format!("[job]\nproject = \"p\"\n\n[[bay]]\nname = \"b\"\nspan = \"34 ft\"\n{}", &doc[start..end]);
+    let job = format!(
+        "[job]\nproject = \"p\"\n\n[[bay]]\nname = \"b\"\nspan = \"34 ft\"\n{}",
+        &doc[start..end]
+    );
     let j = plankwise::job::Job::from_str(&job, "catalog/README.md").unwrap();
     assert_eq!(j.bays[0].case.placed.len(), 2);
     assert_eq!(j.bays[0].case.openings.len(), 1);
