@@ -3,6 +3,7 @@
 //! (write a file, quit) are returned for the shell in the binary to carry out.
 //! Rendering, in [`ui`], reads the state only.
 
+pub mod field;
 pub mod keymap;
 pub mod theme;
 pub mod ui;
@@ -22,6 +23,7 @@ use crate::section::Family;
 use crate::select::envelope::{LoadLimit, max_live};
 use crate::select::{Entry, Metrics, case_for, failure_reason, rank_bay, topping_mix};
 use crate::units::{AreaLoad, Length};
+use field::{Outcome, TextField};
 use keymap::{Key, Keymap};
 
 /// Everything the user can ask for.
@@ -85,6 +87,8 @@ pub enum Action {
     Quit,
     /// A key typed into a prompt, the search, an edit or a question.
     Input(Key),
+    /// A key bound to nothing: the status line says so.
+    Unbound(Key),
     /// The shell reports that a file exists: ask before overwriting.
     AskOverwrite,
     /// The shell reports success.
@@ -162,12 +166,12 @@ pub enum PromptKind {
 pub enum Mode {
     /// Keys go to the keymap.
     Normal,
-    /// Typing a search query.
-    Search,
+    /// Typing a search query (the list narrows as it is typed).
+    Search(TextField),
     /// Editing a bay field.
-    Edit(String),
+    Edit(TextField),
     /// Typing a path.
-    Prompt(PromptKind, String),
+    Prompt(PromptKind, TextField),
     /// A yes/no question.
     Confirm(Question),
     /// Help overlay.
@@ -213,9 +217,14 @@ pub struct Row {
     pub viable: bool,
     /// Governing check title and ratio.
     pub governing: (String, f64),
-    /// First failure in order of importance, with how much.
-    pub failure: Option<String>,
+    /// First failure in order of importance, with how much, and its ratio
+    /// (the ratio a failing row shows belongs to the check it names).
+    pub failure: Option<(String, f64)>,
 }
+
+/// The ratio shown for a failing entry with no failing check to name
+/// (cannot happen: a verdict fails only by a check).
+const RATIO_FAIL: f64 = 1.0;
 
 /// The ranked rows of a bay, viable first (what the list shows).
 pub fn rows_for(cat: &Catalog, bay: &Bay) -> Vec<Row> {
@@ -234,7 +243,7 @@ pub fn rows_for(cat: &Catalog, bay: &Bay) -> Vec<Row> {
             metrics: x.metrics,
             viable: x.verdict.viable,
             governing: (x.verdict.governing().info.title.to_string(), x.verdict.governing().ratio),
-            failure: (!x.verdict.viable).then(|| failure_reason(x)),
+            failure: (!x.verdict.viable).then(|| (failure_reason(x), x.verdict.first_failure().map_or(RATIO_FAIL, |f| f.ratio))),
         }
     };
     r.viable.iter().chain(r.failing.iter()).map(to_row).collect()
@@ -360,10 +369,10 @@ impl App {
 
     /// What a key means now: prompts, edits, questions and the help
     /// overlay take keys first; otherwise the keymap decides.
-    pub fn action_for(&self, key: Key) -> Option<Action> {
+    pub fn action_for(&self, key: Key) -> Action {
         match self.mode {
-            Mode::Normal => self.keymap.action(key),
-            _ => Some(Action::Input(key)),
+            Mode::Normal => self.keymap.action(key).unwrap_or(Action::Unbound(key)),
+            _ => Action::Input(key),
         }
     }
 
@@ -635,17 +644,26 @@ impl App {
         );
     }
 
+    /// Step the uniform load the bay's use names: the floor live load, or
+    /// on a roof the larger of the roof live and snow loads (roof live
+    /// when they are equal) — the load that enters the combinations.
     fn step_live(&mut self, psf: f64) {
         let step = match self.units {
             Units::Us => AreaLoad::from_unit(psf, "psf"),
             Units::Si => AreaLoad::from_unit(psf * 0.05, "kPa"),
         };
+        let top = AreaLoad::from_unit(2000.0, "psf").get();
         let c = &mut self.job.bays[self.bay].case;
-        c.live = AreaLoad::new((c.live.get() + step.get()).clamp(0.0, AreaLoad::from_unit(2000.0, "psf").get()));
-        let live = c.live;
-        let s = self.show_load(live);
+        let (name, slot) = match c.member_use {
+            crate::case::Use::Floor => ("live load L", &mut c.live),
+            crate::case::Use::Roof if c.snow.get() > c.roof_live.get() => ("snow load S", &mut c.snow),
+            crate::case::Use::Roof => ("roof live load Lr", &mut c.roof_live),
+        };
+        *slot = AreaLoad::new((slot.get() + step.get()).clamp(0.0, top));
+        let now = *slot;
+        let s = self.show_load(now);
         self.changed();
-        self.say(format!("live load {s}"), false);
+        self.say(format!("{name} {s}"), false);
     }
 
     /// Cycle an enumerated field forward (`dir` = 1) or back (−1).
@@ -815,7 +833,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                     PaneRow::Add(k) => k.example().trim_matches('"').to_string(),
                     _ => app.row_text(app.field).1,
                 };
-                app.mode = Mode::Edit(t);
+                app.mode = Mode::Edit(TextField::prefilled(t));
             }
             _ => {
                 app.view = View::Detail;
@@ -830,7 +848,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             }
         }
         Action::Search => {
-            app.mode = Mode::Search;
+            app.mode = Mode::Search(TextField::prefilled(app.query.clone()));
             app.say("search: type to narrow, enter to keep, esc to clear", false);
         }
         Action::CycleObjective => {
@@ -877,12 +895,12 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                 }
             }
         }
-        Action::WriteShortlist => app.mode = Mode::Prompt(PromptKind::Shortlist, "shortlist.txt".into()),
+        Action::WriteShortlist => app.mode = Mode::Prompt(PromptKind::Shortlist, TextField::prefilled("shortlist.txt")),
         Action::Save => {
             return match &app.job_path {
                 Some(p) => Effect::SaveJob { path: p.clone() },
                 None => {
-                    app.mode = Mode::Prompt(PromptKind::SaveJob, "job.toml".into());
+                    app.mode = Mode::Prompt(PromptKind::SaveJob, TextField::prefilled("job.toml"));
                     Effect::None
                 }
             };
@@ -910,10 +928,14 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         }
         Action::AskOverwrite => {
             if let Mode::Prompt(PromptKind::Shortlist, p) | Mode::Edit(p) = &app.mode {
-                let p = PathBuf::from(p.clone());
+                let p = PathBuf::from(p.text.clone());
                 let f = format_for(&p.to_string_lossy());
                 app.mode = Mode::Confirm(Question::Overwrite(p, f));
             }
+        }
+        Action::Unbound(key) => {
+            let help = app.keymap.key_of(Action::Help).map_or("the help".to_string(), |k| k.to_string());
+            app.say(format!("the key {key} does nothing here; {help} lists the keys"), true);
         }
         Action::Done | Action::Failed | Action::Input(_) => {}
     }
@@ -927,65 +949,62 @@ fn input(app: &mut App, key: Key) -> Effect {
             app.mode = Mode::Normal;
             Effect::None
         }
-        Mode::Search => {
-            match key {
-                Key::Esc => {
+        Mode::Search(mut f) => {
+            if matches!(key, Key::Up | Key::Down) {
+                // the list moves while the search stays open
+                let mode = std::mem::replace(&mut app.mode, Mode::Normal);
+                let e = update(app, if key == Key::Up { Action::Up } else { Action::Down });
+                app.mode = mode;
+                return e;
+            }
+            match f.key(key) {
+                Outcome::Cancel => {
                     app.query.clear();
                     app.mode = Mode::Normal;
+                    app.say("search cleared", false);
                 }
-                Key::Enter => app.mode = Mode::Normal,
-                Key::Backspace => {
-                    app.query.pop();
+                Outcome::Done => app.mode = Mode::Normal,
+                Outcome::Edited => {
+                    app.query = f.text.clone();
+                    app.mode = Mode::Search(f);
                 }
-                Key::Char(c) => app.query.push(c),
-                Key::Up | Key::Down => {
-                    return {
-                        let mode = std::mem::replace(&mut app.mode, Mode::Normal);
-                        let e = update(app, if key == Key::Up { Action::Up } else { Action::Down });
-                        app.mode = mode;
-                        e
-                    };
-                }
-                _ => return Effect::None,
+                Outcome::Ignored => return Effect::None,
             }
             app.selected = 0;
             app.refilter();
             Effect::None
         }
-        Mode::Edit(mut buf) => {
-            match key {
-                Key::Esc => app.mode = Mode::Normal,
-                Key::Enter => {
+        Mode::Edit(mut f) => {
+            match f.key(key) {
+                Outcome::Cancel => {
                     app.mode = Mode::Normal;
-                    app.apply_edit(&buf);
+                    app.say("edit cancelled", false);
                 }
-                Key::Backspace => {
-                    buf.pop();
-                    app.mode = Mode::Edit(buf);
+                Outcome::Done => {
+                    app.mode = Mode::Normal;
+                    app.apply_edit(&f.text);
                 }
-                Key::Char(c) => {
-                    buf.push(c);
-                    app.mode = Mode::Edit(buf);
-                }
-                _ => {}
+                Outcome::Edited => app.mode = Mode::Edit(f),
+                Outcome::Ignored => {}
             }
             Effect::None
         }
-        Mode::Prompt(kind, mut buf) => match key {
-            Key::Esc => {
+        Mode::Prompt(kind, mut f) => match f.key(key) {
+            Outcome::Cancel => {
                 app.mode = Mode::Normal;
                 app.say("cancelled", false);
                 Effect::None
             }
-            Key::Enter => {
-                let path = PathBuf::from(buf.trim());
-                if buf.trim().is_empty() {
+            Outcome::Done => {
+                let buf = f.text.trim();
+                if buf.is_empty() {
                     app.say("give a file name", true);
                     return Effect::None;
                 }
+                let path = PathBuf::from(buf);
                 match kind {
                     PromptKind::Shortlist => {
-                        let format = format_for(buf.trim());
+                        let format = format_for(buf);
                         // stays in the prompt until the shell answers
                         Effect::WriteShortlist {
                             path,
@@ -999,17 +1018,11 @@ fn input(app: &mut App, key: Key) -> Effect {
                     }
                 }
             }
-            Key::Backspace => {
-                buf.pop();
-                app.mode = Mode::Prompt(kind, buf);
+            Outcome::Edited => {
+                app.mode = Mode::Prompt(kind, f);
                 Effect::None
             }
-            Key::Char(c) => {
-                buf.push(c);
-                app.mode = Mode::Prompt(kind, buf);
-                Effect::None
-            }
-            _ => Effect::None,
+            Outcome::Ignored => Effect::None,
         },
         Mode::Confirm(q) => match key {
             Key::Char('y') | Key::Char('Y') => {

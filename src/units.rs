@@ -13,6 +13,8 @@
 //! 1 lb = 0.453 592 37 kg, g_n = 9.806 65 m/s²); the tests compare each with
 //! the value tabulated in NIST SP 811 (2008), Appendix B.
 
+pub mod display;
+
 use std::fmt;
 use std::marker::PhantomData;
 use std::ops::{Add, Div, Mul, Neg, Sub};

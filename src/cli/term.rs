@@ -34,6 +34,8 @@ fn key_of(ev: event::KeyEvent) -> Option<Key> {
         KeyCode::Backspace => Key::Backspace,
         KeyCode::PageUp => Key::PageUp,
         KeyCode::PageDown => Key::PageDown,
+        KeyCode::Home => Key::Home,
+        KeyCode::End => Key::End,
         _ => return None,
     })
 }
@@ -188,7 +190,7 @@ pub fn run(catalog: Catalog, catalog_path: Option<PathBuf>, job: Job, job_path: 
             if panic_key.is_some_and(|p| key == Key::Char(p)) {
                 panic!("test panic requested with PLANKWISE_TEST_PANIC_KEY");
             }
-            let Some(action) = app.action_for(key) else { continue };
+            let action = app.action_for(key);
             match update(&mut app, action) {
                 Effect::None => {}
                 Effect::Quit => return Ok(()),

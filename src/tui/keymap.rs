@@ -43,6 +43,10 @@ pub enum Key {
     PageDown,
     /// Delete.
     Delete,
+    /// Home.
+    Home,
+    /// End.
+    End,
 }
 
 impl fmt::Display for Key {
@@ -63,6 +67,8 @@ impl fmt::Display for Key {
             Key::PageUp => write!(f, "pgup"),
             Key::PageDown => write!(f, "pgdn"),
             Key::Delete => write!(f, "del"),
+            Key::Home => write!(f, "home"),
+            Key::End => write!(f, "end"),
         }
     }
 }
@@ -83,6 +89,8 @@ impl Key {
             "pgup" => Key::PageUp,
             "pgdn" => Key::PageDown,
             "del" => Key::Delete,
+            "home" => Key::Home,
+            "end" => Key::End,
             "space" => Key::Char(' '),
             _ => {
                 if let Some(c) = s.strip_prefix("ctrl-") {
@@ -142,10 +150,30 @@ impl Default for Keymap {
                 b(Action::SpanDown, "span_down", "span − 1 ft (0.25 m)", &[Char('-')]),
                 b(Action::SpanUpFine, "span_up_fine", "span + 1 in (25 mm)", &[Char('>')]),
                 b(Action::SpanDownFine, "span_down_fine", "span − 1 in (25 mm)", &[Char('<')]),
-                b(Action::LiveUp, "live_up", "live + 10 psf (0.5 kPa)", &[Char(']')]),
-                b(Action::LiveDown, "live_down", "live − 10 psf (0.5 kPa)", &[Char('[')]),
-                b(Action::LiveUpFine, "live_up_fine", "live + 1 psf (0.05 kPa)", &[Char('}')]),
-                b(Action::LiveDownFine, "live_down_fine", "live − 1 psf (0.05 kPa)", &[Char('{')]),
+                b(
+                    Action::LiveUp,
+                    "live_up",
+                    "live (on a roof Lr or S) + 10 psf (0.5 kPa)",
+                    &[Char(']')],
+                ),
+                b(
+                    Action::LiveDown,
+                    "live_down",
+                    "live (on a roof Lr or S) − 10 psf (0.5 kPa)",
+                    &[Char('[')],
+                ),
+                b(
+                    Action::LiveUpFine,
+                    "live_up_fine",
+                    "live (on a roof Lr or S) + 1 psf (0.05 kPa)",
+                    &[Char('}')],
+                ),
+                b(
+                    Action::LiveDownFine,
+                    "live_down_fine",
+                    "live (on a roof Lr or S) − 1 psf (0.05 kPa)",
+                    &[Char('{')],
+                ),
                 b(
                     Action::Edit,
                     "edit",

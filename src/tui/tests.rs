@@ -34,9 +34,8 @@ fn screen(app: &App, w: u16, h: u16) -> String {
 fn press(app: &mut App, keys: &[Key]) -> Vec<Effect> {
     let mut out = Vec::new();
     for &k in keys {
-        if let Some(a) = app.action_for(k) {
-            out.push(update(app, a));
-        }
+        let a = app.action_for(k);
+        out.push(update(app, a));
     }
     out
 }
@@ -391,4 +390,93 @@ fn large_bays_rank_in_the_background_and_only_the_latest_answer_counts() {
     update(&mut sync, Action::SpanUp);
     assert_eq!(a.rows, sync.rows);
     assert_ne!(a.rows, before, "two feet more span changes the ranking");
+}
+
+fn typed(s: &str) -> Vec<Key> {
+    s.chars().map(Key::Char).collect()
+}
+
+#[test]
+fn esc_leaves_a_search_an_edit_and_a_prompt_and_never_quits() {
+    let mut a = app();
+    let n = a.visible.len();
+    update(&mut a, Action::Search);
+    let e = press(&mut a, &typed("16in"));
+    assert!(e.iter().all(|e| *e == Effect::None));
+    assert!(a.visible.len() < n, "the search narrows the list");
+    // esc clears the search; a second and third esc do nothing at all
+    for _ in 0..3 {
+        let e = press(&mut a, &[Key::Esc]);
+        assert_eq!(e, vec![Effect::None]);
+        assert_eq!(a.mode, Mode::Normal);
+    }
+    assert_eq!(a.visible.len(), n, "cleared");
+    a.focus = Focus::Bay;
+    update(&mut a, Action::Edit);
+    assert_eq!(press(&mut a, &[Key::Esc, Key::Esc]), vec![Effect::None, Effect::None]);
+    update(&mut a, Action::WriteShortlist);
+    assert_eq!(press(&mut a, &[Key::Esc, Key::Esc]), vec![Effect::None, Effect::None]);
+    assert_eq!(a.mode, Mode::Normal);
+}
+
+#[test]
+fn a_typed_value_replaces_the_prefilled_one_and_ctrl_u_clears() {
+    let mut a = app();
+    a.focus = Focus::Bay;
+    a.field = field("span");
+    update(&mut a, Action::Edit);
+    press(&mut a, &typed("25 ft"));
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.current_bay().case.span.get(), 300.0);
+    // home, then typing, edits the value instead
+    update(&mut a, Action::Edit);
+    // the span shows as 25'-0": keep the feet, change the inches
+    press(&mut a, &[Key::End, Key::Backspace, Key::Backspace]);
+    press(&mut a, &typed("6\""));
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.current_bay().case.span.get(), 306.0, "{:?}", a.status);
+    update(&mut a, Action::WriteShortlist);
+    press(&mut a, &[Key::Ctrl('u')]);
+    let Mode::Prompt(_, f) = &a.mode else { panic!("prompt") };
+    assert_eq!(f.text, "");
+}
+
+#[test]
+fn an_unbound_key_says_so() {
+    let mut a = app();
+    press(&mut a, &[Key::Char('Z')]);
+    assert!(a.status.1, "{:?}", a.status);
+    assert!(
+        a.status.0.contains("the key Z does nothing here; ? lists the keys"),
+        "{:?}",
+        a.status
+    );
+}
+
+#[test]
+fn on_a_roof_the_live_keys_step_the_roof_load() {
+    let mut a = app();
+    let roof = a
+        .job
+        .bays
+        .iter()
+        .position(|b| b.case.member_use == crate::case::Use::Roof)
+        .expect("a roof bay in the demo");
+    a.bay = roof;
+    a.rerank();
+    let (lr, s, l) = {
+        let c = &a.current_bay().case;
+        (c.roof_live.get(), c.snow.get(), c.live.get())
+    };
+    update(&mut a, Action::LiveUp);
+    let c = &a.current_bay().case;
+    assert_eq!(c.live.get(), l, "the floor live load stays");
+    let step = AreaLoad::from_unit(10.0, "psf").get();
+    if s > lr {
+        assert!((c.snow.get() - s - step).abs() < 1e-12 && c.roof_live.get() == lr);
+        assert!(a.status.0.starts_with("snow load S"), "{:?}", a.status);
+    } else {
+        assert!((c.roof_live.get() - lr - step).abs() < 1e-12 && c.snow.get() == s);
+        assert!(a.status.0.starts_with("roof live load Lr"), "{:?}", a.status);
+    }
 }

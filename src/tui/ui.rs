@@ -85,7 +85,7 @@ fn bay_pane(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         .map(|i| {
             let (label, text) = app.row_text(i);
             let value = match (&app.mode, i == app.field) {
-                (Mode::Edit(buf), true) => format!("{buf}▏"),
+                (Mode::Edit(f), true) => f.shown(),
                 _ => text,
             };
             let style = if focused && i == app.field { t.selected } else { Style::new() };
@@ -125,8 +125,10 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
         app.rows.len(),
         app.current_bay().objective.name()
     );
-    if app.mode == Mode::Search || !app.query.is_empty() {
-        title.push_str(&format!("· /{}{} ", app.query, if app.mode == Mode::Search { "▏" } else { "" }));
+    if let Mode::Search(f) = &app.mode {
+        title.push_str(&format!("· /{} ", f.shown()));
+    } else if !app.query.is_empty() {
+        title.push_str(&format!("· /{} ", app.query));
     }
     if !app.show_failing {
         title.push_str("· non-viable hidden ");
@@ -157,11 +159,8 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
                 .enumerate()
                 .map(|(k, c)| Span::styled(c.to_string(), if hits.contains(&k) { t.matched } else { Style::new() }))
                 .collect();
-            let ratio = if r.viable {
-                r.governing.1
-            } else {
-                r.failure.as_ref().map_or(r.governing.1, |_| r.governing.1.max(1.0))
-            };
+            // a failing row names its first failure: the ratio is that check's
+            let ratio = r.failure.as_ref().map_or(r.governing.1, |f| f.1);
             let style = if r.viable { t.viable } else { t.failing };
             let mut cells = vec![
                 Cell::from(if marked { "*" } else { " " }),
@@ -180,7 +179,7 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
                 cells.push(Cell::from(if r.viable {
                     r.governing.0.clone()
                 } else {
-                    format!("✗ {}", r.failure.clone().unwrap_or_default())
+                    format!("✗ {}", r.failure.as_ref().map_or("", |f| f.0.as_str()))
                 }));
             } else {
                 cells.push(Cell::from(if r.viable { "ok" } else { "✗" }));
@@ -367,13 +366,22 @@ fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
 fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     let (text, style) = match &app.mode {
         Mode::Prompt(PromptKind::Shortlist, p) => (
-            format!("shortlist file (.txt, .md or .csv): {p}▏  enter to write, esc to cancel"),
+            format!(
+                "shortlist file (.txt, .md or .csv): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
+                p.shown()
+            ),
             t.status,
         ),
-        Mode::Prompt(PromptKind::SaveJob, p) => (format!("save the job as: {p}▏  enter to save, esc to cancel"), t.status),
+        Mode::Prompt(PromptKind::SaveJob, p) => (
+            format!("save the job as: {}  type to replace, enter to save, esc to cancel", p.shown()),
+            t.status,
+        ),
         Mode::Edit(_) => {
             let (label, allowed) = app.row_allowed(app.field);
-            (format!("edit {label}: {allowed}; enter to apply, esc to cancel"), t.status)
+            (
+                format!("edit {label}: {allowed}; type to replace, ← → home end to edit, enter to apply, esc to cancel"),
+                t.status,
+            )
         }
         Mode::Confirm(Question::Quit) => ("the job has unsaved edits — quit anyway? y / n".into(), t.error),
         Mode::Confirm(Question::Overwrite(p, _)) => (format!("'{}' exists — replace it? y / n", p.display()), t.error),
