@@ -11,7 +11,7 @@ use plankwise::checks::{Candidate, evaluate};
 use plankwise::input::diag::suggestion;
 use plankwise::report;
 use plankwise::section::Composite;
-use plankwise::units::Length;
+use plankwise::units::{Length, System, display};
 
 /// Preliminary selection of precast prestressed floor and roof members.
 #[derive(Debug, Parser)]
@@ -33,6 +33,41 @@ struct Args {
     /// Print the catalog summary and section table instead of opening the UI.
     #[arg(long)]
     summary: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
+}
+
+/// A display system, as the flag spells it.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, clap::ValueEnum)]
+pub(crate) enum UnitsArg {
+    /// US customary: ft-in, in, psf, kip, kip-ft, psi.
+    Us,
+    /// SI: m, mm, kPa, kN, kN·m, MPa.
+    Si,
+}
+
+/// The `--units` flag every command takes.
+#[derive(Debug, Clone, Copy, Default, clap::Args)]
+pub(crate) struct UnitsFlag {
+    /// Units of every number printed (default: the job's `units`, else the
+    /// catalog's, else us).
+    #[arg(long, value_enum, value_name = "SYSTEM")]
+    units: Option<UnitsArg>,
+}
+
+impl UnitsFlag {
+    /// The system the flag names, if given.
+    pub(crate) fn flag(&self) -> Option<System> {
+        self.units.map(|u| match u {
+            UnitsArg::Us => System::Us,
+            UnitsArg::Si => System::Si,
+        })
+    }
+
+    /// The system of this run ([`plankwise::units::display::choose`]).
+    pub(crate) fn system(&self, job: Option<&plankwise::job::Job>, cat: &Catalog) -> System {
+        plankwise::units::display::choose(self.flag(), job.and_then(|j| j.units), cat.meta.units)
+    }
 }
 
 #[derive(Debug, Subcommand)]
@@ -55,6 +90,8 @@ enum Command {
         /// Mix id of the topping concrete (default: 4000 psi normalweight, 150 pcf).
         #[arg(long, value_name = "MIX", requires = "topping")]
         topping_mix: Option<String>,
+        #[command(flatten)]
+        units: UnitsFlag,
     },
     /// Run every ACI 318-19 check on one catalog entry for one span and set of loads.
     Check(Box<CheckArgs>),
@@ -89,6 +126,8 @@ struct CheckArgs {
     /// Print JSON instead of a table (keys carry their units).
     #[arg(long)]
     json: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
 }
 
 mod bay;
@@ -114,14 +153,15 @@ pub fn run() -> i32 {
         }
     };
     let result = match args.command {
-        None => ui_or_summary(args.catalog.as_ref(), args.job.as_ref(), args.summary),
+        None => ui_or_summary(args.catalog.as_ref(), args.job.as_ref(), args.summary, args.units),
         Some(Command::Validate { file }) => validate(&file),
         Some(Command::Sections {
             file,
             json,
             topping,
             topping_mix,
-        }) => sections(file, json, topping.as_deref(), topping_mix.as_deref()),
+            units,
+        }) => sections(file, json, topping.as_deref(), topping_mix.as_deref(), units),
         Some(Command::Check(a)) => check(&a),
         Some(Command::Rank(a)) => select::rank(&a),
         Some(Command::Envelope(a)) => select::envelope(&a),
@@ -183,7 +223,7 @@ pub(crate) fn print_warnings(cat: &Catalog) {
     }
 }
 
-fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool) -> Result<i32, Failure> {
+fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool, units: UnitsFlag) -> Result<i32, Failure> {
     use std::io::IsTerminal;
     let terminal = io::stdout().is_terminal() && io::stdin().is_terminal();
     if summary || !terminal {
@@ -202,7 +242,7 @@ fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool
                 j.display()
             )));
         }
-        return demo(catalog);
+        return demo(catalog, units);
     }
     let (cat, _) = load(catalog)?;
     print_warnings(&cat);
@@ -218,17 +258,19 @@ fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool
     if !problems.is_empty() {
         return Err(Failure::Message(problems.join("\n")));
     }
-    Ok(term::run(cat, catalog.cloned(), job, path)?)
+    let sys = units.system(Some(&job), &cat);
+    Ok(term::run(cat, catalog.cloned(), job, path, sys)?)
 }
 
-fn demo(catalog: Option<&PathBuf>) -> Result<i32, Failure> {
+fn demo(catalog: Option<&PathBuf>, units: UnitsFlag) -> Result<i32, Failure> {
     let (cat, name) = load(catalog)?;
+    let sys = units.system(None, &cat);
     let mut out = io::stdout().lock();
     writeln!(out, "plankwise {}", env!("CARGO_PKG_VERSION"))?;
     writeln!(out)?;
     report::write_summary(&mut out, &cat, &name)?;
     writeln!(out)?;
-    report::write_section_table(&mut out, &cat)?;
+    report::write_section_table(&mut out, &cat, sys)?;
     writeln!(out)?;
     report::write_cautions(&mut out)?;
     writeln!(out)?;
@@ -277,8 +319,9 @@ struct CompositeJson {
     depth_in: f64,
 }
 
-fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mix: Option<&str>) -> Result<i32, Failure> {
+fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mix: Option<&str>, units: UnitsFlag) -> Result<i32, Failure> {
     let (cat, _) = load(file.as_ref())?;
+    let sys = units.system(None, &cat);
     print_warnings(&cat);
     let top = match topping {
         None => None,
@@ -325,30 +368,56 @@ fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mi
         .collect();
     let mut out = io::stdout().lock();
     if json {
-        serde_json::to_writer_pretty(&mut out, &rows).map_err(io::Error::from)?;
-        writeln!(out)?;
+        write_json(&mut out, &rows, sys)?;
         return Ok(OK);
     }
-    report::write_section_table(&mut out, &cat)?;
+    report::write_section_table(&mut out, &cat, sys)?;
     if let Some((th, mix)) = &top {
         writeln!(out)?;
         writeln!(
             out,
-            "With a {} in composite topping ({}; n = Ec,topping / Ec,precast):",
-            th.get(),
+            "With a {} composite topping ({}; n = Ec,topping / Ec,precast):",
+            display::with_unit(th.get(), "in", 2, sys),
             mix.id
         )?;
+        let si = sys == System::Si;
+        let (au, hu, iu, su) = if si {
+            ("e3mm2", "mm", "e6mm4", "e6mm3")
+        } else {
+            ("in2", "in", "in4", "in3")
+        };
         writeln!(
             out,
-            "{:<22} {:>6} {:>8} {:>7} {:>9} {:>8} {:>8} {:>8}",
-            "section", "n", "A in2", "yb in", "I in4", "Sb in3", "St,pc", "St,top"
+            "{:<22} {:>6} {:>9} {:>8} {:>9} {:>9} {:>9} {:>9}",
+            "section",
+            "n",
+            format!("A {au}"),
+            format!("yb {hu}"),
+            format!("I {iu}"),
+            format!("Sb {su}"),
+            "St,pc",
+            "St,top"
         )?;
+        let scaled = |v: f64, us: &'static str, places: usize, per: f64| {
+            if si {
+                format!("{:.2}", display::convert(v, us, sys).0 / per)
+            } else {
+                format!("{v:.places$}")
+            }
+        };
         for (s, r) in cat.sections.iter().zip(&rows) {
             if let Some(c) = &r.composite {
                 writeln!(
                     out,
-                    "{:<22} {:>6.3} {:>8.1} {:>7.2} {:>9.0} {:>8.1} {:>8.1} {:>8.1}",
-                    s.id, c.modular_ratio, c.area_in2, c.yb_in, c.ix_in4, c.sb_in3, c.st_precast_in3, c.st_topping_in3
+                    "{:<22} {:>6.3} {:>9} {:>8} {:>9} {:>9} {:>9} {:>9}",
+                    s.id,
+                    c.modular_ratio,
+                    scaled(c.area_in2, "in²", 1, 1e3),
+                    display::num(c.yb_in, "in", 2, sys),
+                    scaled(c.ix_in4, "in⁴", 0, 1e6),
+                    scaled(c.sb_in3, "in³", 1, 1e6),
+                    scaled(c.st_precast_in3, "in³", 1, 1e6),
+                    scaled(c.st_topping_in3, "in³", 1, 1e6)
                 )?;
             }
         }
@@ -368,19 +437,27 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
         mix: section.mix(&cat),
     };
     let ev = evaluate(&cand, &case);
+    let sys = a.units.system(None, &cat);
     let mut out = io::stdout().lock();
     if a.json {
         let j = report::check::to_json(&cand, &case, &ev);
-        serde_json::to_writer_pretty(&mut out, &j).map_err(io::Error::from)?;
-        writeln!(out)?;
+        write_json(&mut out, &j, sys)?;
     } else {
         let title = format!(
             "{} — {} ({} / {})",
             section.designation, pattern.designation, section.id, pattern.id
         );
-        report::check::write_table(&mut out, &title, &case, &ev)?;
+        report::check::write_table(&mut out, &title, &case, &ev, sys)?;
     }
     Ok(OK)
+}
+
+/// A value as JSON in the display system (keys renamed to its units).
+pub(crate) fn write_json(out: &mut impl Write, v: &impl Serialize, sys: System) -> Result<(), Failure> {
+    let v = serde_json::to_value(v).map_err(io::Error::from)?;
+    serde_json::to_writer_pretty(&mut *out, &display::json(v, sys)).map_err(io::Error::from)?;
+    writeln!(out)?;
+    Ok(())
 }
 
 /// A section and pattern by id, with suggestions when misspelt.

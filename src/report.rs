@@ -6,6 +6,7 @@ pub mod shortlist;
 use std::io::{self, Write};
 
 use crate::catalog::{Catalog, Severity};
+use crate::units::{System, display};
 
 /// The cautions printed with every result.
 pub const CAUTIONS: &[&str] = &[
@@ -46,32 +47,61 @@ pub fn write_summary(w: &mut impl Write, cat: &Catalog, file: &str) -> io::Resul
     Ok(())
 }
 
-/// Table of exact section properties, one row per section.
-pub fn write_section_table(w: &mut impl Write, cat: &Catalog) -> io::Result<()> {
+/// Table of exact section properties, one row per section, in the
+/// display units (SI areas in 10³ mm², moduli in 10⁶ mm³, second moments
+/// in 10⁶ mm⁴, as SI tables print them).
+pub fn write_section_table(w: &mut impl Write, cat: &Catalog, sys: System) -> io::Result<()> {
+    let si = sys == System::Si;
+    let (hu, au, iu, su, wu) = if si {
+        ("mm", "e3mm2", "e6mm4", "e6mm3", "kPa")
+    } else {
+        ("in", "in2", "in4", "in3", "psf")
+    };
+    let h = |l: &str, u: &str| format!("{l} {u}");
     writeln!(
         w,
-        "{:<22} {:<11} {:>5} {:>5} {:>7} {:>6} {:>8} {:>7} {:>7} {:>6} {:>5} {:>5} {:>5}",
-        "section", "family", "h in", "b in", "A in2", "yb in", "I in4", "Sb in3", "St in3", "w psf", "V/S", "te in", "bw in"
+        "{:<22} {:<11} {:>7} {:>7} {:>9} {:>7} {:>9} {:>9} {:>9} {:>7} {:>6} {:>6} {:>6}",
+        "section",
+        "family",
+        h("h", hu),
+        h("b", hu),
+        h("A", au),
+        h("yb", hu),
+        h("I", iu),
+        h("Sb", su),
+        h("St", su),
+        h("w", wu),
+        h("V/S", hu),
+        h("te", hu),
+        h("bw", hu)
     )?;
+    let len = |v: f64, places: usize| display::num(v, "in", places, sys);
+    let scaled = |v: f64, us: &'static str, places: usize, per: f64| {
+        if si {
+            format!("{:.2}", display::convert(v, us, sys).0 / per)
+        } else {
+            format!("{v:.places$}")
+        }
+    };
     for s in &cat.sections {
         let m = s.summary(cat);
         let p = &m.props;
         writeln!(
             w,
-            "{:<22} {:<11} {:>5.2} {:>5.1} {:>7.1} {:>6.2} {:>8.0} {:>7.1} {:>7.1} {:>6.1} {:>5.2} {:>5.2} {:>5.2}",
+            "{:<22} {:<11} {:>7} {:>7} {:>9} {:>7} {:>9} {:>9} {:>9} {:>7} {:>6} {:>6} {:>6}",
             truncate(&s.id, 22),
             s.family.name(),
-            p.depth_in,
-            p.width_in,
-            p.area_in2,
-            p.yb_in,
-            p.ix_in4,
-            p.sb_in3,
-            p.st_in3,
-            m.weight_psf,
-            p.vs_ratio_in,
-            m.equiv_thickness_in,
-            p.web_width_min_in
+            len(p.depth_in, 2),
+            len(p.width_in, 1),
+            scaled(p.area_in2, "in²", 1, 1e3),
+            len(p.yb_in, 2),
+            scaled(p.ix_in4, "in⁴", 0, 1e6),
+            scaled(p.sb_in3, "in³", 1, 1e6),
+            scaled(p.st_in3, "in³", 1, 1e6),
+            display::num(m.weight_psf, "psf", 1, sys),
+            len(p.vs_ratio_in, 2),
+            len(m.equiv_thickness_in, 2),
+            len(p.web_width_min_in, 2)
         )?;
     }
     writeln!(w)?;

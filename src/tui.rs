@@ -89,6 +89,9 @@ pub enum Action {
     Input(Key),
     /// A key bound to nothing: the status line says so.
     Unbound(Key),
+    /// Scroll the Detail pane by this many pages (PgUp/PgDn with the
+    /// Detail pane focused).
+    ScrollPage(i32),
     /// The shell reports that a file exists: ask before overwriting.
     AskOverwrite,
     /// The shell reports success.
@@ -314,6 +317,13 @@ pub struct App {
     pub keymap: Keymap,
     /// Evaluation of the selected row (detail pane).
     pub detail: Option<Evaluation>,
+    /// First line of the Detail pane shown (it scrolls when it has focus).
+    pub detail_scroll: usize,
+    /// The last first line the Detail pane can show, as last drawn.
+    pub detail_max: std::cell::Cell<usize>,
+    /// Lines a page key moves the Detail pane by: its height as last
+    /// drawn, less one line kept in view.
+    pub detail_page: std::cell::Cell<usize>,
     /// Envelopes for the chart: (label, limits), selected first.
     pub chart: Vec<(String, Vec<LoadLimit>)>,
     /// Monochrome display (NO_COLOR).
@@ -332,6 +342,7 @@ pub struct App {
 impl App {
     /// A new app on a catalog and a job.
     pub fn new(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> App {
+        let units = crate::units::display::choose(None, job.units, catalog.meta.units);
         let mut app = App {
             catalog: Arc::new(catalog),
             job,
@@ -340,7 +351,7 @@ impl App {
             focus: Focus::Candidates,
             mode: Mode::Normal,
             view: View::Detail,
-            units: Units::Us,
+            units,
             field: 0,
             selected: 0,
             show_failing: true,
@@ -351,6 +362,9 @@ impl App {
             status: ("? for help · + − span · ] [ live · / search · w shortlist · q quit".into(), false),
             keymap: Keymap::default(),
             detail: None,
+            detail_scroll: 0,
+            detail_max: std::cell::Cell::new(usize::MAX),
+            detail_page: std::cell::Cell::new(1),
             chart: Vec::new(),
             mono: false,
             background: None,
@@ -371,6 +385,10 @@ impl App {
     /// overlay take keys first; otherwise the keymap decides.
     pub fn action_for(&self, key: Key) -> Action {
         match self.mode {
+            // with the Detail pane focused, page keys page through it
+            Mode::Normal if self.focus == Focus::Detail && matches!(key, Key::PageUp | Key::PageDown) => {
+                Action::ScrollPage(if key == Key::PageDown { 1 } else { -1 })
+            }
             Mode::Normal => self.keymap.action(key).unwrap_or(Action::Unbound(key)),
             _ => Action::Input(key),
         }
@@ -469,6 +487,7 @@ impl App {
 
     /// Recompute the detail (and the chart when it shows).
     pub fn refresh_detail(&mut self) {
+        self.detail_scroll = 0;
         let Some(r) = self.selected_row().cloned() else {
             self.detail = None;
             self.chart.clear();
@@ -791,7 +810,15 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                         app.field.saturating_sub(1)
                     };
                 }
-                Focus::Candidates | Focus::Detail => {
+                Focus::Detail => {
+                    // the Detail pane scrolls (the drawing stops at its last page)
+                    app.detail_scroll = if down {
+                        (app.detail_scroll + 1).min(app.detail_max.get())
+                    } else {
+                        app.detail_scroll.saturating_sub(1)
+                    };
+                }
+                Focus::Candidates => {
                     let n = app.visible.len();
                     if n > 0 {
                         app.selected = if down {
@@ -932,6 +959,14 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                 let f = format_for(&p.to_string_lossy());
                 app.mode = Mode::Confirm(Question::Overwrite(p, f));
             }
+        }
+        Action::ScrollPage(n) => {
+            let page = app.detail_page.get().max(1);
+            app.detail_scroll = if n > 0 {
+                (app.detail_scroll + page).min(app.detail_max.get())
+            } else {
+                app.detail_scroll.saturating_sub(page)
+            };
         }
         Action::Unbound(key) => {
             let help = app.keymap.key_of(Action::Help).map_or("the help".to_string(), |k| k.to_string());

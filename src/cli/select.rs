@@ -11,10 +11,10 @@ use plankwise::job::{DEMO_JOB, Job};
 use plankwise::report::shortlist::{self, Format};
 use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
 use plankwise::select::{Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
-use plankwise::units::Length;
+use plankwise::units::{Length, System, display};
 
 use super::bay::{BayFlags, objective};
-use super::{Failure, NONE_VIABLE, OK, find_entry, load, print_warnings};
+use super::{Failure, NONE_VIABLE, OK, UnitsFlag, find_entry, load, print_warnings, write_json};
 
 /// Arguments of `plankwise rank`.
 #[derive(Debug, clap::Args)]
@@ -37,6 +37,8 @@ pub struct RankArgs {
     /// Print CSV.
     #[arg(long)]
     csv: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
 }
 
 /// Arguments of `plankwise envelope`.
@@ -64,6 +66,8 @@ pub struct EnvelopeArgs {
     /// Print CSV.
     #[arg(long)]
     csv: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
 }
 
 /// Arguments of `plankwise spanmap`.
@@ -88,6 +92,8 @@ pub struct SpanmapArgs {
     /// Print JSON.
     #[arg(long)]
     json: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
 }
 
 /// Arguments of `plankwise shortlist`.
@@ -110,6 +116,8 @@ pub struct ShortlistArgs {
     /// Replace an existing output file.
     #[arg(long)]
     force: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
 }
 
 fn load_job(path: &Path) -> Result<(Job, String), Failure> {
@@ -121,7 +129,10 @@ fn load_job(path: &Path) -> Result<(Job, String), Failure> {
 
 /// With a job file the bays come from it: bay flags would be ignored, so
 /// they are refused — except the objective, which ranks every bay.
-fn job_or_flags(job: Option<&PathBuf>, flags: &BayFlags, cat: &Catalog) -> Result<(Vec<Bay>, Option<Objective>), Failure> {
+/// The bays, the objective the flags impose and the job's display units.
+type Bays = (Vec<Bay>, Option<Objective>, Option<System>);
+
+fn job_or_flags(job: Option<&PathBuf>, flags: &BayFlags, cat: &Catalog) -> Result<Bays, Failure> {
     let obj = flags.given.iter().find(|(k, _)| *k == "objective").map(|(_, v)| v.as_str());
     match job {
         Some(j) => {
@@ -139,9 +150,10 @@ fn job_or_flags(job: Option<&PathBuf>, flags: &BayFlags, cat: &Catalog) -> Resul
                     ignored.join(", ")
                 )));
             }
-            Ok((load_job(j)?.0.bays, objective(obj)?))
+            let job = load_job(j)?.0;
+            Ok((job.bays, objective(obj)?, job.units))
         }
-        None => Ok((vec![flags.to_bay(cat)?], None)),
+        None => Ok((vec![flags.to_bay(cat)?], None, None)),
     }
 }
 
@@ -228,18 +240,20 @@ struct BayJson {
 pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
-    let (bays, obj) = job_or_flags(a.job.as_ref(), &a.bay, &cat)?;
+    let (bays, obj, job_units) = job_or_flags(a.job.as_ref(), &a.bay, &cat)?;
     check_job(&cat, &bays)?;
+    let sys = display::choose(a.units.flag(), job_units, cat.meta.units);
     let top = a.top as usize;
     let mut out = io::stdout().lock();
     let mut none: Vec<&str> = Vec::new();
     if a.json {
         write!(out, "[")?;
     } else if a.csv {
-        writeln!(
-            out,
-            "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,strand_in2_per_ft,governing,governing_ratio,first_failure,first_failure_ratio"
-        )?;
+        let cols: Vec<String> = "bay,rank,viable,section,pattern,topping_in,weight_psf,depth_in,strand_in2_per_ft,governing,governing_ratio,first_failure,first_failure_ratio"
+            .split(',')
+            .map(|c| display::key(c, sys))
+            .collect();
+        writeln!(out, "{}", cols.join(","))?;
     }
     for (n, b) in bays.iter().enumerate() {
         let r = rank_bay(&cat, b, obj);
@@ -256,22 +270,24 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                 failing: r.failing.iter().take(top).enumerate().map(|(i, x)| entry_json(i + 1, x)).collect(),
             };
             writeln!(out, "{}", if n == 0 { "" } else { "," })?;
+            let v = display::json(serde_json::to_value(&v).map_err(io::Error::from)?, sys);
             serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
         } else if a.csv {
             for (i, x) in r.viable.iter().take(top).chain(r.failing.iter().take(top)).enumerate() {
                 let e = entry_json(i + 1, x);
+                let n = |v: f64, us: &'static str, places: usize| display::num(v, us, places, sys);
                 writeln!(
                     out,
-                    "\"{}\",{},{},{},{},{},{:.2},{:.2},{:.5},{},{:.4},{},{}",
+                    "\"{}\",{},{},{},{},{},{},{},{},{},{:.4},{},{}",
                     b.name.replace('"', "\"\""),
                     e.rank,
                     e.viable,
                     e.section,
                     e.pattern,
-                    e.topping_in,
-                    e.weight_psf,
-                    e.depth_in,
-                    e.strand_in2_per_ft,
+                    n(e.topping_in, "in", 2),
+                    n(e.weight_psf, "psf", 2),
+                    n(e.depth_in, "in", 2),
+                    n(e.strand_in2_per_ft, "in²/ft", 5),
                     e.governing,
                     e.governing_ratio,
                     e.first_failure.unwrap_or_default(),
@@ -281,27 +297,32 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
         } else {
             writeln!(
                 out,
-                "Bay '{}' — span {:.2} ft; objective {}",
+                "Bay '{}' — span {}; objective {}",
                 b.name,
-                b.case.span.get() / 12.0,
+                display::span(b.case.span.get(), sys),
                 obj.unwrap_or(b.objective).name()
             )?;
             writeln!(out, "  {} viable of {} entries", r.viable.len(), r.viable.len() + r.failing.len())?;
             if !r.viable.is_empty() {
                 writeln!(
                     out,
-                    "  {:>3} {:<42} {:>6} {:>6} {:<24} {:>6}",
-                    "#", "entry", "psf", "h in", "governing", "ratio"
+                    "  {:>3} {:<42} {:>6} {:>7} {:<24} {:>6}",
+                    "#",
+                    "entry",
+                    display::unit("psf", sys),
+                    format!("h {}", display::unit("in", sys)),
+                    "governing",
+                    "ratio"
                 )?;
             }
             for (i, x) in r.viable.iter().take(top).enumerate() {
                 writeln!(
                     out,
-                    "  {:>3} {:<42} {:>6.1} {:>6.2} {:<24} {:>6.3}",
+                    "  {:>3} {:<42} {:>6} {:>7} {:<24} {:>6.3}",
                     i + 1,
-                    x.entry.label(),
-                    x.metrics.weight_psf,
-                    x.metrics.depth_in,
+                    display::localize(&x.entry.label(), sys),
+                    display::num(x.metrics.weight_psf, "psf", 1, sys),
+                    display::num(x.metrics.depth_in, "in", 2, sys),
                     x.verdict.governing().info.id,
                     x.verdict.governing().ratio
                 )?;
@@ -312,7 +333,12 @@ pub fn rank(a: &RankArgs) -> Result<i32, Failure> {
                 writeln!(out, "  not viable (first failing check, in order of importance):")?;
             }
             for x in r.failing.iter().take(top) {
-                writeln!(out, "      {:<42} {}", x.entry.label(), failure_reason(x))?;
+                writeln!(
+                    out,
+                    "      {:<42} {}",
+                    display::localize(&x.entry.label(), sys),
+                    display::localize(&failure_reason(x), sys)
+                )?;
             }
             writeln!(out)?;
         }
@@ -360,6 +386,7 @@ pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
         .or(section.max_length)
         .map_or(120.0, |m| (m.get() - base.bearing.get()) / 12.0);
     let longest = longest_span(&entry, &base, cap_ft);
+    let sys = a.units.system(None, &cat);
     let mut out = io::stdout().lock();
     if a.json {
         #[derive(Serialize)]
@@ -367,48 +394,63 @@ pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
             section: &'a str,
             pattern: &'a str,
             topping_in: f64,
-            live_psf_at_spans: &'a [LoadLimit],
+            /// The largest live load at each span.
+            limits: &'a [LoadLimit],
             longest_span_ft: Option<f64>,
             longest_span_under_live_psf: f64,
         }
-        serde_json::to_writer_pretty(
+        write_json(
             &mut out,
             &EnvJson {
                 section: &section.id,
                 pattern: &pattern.id,
                 topping_in: entry.topping.map_or(0.0, |t| t.get()),
-                live_psf_at_spans: &limits,
+                limits: &limits,
                 longest_span_ft: longest,
                 longest_span_under_live_psf: base.live.in_unit("psf"),
             },
-        )
-        .map_err(io::Error::from)?;
-        writeln!(out)?;
+            sys,
+        )?;
     } else if a.csv {
-        writeln!(out, "span_ft,live_psf,governing,ratio")?;
+        writeln!(
+            out,
+            "{},{},governing,ratio",
+            display::key("span_ft", sys),
+            display::key("live_psf", sys)
+        )?;
         for l in &limits {
             writeln!(
                 out,
-                "{:.3},{},{},{:.6}",
-                l.span_ft,
-                l.live_psf.map_or(String::new(), |q| format!("{q:.2}")),
+                "{},{},{},{:.6}",
+                display::num(l.span_ft, "ft", 3, sys),
+                l.live_psf.map_or(String::new(), |q| display::num(q, "psf", 2, sys)),
                 l.governing,
                 l.ratio
             )?;
         }
     } else {
-        writeln!(out, "Envelope of {} (SDL {:.1} psf held)", entry.label(), base.sdl.in_unit("psf"))?;
-        writeln!(out, "  {:>8} {:>12}  limited by", "span ft", "live psf")?;
+        writeln!(
+            out,
+            "Envelope of {} (SDL {} held)",
+            display::localize(&entry.label(), sys),
+            display::with_unit(base.sdl.in_unit("psf"), "psf", 1, sys)
+        )?;
+        writeln!(
+            out,
+            "  {:>10} {:>12}  limited by",
+            format!("span {}", display::unit("ft", sys)),
+            format!("live {}", display::unit("psf", sys))
+        )?;
         for l in &limits {
             writeln!(
                 out,
-                "  {:>8.2} {:>12}  {}",
-                l.span_ft,
+                "  {:>10} {:>12}  {}",
+                display::span(l.span_ft * 12.0, sys),
                 l.live_psf
                     .map_or("none".into(), |q| if q >= plankwise::select::envelope::MAX_LIVE_PSF {
-                        "> 2000".into()
+                        format!("> {}", display::num(plankwise::select::envelope::MAX_LIVE_PSF, "psf", 0, sys))
                     } else {
-                        format!("{q:.1}")
+                        display::num(q, "psf", 1, sys)
                     }),
                 if l.live_psf.is_none() {
                     format!("{} fails without live load", l.governing)
@@ -419,9 +461,12 @@ pub fn envelope(a: &EnvelopeArgs) -> Result<i32, Failure> {
         }
         writeln!(
             out,
-            "  longest span under {:.1} psf live: {}",
-            base.live.in_unit("psf"),
-            longest.map_or("none from 4 ft up".into(), |s| format!("{s:.2} ft"))
+            "  longest span under {} live: {}",
+            display::with_unit(base.live.in_unit("psf"), "psf", 1, sys),
+            longest.map_or(format!("none from {} up", display::span(48.0, sys)), |s| display::span(
+                s * 12.0,
+                sys
+            ))
         )?;
         writeln!(out)?;
         plankwise::report::write_cautions(&mut out)?;
@@ -434,9 +479,11 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
     let spans = range(&a.spans, &a.step)?;
+    let mut job_units = None;
     let bay = match (&a.job, &a.bay_name) {
         (Some(j), Some(name)) => {
             let job = load_job(j)?.0;
+            job_units = job.units;
             let names: Vec<&str> = job.bays.iter().map(|b| b.name.as_str()).collect();
             job.bays.iter().find(|b| &b.name == name).cloned().ok_or_else(|| {
                 Failure::Message(format!(
@@ -461,19 +508,19 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
     };
     let step = spans.get(1).map_or(1.0, |s| s - spans[0]);
     let runs = span_map(&cat, &bay, spans[0], *spans.last().unwrap_or(&spans[0]), step, obj);
+    let sys = display::choose(a.units.flag(), job_units, cat.meta.units);
     let mut out = io::stdout().lock();
     if a.json {
-        serde_json::to_writer_pretty(&mut out, &runs).map_err(io::Error::from)?;
-        writeln!(out)?;
+        write_json(&mut out, &runs, sys)?;
     } else {
         writeln!(out, "Best entry by span for '{}' (objective {})", bay.name, obj.name())?;
         for r in &runs {
             writeln!(
                 out,
-                "  {:>7.2} – {:>7.2} ft  {}",
-                r.from_ft,
-                r.to_ft,
-                r.best.as_deref().unwrap_or("no viable member")
+                "  {:>10} – {:>10}  {}",
+                display::span(r.from_ft * 12.0, sys),
+                display::span(r.to_ft * 12.0, sys),
+                r.best.as_deref().map_or("no viable member".into(), |b| display::localize(b, sys))
             )?;
         }
         writeln!(out)?;
@@ -488,6 +535,7 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     print_warnings(&cat);
     let (job, _) = load_job(&a.job)?;
     check_job(&cat, &job.bays)?;
+    let sys = a.units.system(Some(&job), &cat);
     let format = match a.format.as_str() {
         "text" | "txt" => Format::Text,
         "md" | "markdown" => Format::Markdown,
@@ -512,7 +560,7 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let real = plankwise::files::writable(&a.output, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
     plankwise::files::write_atomic_with(&real, |mut w| {
-        shortlist::write_each(&mut w, format, &job, &cat, a.top as usize, &mut |_, bay| {
+        shortlist::write_each(&mut w, format, &job, &cat, a.top as usize, sys, &mut |_, bay| {
             let r = rank_bay(&cat, bay, None);
             if r.viable.is_empty() {
                 none.push(bay.name.clone());

@@ -61,7 +61,7 @@ fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::F
         Ok(_) => {}
     }
     let mut buf = Vec::new();
-    shortlist::write_each(&mut buf, format, &app.job, &app.catalog, 3, &mut |i, bay| {
+    shortlist::write_each(&mut buf, format, &app.job, &app.catalog, 3, app.units, &mut |i, bay| {
         let mut r = rank_bay(&app.catalog, bay, None);
         let marked = app.marked_labels(i);
         if !marked.is_empty() {
@@ -98,7 +98,13 @@ fn terminal_gone() -> bool {
 }
 
 /// Run the UI until the user quits or a signal arrives; returns the exit code.
-pub fn run(catalog: Catalog, catalog_path: Option<PathBuf>, job: Job, job_path: Option<PathBuf>) -> io::Result<i32> {
+pub fn run(
+    catalog: Catalog,
+    catalog_path: Option<PathBuf>,
+    job: Job,
+    job_path: Option<PathBuf>,
+    units: plankwise::units::System,
+) -> io::Result<i32> {
     let inputs = Inputs { catalog: catalog_path };
     let stop = Arc::new(AtomicBool::new(false));
     // every signal that ends the program ends the loop, which restores the terminal
@@ -111,6 +117,7 @@ pub fn run(catalog: Catalog, catalog_path: Option<PathBuf>, job: Job, job_path: 
         signal_hook::flag::register(sig, Arc::clone(&stop))?;
     }
     let mut app = App::new(catalog, job, job_path);
+    app.units = units;
     app.mono = std::env::var_os("NO_COLOR").is_some_and(|v| !v.is_empty()) || std::env::var("TERM").is_ok_and(|t| t == "dumb");
     if let Some(f) = keys_file().filter(|f| f.exists()) {
         // the keys file is read like any input: a regular file, bounded

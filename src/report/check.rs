@@ -6,6 +6,7 @@ use serde::Serialize;
 
 use crate::case::DesignCase;
 use crate::checks::{Candidate, CheckResult, Evaluation, kip, kipft};
+use crate::units::{System, display};
 
 /// The sign convention, printed with every stress.
 pub const SIGN_CONVENTION: &str = "stresses: compression positive, tension negative (psi); a tension check shows the fibre stress against its limit written as a stress (both negative), ratio = tension / limit, 0 when the fibre is in compression; no ratio is ever negative";
@@ -160,7 +161,7 @@ pub struct CheckJson {
     pub concrete: ConcreteJson,
     /// Sign convention.
     pub sign_convention: &'static str,
-    /// The bay's placed loads and openings, as typed (US).
+    /// The bay's placed loads and openings (US; an SI run converts them).
     pub items: Vec<String>,
     /// Each unit analysed, with the shares it takes.
     pub units: Vec<crate::checks::UnitReport>,
@@ -174,12 +175,17 @@ pub struct CheckJson {
     pub cautions: Vec<&'static str>,
 }
 
-/// Every load and opening of a case as "kind n: parts" (US units).
-pub fn items_text(case: &DesignCase) -> Vec<String> {
+/// Every load and opening of a case as "kind n: parts", in the system's units.
+pub fn items_text(case: &DesignCase, sys: System) -> Vec<String> {
     crate::items::all(case)
         .into_iter()
-        .map(|(k, i, v)| format!("{} {}: {}", k.key, i + 1, k.describe(&v, crate::units::System::Us)))
+        .map(|(k, i, v)| format!("{} {}: {}", k.key, i + 1, k.describe(&v, sys)))
         .collect()
+}
+
+/// The sign convention in the stress unit of the system.
+pub fn sign_convention(sys: System) -> String {
+    SIGN_CONVENTION.replace("(psi)", &format!("({})", display::unit("psi", sys)))
 }
 
 /// Build the JSON view.
@@ -257,7 +263,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             beta1: cand.mix.beta1(),
         },
         sign_convention: SIGN_CONVENTION,
-        items: items_text(case),
+        items: items_text(case, System::Us),
         units: ev.units.clone(),
         openings: ev.openings.clone(),
         checks: ev.checks.clone(),
@@ -282,33 +288,41 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
     }
 }
 
-/// Write the evaluation as a table.
-pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Evaluation) -> io::Result<()> {
+/// Write the evaluation as a table, in the display system `sys`.
+pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Evaluation, sys: System) -> io::Result<()> {
     let h = &ev.history;
     let l = &h.losses;
+    let q = |v: f64, us: &'static str, places: usize| display::with_unit(v, us, places, sys);
+    let n = |v: f64, us: &'static str, places: usize| display::num(v, us, places, sys);
+    let signed = |v: f64| {
+        let s = n(v, "in", 2);
+        if v >= 0.0 { format!("+{s}") } else { s }
+    };
+    let ksi = display::unit("ksi", sys);
+    let len_u = display::unit("in", sys);
     writeln!(w, "{title}")?;
     writeln!(
         w,
-        "span {:.2} ft, member length {:.2} ft (span + {:.1} in bearing), {}",
-        case.span.get() / 12.0,
-        ev.member_length_in / 12.0,
-        case.bearing.get(),
+        "span {}, member length {} (span + {} bearing), {}",
+        display::span(case.span.get(), sys),
+        display::span(ev.member_length_in, sys),
+        q(case.bearing.get(), "in", 1),
         match &case.topping {
             Some(t) => format!(
-                "{:.2} in composite topping, unshored: topping weight on the bare member",
-                t.thickness.get()
+                "{} composite topping, unshored: topping weight on the bare member",
+                q(t.thickness.get(), "in", 2)
             ),
             None => "no topping".into(),
         }
     )?;
     writeln!(
         w,
-        "loads: SDL {:.1} psf, L {:.1} psf (sustained {:.0} %), Lr {:.1} psf, S {:.1} psf, {} line load(s); class allowed {}, RH {:.0} %",
-        case.sdl.in_unit("psf"),
-        case.live.in_unit("psf"),
+        "loads: SDL {}, L {} (sustained {:.0} %), Lr {}, S {}, {} line load(s); class allowed {}, RH {:.0} %",
+        q(case.sdl.in_unit("psf"), "psf", 1),
+        q(case.live.in_unit("psf"), "psf", 1),
         case.sustained_live * 100.0,
-        case.roof_live.in_unit("psf"),
-        case.snow.in_unit("psf"),
+        q(case.roof_live.in_unit("psf"), "psf", 1),
+        q(case.snow.in_unit("psf"), "psf", 1),
         case.line_loads.len(),
         case.class_allowed.name(),
         case.humidity
@@ -316,55 +330,56 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
     if case.has_overhang() {
         writeln!(
             w,
-            "overhangs: left {}, right {} (bearing centre to tip); top bars {:.2} in² Grade 60",
-            crate::units::fmt_ft_in(case.overhang.0),
-            crate::units::fmt_ft_in(case.overhang.1),
-            case.top_bars.in_unit("in2")
+            "overhangs: left {}, right {} (bearing centre to tip); top bars {} Grade 60",
+            display::span(case.overhang.0.get(), sys),
+            display::span(case.overhang.1.get(), sys),
+            q(case.top_bars.in_unit("in2"), "in²", 2)
         )?;
     }
     let shares = ev.units.first().map(|u| u.shares.as_slice()).unwrap_or(&[]);
-    for line in items_text(case) {
+    for line in items_text(case, sys) {
         let what = line.split(':').next().unwrap_or("");
         match shares.iter().find(|s| s.what == what) {
-            Some(s) => writeln!(w, "{line}\n    share: {}", s.how)?,
+            Some(s) => writeln!(w, "{line}\n    share: {}", display::localize(&s.how, sys))?,
             None => writeln!(w, "{line}")?,
         }
     }
     for o in &ev.openings {
-        writeln!(w, "{o}")?;
+        writeln!(w, "{}", display::localize(o, sys))?;
     }
     if ev.units.len() > 1 || ev.units.iter().any(|u| u.unit != "the loaded unit") {
         writeln!(
             w,
             "units checked: {}; each check shows its worst",
-            ev.units.iter().map(|u| u.unit.as_str()).collect::<Vec<_>>().join("; ")
+            display::localize(&ev.units.iter().map(|u| u.unit.as_str()).collect::<Vec<_>>().join("; "), sys)
         )?;
     }
     writeln!(w)?;
     writeln!(
         w,
-        "Prestress  fpj {:.1} ksi -> after transfer fpo {:.1} ksi -> effective fse {:.1} ksi (Pe {:.1} kip)",
-        h.fpj_psi / 1000.0,
-        h.fpo_psi / 1000.0,
-        h.fse_psi / 1000.0,
-        h.pe_lbf / 1000.0
+        "Prestress  fpj {} -> after transfer fpo {} -> effective fse {} (Pe {})",
+        q(h.fpj_psi / 1000.0, "ksi", 1),
+        q(h.fpo_psi / 1000.0, "ksi", 1),
+        q(h.fse_psi / 1000.0, "ksi", 1),
+        q(h.pe_lbf / 1000.0, "kip", 1)
     )?;
+    let k = |v: f64| n(v / 1000.0, "ksi", 2);
     if h.lump_sum {
         writeln!(
             w,
-            "Losses     ES {:.2} ksi; total {:.2} ksi given as a lump sum",
-            l.es_psi / 1000.0,
-            l.total_psi / 1000.0
+            "Losses     ES {} {ksi}; total {} {ksi} given as a lump sum",
+            k(l.es_psi),
+            k(l.total_psi)
         )?;
     } else {
         writeln!(
             w,
-            "Losses     ES {:.2} + CR {:.2} + SH {:.2} + RE {:.2} = {:.2} ksi ({:.1} % of fpj), Zia et al. 1979{}",
-            l.es_psi / 1000.0,
-            l.cr_psi / 1000.0,
-            l.sh_psi / 1000.0,
-            l.re_psi / 1000.0,
-            l.total_psi / 1000.0,
+            "Losses     ES {} + CR {} + SH {} + RE {} = {} {ksi} ({:.1} % of fpj), Zia et al. 1979{}",
+            k(l.es_psi),
+            k(l.cr_psi),
+            k(l.sh_psi),
+            k(l.re_psi),
+            k(l.total_psi),
             100.0 * l.total_psi / h.fpj_psi,
             if l.c_clamped {
                 "; fpi/fpu outside the C table, clamped"
@@ -375,15 +390,20 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
     }
     writeln!(
         w,
-        "Transfer   {:.1} in = (fse/3000) db; service class reached: {}",
-        ev.transfer_length_in,
+        "Transfer   {} = (fse/3000) db; service class reached: {}",
+        q(ev.transfer_length_in, "in", 1),
         ev.service_class.name()
     )?;
     let c = &ev.camber;
     writeln!(
         w,
-        "Camber     release {:+.2} in (prestress {:+.2}, self-weight {:+.2}); erection {:+.2} in; final {:+.2} in; with live {:+.2} in",
-        c.camber_release_in, c.prestress_release_in, -c.self_release_in, c.camber_erection_in, c.camber_final_in, c.net_final_with_live_in
+        "Camber     release {} {len_u} (prestress {}, self-weight {}); erection {} {len_u}; final {} {len_u}; with live {} {len_u}",
+        signed(c.camber_release_in),
+        signed(c.prestress_release_in),
+        signed(-c.self_release_in),
+        signed(c.camber_erection_in),
+        signed(c.camber_final_in),
+        signed(c.net_final_with_live_in)
     )?;
     writeln!(
         w,
@@ -397,14 +417,14 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
     let f = &ev.fire;
     writeln!(
         w,
-        "Fire       {} (heat transmission {} h, te {:.2} in; cover {:.2} in) — IBC 2021 722.2",
+        "Fire       {} (heat transmission {} h, te {}; cover {}) — IBC 2021 722.2",
         f.rating_h.map_or("not rated by plankwise's tables".to_string(), |r| format!(
             "{} h reached",
             crate::checks::fire::fmt_h(r)
         )),
         crate::checks::fire::fmt_h(f.rating_thickness_h),
-        f.equiv_thickness_in,
-        f.cover_in
+        q(f.equiv_thickness_in, "in", 2),
+        q(f.cover_in, "in", 2)
     )?;
     writeln!(
         w,
@@ -412,28 +432,31 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
         ev.frequency_hz
     )?;
     writeln!(w)?;
+    let at = format!("at {}", display::unit("ft", sys));
     writeln!(
         w,
         "{:<40} {:>10} {:>10} {:>7} {:>6} {:<5} {:>7}",
-        "check", "demand", "capacity", "unit", "ratio", "ok", "at ft"
+        "check", "demand", "capacity", "unit", "ratio", "ok", at
     )?;
     for c in &ev.checks {
+        let (demand, unit) = display::convert(c.demand, c.unit, sys);
+        let (capacity, _) = display::convert(c.capacity, c.unit, sys);
         writeln!(
             w,
             "{:<40} {:>10.2} {:>10} {:>7} {:>6.3} {:<5} {:>7}",
             c.info.title,
-            c.demand,
-            if c.capacity.is_finite() {
-                format!("{:.2}", c.capacity)
+            demand,
+            if capacity.is_finite() {
+                format!("{capacity:.2}")
             } else {
                 "none".into()
             },
-            c.unit,
+            unit,
             c.ratio,
             if c.pass { "yes" } else { "NO" },
-            c.station_ft.map_or("-".into(), |x| format!("{x:.2}"))
+            c.station_ft.map_or("-".into(), |x| n(x, "ft", 2))
         )?;
-        writeln!(w, "    {} — {}", c.info.clause, c.note)?;
+        writeln!(w, "    {} — {}", c.info.clause, display::localize(&c.note, sys))?;
     }
     writeln!(w)?;
     let g = ev.governing();
@@ -445,7 +468,13 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
             f.info.title, f.ratio, f.info.clause
         )?,
     }
-    writeln!(w, "Note       {SIGN_CONVENTION}; moments kip-ft, forces kip")?;
+    writeln!(
+        w,
+        "Note       {}; moments {}, forces {}",
+        sign_convention(sys),
+        display::unit("kip-ft", sys),
+        display::unit("kip", sys)
+    )?;
     writeln!(w)?;
     super::write_cautions(w)
 }

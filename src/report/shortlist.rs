@@ -8,7 +8,7 @@ use crate::catalog::Catalog;
 use crate::checks::fire::fmt_h;
 use crate::job::Job;
 use crate::select::{BayRanking, Ranked, evaluation, failure_reason};
-use crate::units::fmt_ft_in;
+use crate::units::{System, display};
 
 /// Output format.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -45,7 +45,7 @@ struct Row {
     camber_final: f64,
     defl_live: f64,
     fire: String,
-    member_length: String,
+    member_length_in: f64,
     pieces: Option<u64>,
     /// What the bay's openings do to units of this member.
     openings: Vec<String>,
@@ -53,7 +53,7 @@ struct Row {
 
 /// A listed member's row: its checks are evaluated again (a ranking keeps
 /// only the verdict).
-fn row(cat: &Catalog, r: &Ranked, bay: &Bay) -> Row {
+fn row(cat: &Catalog, r: &Ranked, bay: &Bay, sys: System) -> Row {
     let e = &evaluation(cat, bay, &r.entry);
     let flex = e.check("flexure");
     let shear = e.check("shear");
@@ -76,8 +76,9 @@ fn row(cat: &Catalog, r: &Ranked, bay: &Bay) -> Row {
     Row {
         designation: format!("{} — {}", r.entry.section.designation, r.entry.pattern.designation),
         id: format!("{} / {}", r.entry.section.id, r.entry.pattern.id),
-        topping: r.entry.topping.map_or("no topping".into(), |t| {
-            format!("{} in topping", crate::section::family::fmt(t.get()))
+        topping: r.entry.topping.map_or("no topping".into(), |t| match sys {
+            System::Us => format!("{} in topping", crate::section::family::fmt(t.get())),
+            System::Si => format!("{} topping", display::with_unit(t.get(), "in", 0, sys)),
         }),
         weight_psf: r.metrics.weight_psf,
         depth_in: r.metrics.depth_in,
@@ -90,45 +91,48 @@ fn row(cat: &Catalog, r: &Ranked, bay: &Bay) -> Row {
         camber_final: e.camber.camber_final_in,
         defl_live: e.camber.defl_live_in,
         fire,
-        member_length: fmt_ft_in(crate::units::Length::new(e.member_length_in)),
+        member_length_in: e.member_length_in,
         pieces,
         openings: {
             let case = crate::select::case_for(bay, r.entry.topping, &crate::select::topping_mix(cat, bay));
             crate::checks::describe_openings_as(&r.entry.candidate(), &case, true)
+                .iter()
+                .map(|o| display::localize(o, sys))
+                .collect()
         },
     }
 }
 
-fn criteria(bay: &Bay) -> Vec<String> {
+fn criteria(bay: &Bay, sys: System) -> Vec<String> {
     let c = &bay.case;
+    let load = |q: crate::units::AreaLoad| display::with_unit(q.in_unit("psf"), "psf", 0, sys);
     let mut v = vec![format!(
-        "span {} ({:.2} ft), {}, SDL {:.0} psf, L {:.0} psf, Lr {:.0} psf, S {:.0} psf",
-        fmt_ft_in(c.span),
-        c.span.get() / 12.0,
+        "span {}, {}, SDL {}, L {}, Lr {}, S {}",
+        display::span(c.span.get(), sys),
         match c.member_use {
             crate::case::Use::Floor => "floor",
             crate::case::Use::Roof => "roof",
         },
-        c.sdl.in_unit("psf"),
-        c.live.in_unit("psf"),
-        c.roof_live.in_unit("psf"),
-        c.snow.in_unit("psf")
+        load(c.sdl),
+        load(c.live),
+        load(c.roof_live),
+        load(c.snow)
     )];
     if c.has_overhang() {
         v.push(format!(
-            "overhangs: left {}, right {}; top bars {:.2} in2",
-            fmt_ft_in(c.overhang.0),
-            fmt_ft_in(c.overhang.1),
-            c.top_bars.in_unit("in2")
+            "overhangs: left {}, right {}; top bars {}",
+            display::span(c.overhang.0.get(), sys),
+            display::span(c.overhang.1.get(), sys),
+            display::with_unit(c.top_bars.in_unit("in2"), "in²", 2, sys)
         ));
     }
-    v.extend(crate::report::check::items_text(c));
+    v.extend(crate::report::check::items_text(c, sys));
     if !c.placed.is_empty() || !c.openings.is_empty() {
         v.push(format!(
             "shared between hollow-core units: {}; between double-tee stems: {}",
             match c.unit_share {
                 crate::case::UnitShare::Whole => "the loaded unit carries it all".to_string(),
-                crate::case::UnitShare::Width(w) => format!("over {}", fmt_ft_in(w)),
+                crate::case::UnitShare::Width(w) => format!("over {}", display::span(w.get(), sys)),
                 crate::case::UnitShare::Rule => format!("published rule ({})", crate::loads::RULE_MARK),
             },
             match c.stem_share {
@@ -151,7 +155,7 @@ fn criteria(bay: &Bay) -> Vec<String> {
         },
         bay.objective.name()
     ));
-    let area = bay.area.map(|a| format!("{:.0} ft2", a.in_unit("ft2")));
+    let area = bay.area.map(|a| display::with_unit(a.in_unit("ft2"), "ft²", 0, sys));
     let pieces = bay.pieces.map(|p| format!("{p} pieces"));
     if area.is_some() || pieces.is_some() {
         v.push(format!(
@@ -163,9 +167,9 @@ fn criteria(bay: &Bay) -> Vec<String> {
 }
 
 /// Write the shortlist of bays already ranked.
-pub fn write(w: &mut impl Write, format: Format, job: &Job, cat: &Catalog, bays: &[BayList], top: usize) -> io::Result<()> {
+pub fn write(w: &mut impl Write, format: Format, job: &Job, cat: &Catalog, bays: &[BayList], top: usize, sys: System) -> io::Result<()> {
     let mut i = 0;
-    write_each(w, format, job, cat, top, &mut |_, _| {
+    write_each(w, format, job, cat, top, sys, &mut |_, _| {
         i += 1;
         bays[i - 1].ranking.clone()
     })
@@ -180,36 +184,37 @@ pub fn write_each<'c>(
     job: &Job,
     cat: &'c Catalog,
     top: usize,
+    sys: System,
     rank: &mut dyn FnMut(usize, &Bay) -> BayRanking<'c>,
 ) -> io::Result<()> {
     match format {
         Format::Text => {
-            wrap_into(w, |b| text_head(b, job, cat))?;
+            wrap_into(w, |b| text_head(b, job, cat, sys))?;
             for (i, bay) in job.bays.iter().enumerate() {
                 let r = rank(i, bay);
-                wrap_into(w, |b| text_bay(b, cat, i, bay, &r, top))?;
+                wrap_into(w, |b| text_bay(b, cat, i, bay, &r, top, sys))?;
             }
             wrap_into(w, |b| text_tail(b, job))
         }
         Format::Markdown => {
-            md_head(w, job, cat)?;
+            md_head(w, job, cat, sys)?;
             for (i, bay) in job.bays.iter().enumerate() {
                 let r = rank(i, bay);
-                md_bay(w, cat, i, bay, &r, top)?;
+                md_bay(w, cat, i, bay, &r, top, sys)?;
             }
             md_tail(w, job)
         }
         Format::Csv => {
-            csv_head(w)?;
+            csv_head(w, sys)?;
             for (i, bay) in job.bays.iter().enumerate() {
                 let r = rank(i, bay);
-                csv_bay(w, job, cat, bay, &r, top)?;
+                csv_bay(w, job, cat, bay, &r, top, sys)?;
             }
             Ok(())
         }
     }
 }
-fn header_lines(job: &Job, cat: &Catalog) -> Vec<String> {
+fn header_lines(job: &Job, cat: &Catalog, sys: System) -> Vec<String> {
     vec![
         format!("Project   {}", job.project),
         format!("Engineer  {}", job.engineer),
@@ -217,6 +222,13 @@ fn header_lines(job: &Job, cat: &Catalog) -> Vec<String> {
         format!("Catalog   {} (content hash {})", cat.meta.name, cat.hash),
         format!("Producer  {}", cat.meta.producer),
         format!("Basis     {}; ASCE 7-16 load combinations; IBC 2021 §722 fire", job.code),
+        format!(
+            "Units     {}",
+            match sys {
+                System::Us => "US customary (ft-in, in, psf, kip, kip-ft, psi)",
+                System::Si => "SI (m, mm, kPa, kN, kN·m, MPa)",
+            }
+        ),
     ]
 }
 
@@ -251,40 +263,45 @@ fn wrap_into(w: &mut impl Write, part: impl FnOnce(&mut Vec<u8>) -> io::Result<(
     Ok(())
 }
 
-fn text_head(w: &mut impl Write, job: &Job, cat: &Catalog) -> io::Result<()> {
+fn text_head(w: &mut impl Write, job: &Job, cat: &Catalog, sys: System) -> io::Result<()> {
     writeln!(w, "PRECAST MEMBER SHORTLIST — PRELIMINARY")?;
     writeln!(w, "{}", "=".repeat(78))?;
-    for l in header_lines(job, cat) {
+    for l in header_lines(job, cat, sys) {
         writeln!(w, "{l}")?;
     }
     Ok(())
 }
 
-fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize, sys: System) -> io::Result<()> {
     if i > 0 {
         write!(w, "\x0c")?;
     }
     writeln!(w)?;
     writeln!(w, "Bay {}: {}", i + 1, bay.name)?;
     writeln!(w, "{}", "-".repeat(78))?;
-    for c in criteria(bay) {
+    for c in criteria(bay, sys) {
         writeln!(w, "  {c}")?;
     }
     writeln!(w)?;
     if ranking.viable.is_empty() {
         writeln!(w, "  NO CATALOG MEMBER WORKS FOR THIS BAY. Nearest misses:")?;
         for r in ranking.failing.iter().take(3) {
-            writeln!(w, "  - {}: {}", r.entry.label(), failure_reason(r))?;
+            writeln!(w, "  - {}: {}", r.entry.label(), display::localize(&failure_reason(r), sys))?;
         }
         return Ok(());
     }
+    let len_u = display::unit("in", sys);
     for (k, r) in ranking.viable.iter().take(top).enumerate() {
-        let x = row(cat, r, bay);
+        let x = row(cat, r, bay, sys);
         writeln!(w, "{:>3}. {}", k + 1, x.designation)?;
         writeln!(
             w,
-            "     [{}] {}, {:.1} psf, {:.2} in deep, member {}",
-            x.id, x.topping, x.weight_psf, x.depth_in, x.member_length
+            "     [{}] {}, {}, {} deep, member {}",
+            x.id,
+            x.topping,
+            display::with_unit(x.weight_psf, "psf", 1, sys),
+            display::with_unit(x.depth_in, "in", 2, sys),
+            display::span(x.member_length_in, sys)
         )?;
         writeln!(
             w,
@@ -293,8 +310,10 @@ fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &Ba
         )?;
         writeln!(
             w,
-            "     camber at erection {:+.2} in, final {:+.2} in; live defl. {:.2} in",
-            x.camber_erection, x.camber_final, x.defl_live
+            "     camber at erection {} {len_u}, final {} {len_u}; live defl. {} {len_u}",
+            signed(x.camber_erection, sys),
+            signed(x.camber_final, sys),
+            display::num(x.defl_live, "in", 2, sys)
         )?;
         writeln!(
             w,
@@ -324,23 +343,23 @@ fn text_tail(w: &mut impl Write, job: &Job) -> io::Result<()> {
     Ok(())
 }
 
-fn md_head(w: &mut impl Write, job: &Job, cat: &Catalog) -> io::Result<()> {
+fn md_head(w: &mut impl Write, job: &Job, cat: &Catalog, sys: System) -> io::Result<()> {
     writeln!(w, "# Precast member shortlist — preliminary")?;
     writeln!(w)?;
-    for l in header_lines(job, cat) {
+    for l in header_lines(job, cat, sys) {
         let (k, v) = l.split_at(10);
         writeln!(w, "- **{}**: {}", k.trim(), v.trim())?;
     }
     Ok(())
 }
 
-fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize, sys: System) -> io::Result<()> {
     let b = BayList { bay, ranking };
     {
         writeln!(w)?;
         writeln!(w, "## Bay {}: {}", i + 1, b.bay.name)?;
         writeln!(w)?;
-        for c in criteria(b.bay) {
+        for c in criteria(b.bay, sys) {
             writeln!(w, "- {c}")?;
         }
         writeln!(w)?;
@@ -348,36 +367,37 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
             writeln!(w, "**No catalog member works for this bay.** Nearest misses:")?;
             writeln!(w)?;
             for r in b.ranking.failing.iter().take(3) {
-                writeln!(w, "- `{}`: {}", r.entry.label(), failure_reason(r))?;
+                writeln!(w, "- `{}`: {}", r.entry.label(), display::localize(&failure_reason(r), sys))?;
             }
             return Ok(());
         }
+        let (wu, lu) = (display::unit("psf", sys), display::unit("in", sys));
         writeln!(
             w,
-            "| # | member | topping | psf | depth in | governs | ratio | φMn/Mu | Vu/φVn | class | camber erection in | camber final in | live defl in | fire | length | pieces |"
+            "| # | member | topping | {wu} | depth {lu} | governs | ratio | φMn/Mu | Vu/φVn | class | camber erection {lu} | camber final {lu} | live defl {lu} | fire | length | pieces |"
         )?;
         writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(cat, r, b.bay);
+            let x = row(cat, r, b.bay, sys);
             writeln!(
                 w,
-                "| {} | {} (`{}`) | {} | {:.1} | {:.2} | {} | {:.2} | {:.2} | {:.2} | {} | {:+.2} | {:+.2} | {:.2} | {} | {} | {} |",
+                "| {} | {} (`{}`) | {} | {} | {} | {} | {:.2} | {:.2} | {:.2} | {} | {} | {} | {} | {} | {} | {} |",
                 k + 1,
                 x.designation,
                 x.id,
                 x.topping,
-                x.weight_psf,
-                x.depth_in,
+                display::num(x.weight_psf, "psf", 1, sys),
+                display::num(x.depth_in, "in", 2, sys),
                 x.governing,
                 x.ratio,
                 x.phi_mn_over_mu,
                 x.shear_ratio,
                 x.class,
-                x.camber_erection,
-                x.camber_final,
-                x.defl_live,
+                signed(x.camber_erection, sys),
+                signed(x.camber_final, sys),
+                display::num(x.defl_live, "in", 2, sys),
                 x.fire,
-                x.member_length,
+                display::span(x.member_length_in, sys),
                 x.pieces.map_or("-".into(), |p| p.to_string())
             )?;
         }
@@ -389,7 +409,7 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
                 .iter()
                 .take(top)
                 .enumerate()
-                .map(|(k, r)| (k, row(cat, r, b.bay)))
+                .map(|(k, r)| (k, row(cat, r, b.bay, sys)))
                 .collect()
         };
         if !cuts.is_empty() {
@@ -427,14 +447,21 @@ fn q(s: &str) -> String {
     }
 }
 
-fn csv_head(w: &mut impl Write) -> io::Result<()> {
-    writeln!(
-        w,
-        "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length,pieces,units_cut"
-    )
+/// The CSV columns of a US run; an SI run renames those with a unit.
+const CSV_COLUMNS: &str = "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length_ft,pieces,units_cut";
+
+fn csv_head(w: &mut impl Write, sys: System) -> io::Result<()> {
+    let cols: Vec<String> = CSV_COLUMNS.split(',').map(|c| display::key(c, sys)).collect();
+    writeln!(w, "{}", cols.join(","))
 }
 
-fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &BayRanking, top: usize) -> io::Result<()> {
+/// A camber or deflection with its sign: "+0.52" (in) or "+13.2" (mm).
+fn signed(v: f64, sys: System) -> String {
+    let s = display::num(v, "in", 2, sys);
+    if s.starts_with('-') { s } else { format!("+{s}") }
+}
+
+fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &BayRanking, top: usize, sys: System) -> io::Result<()> {
     let b = BayList { bay, ranking };
     {
         if b.ranking.viable.is_empty() {
@@ -442,29 +469,30 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
             return Ok(());
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
-            let x = row(cat, r, b.bay);
+            let x = row(cat, r, b.bay, sys);
+            let n = |v: f64, us: &'static str, places: usize| display::num(v, us, places, sys);
             writeln!(
                 w,
-                "{},{},{},{},{},{},{},{:.1},{:.2},{},{:.3},{:.3},{:.3},{},{:.3},{:.3},{:.3},{},{},{},{}",
+                "{},{},{},{},{},{},{},{},{},{},{:.3},{:.3},{:.3},{},{},{},{},{},{},{},{}",
                 q(&job.project),
                 q(&b.bay.name),
                 k + 1,
                 q(&r.entry.section.id),
                 q(&r.entry.pattern.id),
                 q(&x.designation),
-                r.entry.topping.map_or(0.0, |t| t.get()),
-                x.weight_psf,
-                x.depth_in,
+                n(r.entry.topping.map_or(0.0, |t| t.get()), "in", 2),
+                n(x.weight_psf, "psf", 1),
+                n(x.depth_in, "in", 2),
                 q(&x.governing),
                 x.ratio,
                 x.phi_mn_over_mu,
                 x.shear_ratio,
                 x.class,
-                x.camber_erection,
-                x.camber_final,
-                x.defl_live,
+                n(x.camber_erection, "in", 3),
+                n(x.camber_final, "in", 3),
+                n(x.defl_live, "in", 3),
                 q(&x.fire),
-                q(&x.member_length),
+                n(x.member_length_in / 12.0, "ft", 3),
                 x.pieces.map_or(String::new(), |p| p.to_string()),
                 q(&x.openings.join("; "))
             )?;

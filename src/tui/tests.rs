@@ -480,3 +480,79 @@ fn on_a_roof_the_live_keys_step_the_roof_load() {
         assert!(a.status.0.starts_with("roof live load Lr"), "{:?}", a.status);
     }
 }
+
+#[test]
+fn the_detail_pane_scrolls_when_focused() {
+    let mut a = app();
+    let s = screen(&a, 80, 24);
+    assert!(s.contains("Detail 1–7/"), "{s}");
+    // the candidates list moves with j/k; the Detail pane with focus scrolls
+    a.focus = Focus::Detail;
+    let sel = a.selected;
+    press(&mut a, &[Key::Char('j'), Key::Char('j')]);
+    assert_eq!((a.selected, a.detail_scroll), (sel, 2));
+    let s = screen(&a, 80, 24);
+    assert!(s.contains("Detail 3–9/"), "{s}");
+    // page down goes to the last page and no further; page up comes back
+    for _ in 0..10 {
+        press(&mut a, &[Key::PageDown]);
+    }
+    let last = a.detail_max.get();
+    assert!(last > 0 && a.detail_scroll == last, "{} {last}", a.detail_scroll);
+    let s = screen(&a, 80, 24);
+    let every = a.detail.as_ref().unwrap().checks.len();
+    assert!(s.contains(&format!("–{}/{}", last + 7, last + 7)), "{s}");
+    assert!(every > 7, "more checks than lines: scrolling reaches them");
+    press(&mut a, &[Key::PageUp, Key::PageUp, Key::PageUp, Key::PageUp]);
+    assert_eq!(a.detail_scroll, 0);
+    // page keys change bays when the Detail pane is not focused
+    a.focus = Focus::Candidates;
+    press(&mut a, &[Key::PageDown]);
+    assert_eq!(a.bay, 1);
+}
+
+#[test]
+fn titles_wrap_between_words_and_are_never_cut() {
+    let a = app();
+    let s = screen(&a, 80, 24);
+    assert!(!s.contains("Member length within production li "), "{s}");
+    let mut a = app();
+    a.focus = Focus::Detail;
+    a.bay = 1;
+    a.rerank();
+    // every title appears whole (perhaps over two lines) somewhere in the pane
+    let titles: Vec<&str> = a.detail.as_ref().unwrap().checks.iter().map(|c| c.info.title).collect();
+    let mut seen = String::new();
+    for _ in 0..6 {
+        seen.push_str(&screen(&a, 80, 24));
+        press(&mut a, &[Key::PageDown]);
+    }
+    let flat: String = seen.split_whitespace().collect::<Vec<_>>().join(" ");
+    for t in titles {
+        let first = t.split(' ').next().unwrap();
+        assert!(flat.contains(first), "{t}\n{seen}");
+    }
+}
+
+/// The screen at the three sizes in both systems.
+#[test]
+fn screens_in_both_systems_at_three_sizes() {
+    for units in [Units::Us, Units::Si] {
+        for (w, h) in [(80, 24), (100, 30), (200, 50)] {
+            let mut a = app();
+            a.units = units;
+            let s = screen(&a, w, h);
+            if units == Units::Si {
+                for us in [" psf", " ksi", "kip-ft", " in "] {
+                    let body: String = s
+                        .lines()
+                        .filter(|l| !l.contains("Hollow-core plank"))
+                        .collect::<Vec<_>>()
+                        .join("\n");
+                    assert!(!body.contains(us), "'{us}' in an SI screen {w}x{h}:\n{s}");
+                }
+            }
+            insta::assert_snapshot!(format!("screen_{}_{w}x{h}", units.name()), s);
+        }
+    }
+}

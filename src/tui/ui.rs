@@ -13,6 +13,8 @@ use ratatui::widgets::{
 
 use super::theme::Theme;
 use super::{Action, App, FIELDS, Focus, Mode, PromptKind, Question, Units, View};
+use crate::bay::Objective;
+use crate::units::display;
 
 /// Draw the whole screen into a frame.
 pub fn draw(frame: &mut Frame, app: &App, table: &mut TableState) {
@@ -117,6 +119,29 @@ fn bar(ratio: f64, width: usize, mono: bool) -> String {
     s
 }
 
+/// The list column of an objective: its heading in the display units.
+fn objective_heading(o: Objective, sys: crate::units::System) -> String {
+    match o {
+        Objective::Lightest => display::unit("psf", sys).to_string(),
+        Objective::Shallowest => format!("h {}", display::unit("in", sys)),
+        Objective::LeastSteel => display::unit("in²/ft", sys).to_string(),
+        Objective::Cheapest => format!("${}", display::unit("/ft²", sys)),
+        Objective::MostReserve => "spare".into(),
+    }
+}
+
+/// An entry's figure for an objective, in the display units.
+fn objective_value(o: Objective, m: &crate::select::Metrics, sys: crate::units::System) -> String {
+    match o {
+        Objective::Lightest => display::num(m.weight_psf, "psf", 1, sys),
+        Objective::Shallowest => display::num(m.depth_in, "in", 1, sys),
+        Objective::LeastSteel => display::num(m.strand_in2_per_ft, "in²/ft", 3, sys),
+        Objective::Cheapest => m.price_per_ft2.map_or("-".into(), |p| display::num(p, "/ft²", 2, sys)),
+        // the share of the governing check's capacity left
+        Objective::MostReserve => format!("{:.0}%", (100.0 * (1.0 - m.governing_ratio)).max(0.0)),
+    }
+}
+
 fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut TableState) {
     let focused = app.focus == Focus::Candidates;
     let viable = app.rows.iter().filter(|r| r.viable).count();
@@ -137,6 +162,14 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
         title.push_str("· re-ranking… ");
     }
     let wide = area.width >= 70;
+    let sys = app.units;
+    // the active objective's figure comes first; a wide list adds weight and
+    // depth when the objective is another
+    let objective = app.current_bay().objective;
+    let extra: Vec<Objective> = [Objective::Lightest, Objective::Shallowest]
+        .into_iter()
+        .filter(|o| *o != objective)
+        .collect();
     // only the rows that fit are built (a ranking can hold 10 000): the
     // window starts where the last frame's did and moves as little as
     // needed to keep the selection in sight; the state keeps its start
@@ -165,10 +198,12 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
             let mut cells = vec![
                 Cell::from(if marked { "*" } else { " " }),
                 Cell::from(Line::from(label)),
-                Cell::from(format!("{:>5.1}", r.metrics.weight_psf)),
+                Cell::from(format!("{:>6}", objective_value(objective, &r.metrics, sys))),
             ];
             if wide {
-                cells.push(Cell::from(format!("{:>5.1}", r.metrics.depth_in)));
+                for &o in &extra {
+                    cells.push(Cell::from(format!("{:>6}", objective_value(o, &r.metrics, sys))));
+                }
             }
             cells.push(Cell::from(Span::styled(
                 bar(ratio, 8, app.mono),
@@ -179,7 +214,7 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
                 cells.push(Cell::from(if r.viable {
                     r.governing.0.clone()
                 } else {
-                    format!("✗ {}", r.failure.as_ref().map_or("", |f| f.0.as_str()))
+                    format!("✗ {}", display::localize(r.failure.as_ref().map_or("", |f| f.0.as_str()), sys))
                 }));
             } else {
                 cells.push(Cell::from(if r.viable { "ok" } else { "✗" }));
@@ -190,21 +225,23 @@ fn candidates(app: &App, area: Rect, buf: &mut Buffer, t: &Theme, state: &mut Ta
     let mut widths = vec![
         Constraint::Length(1),
         Constraint::Min(if wide { 32 } else { 18 }),
-        Constraint::Length(5),
+        Constraint::Length(6),
     ];
-    let mut header = vec!["", "entry", "  psf"];
+    let mut header = vec![String::new(), "entry".into(), format!("{:>6}", objective_heading(objective, sys))];
     if wide {
-        widths.push(Constraint::Length(5));
-        header.push(" h in");
+        for &o in &extra {
+            widths.push(Constraint::Length(6));
+            header.push(format!("{:>6}", objective_heading(o, sys)));
+        }
     }
     widths.extend([Constraint::Length(8), Constraint::Length(5)]);
-    header.extend(["capacity", "ratio"]);
+    header.extend(["capacity".into(), "ratio".into()]);
     if wide {
         widths.push(Constraint::Fill(1));
-        header.push("governs / first failure");
+        header.push("governs / first failure".into());
     } else {
         widths.push(Constraint::Length(2));
-        header.push("");
+        header.push(String::new());
     }
     let table = Table::new(rows, widths)
         .header(TRow::new(header).style(t.muted))
@@ -234,26 +271,34 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             .render(area, buf);
         return;
     };
+    let sys = app.units;
     let h = &ev.history;
     let c = &ev.camber;
     let wide = area.width >= 110;
+    let k = |psi: f64| display::num(psi / 1000.0, "ksi", 1, sys);
+    let mm = |v: f64| {
+        let s = display::num(v, "in", 2, sys);
+        if s.starts_with('-') { s } else { format!("+{s}") }
+    };
+    let u = display::unit("ksi", sys);
     let mut lines = vec![
         Line::from(format!(
-            "fse {:.1} ksi · losses {:.1} ksi (ES {:.1} CR {:.1} SH {:.1} RE {:.1}) · class {}",
-            h.fse_psi / 1000.0,
-            h.losses.total_psi / 1000.0,
-            h.losses.es_psi / 1000.0,
-            h.losses.cr_psi / 1000.0,
-            h.losses.sh_psi / 1000.0,
-            h.losses.re_psi / 1000.0,
+            "fse {} {u} · losses {} {u} (ES {} CR {} SH {} RE {}) · class {}",
+            k(h.fse_psi),
+            k(h.losses.total_psi),
+            k(h.losses.es_psi),
+            k(h.losses.cr_psi),
+            k(h.losses.sh_psi),
+            k(h.losses.re_psi),
             ev.service_class.name()
         )),
         Line::from(format!(
-            "camber {:+.2} / {:+.2} / {:+.2} in (release/erection/final) · live {:.2} in · fire {} · {:.1} Hz",
-            c.camber_release_in,
-            c.camber_erection_in,
-            c.camber_final_in,
-            c.defl_live_in,
+            "camber {} / {} / {} {} (release/erection/final) · live {} · fire {} · {:.1} Hz",
+            mm(c.camber_release_in),
+            mm(c.camber_erection_in),
+            mm(c.camber_final_in),
+            display::unit("in", sys),
+            display::with_unit(c.defl_live_in, "in", 2, sys),
             ev.fire
                 .rating_h
                 .map_or("not rated".into(), |x| format!("{} h", crate::checks::fire::fmt_h(x))),
@@ -269,31 +314,78 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             &crate::select::topping_mix(&app.catalog, app.current_bay()),
         );
         for o in crate::checks::describe_openings_as(&e.candidate(), &case, true) {
-            lines.push(Line::from(crate::input::escape_controls(&o)).style(t.muted));
+            lines.push(Line::from(crate::input::escape_controls(&display::localize(&o, sys))).style(t.muted));
         }
     }
     // failures first, then the highest ratios: the ones that matter show first
     let mut checks: Vec<&crate::checks::CheckResult> = ev.checks.iter().collect();
     checks.sort_by(|a, b| a.pass.cmp(&b.pass).then(b.ratio.total_cmp(&a.ratio)));
+    // the title takes the room the numbers leave and wraps at a word, never cut
+    let numbers = 5 + 1 + 9 + 3 + 9 + 1 + 6 + 1 + 5;
+    let room = (area.width as usize).saturating_sub(2 + numbers).max(12);
+    let title_w = checks.iter().map(|c| c.info.title.chars().count()).max().unwrap_or(10).min(room);
     for ch in checks {
+        let (demand, unit) = display::convert(ch.demand, ch.unit, sys);
+        let (capacity, _) = display::convert(ch.capacity, ch.unit, sys);
+        let mut parts = wrap_words(ch.info.title, title_w).into_iter();
+        let first = parts.next().unwrap_or_default();
         let mut spans = vec![
             Span::styled(
                 format!("{:<5}", if ch.pass { "ok" } else { "FAIL" }),
                 if ch.pass { t.bar_ok } else { t.error },
             ),
             Span::raw(format!(
-                "{:<34.34} {:>9.2} / {:>9.2} {:<6} {:>5.2}",
-                ch.info.title, ch.demand, ch.capacity, ch.unit, ch.ratio
+                "{first:<title_w$} {demand:>9.2} / {capacity:>9.2} {unit:<6} {:>5.2}",
+                ch.ratio
             )),
         ];
         if wide {
             spans.push(Span::styled(format!("  {}", ch.info.clause), t.muted));
         }
         lines.push(Line::from(spans));
+        for rest in parts {
+            lines.push(Line::from(format!("     {rest}")));
+        }
     }
+    let inner = (area.height as usize).saturating_sub(2);
+    let max = lines.len().saturating_sub(inner);
+    app.detail_max.set(max);
+    app.detail_page.set(inner.saturating_sub(1).max(1));
+    let top = app.detail_scroll.min(max);
+    let title = if max > 0 {
+        format!(
+            " Detail {}–{}/{}{}: {} ",
+            top + 1,
+            (top + inner).min(lines.len()),
+            lines.len(),
+            if focused { " j/k pgup/pgdn" } else { "" },
+            r.designation
+        )
+    } else {
+        format!(" Detail: {} ", r.designation)
+    };
     Paragraph::new(lines)
-        .block(block(format!(" Detail: {} ", r.designation), focused, t))
+        .scroll((top.min(u16::MAX as usize) as u16, 0))
+        .block(block(title, focused, t))
         .render(area, buf);
+}
+
+/// `text` in lines of at most `width` characters, broken between words (a
+/// word longer than the width has a line of its own).
+fn wrap_words(text: &str, width: usize) -> Vec<String> {
+    let mut out = Vec::new();
+    let mut cur = String::new();
+    for word in text.split(' ') {
+        if !cur.is_empty() && cur.chars().count() + 1 + word.chars().count() > width {
+            out.push(std::mem::take(&mut cur));
+        }
+        if !cur.is_empty() {
+            cur.push(' ');
+        }
+        cur.push_str(word);
+    }
+    out.push(cur);
+    out
 }
 
 fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {

@@ -10,6 +10,21 @@
 
 use super::{M_PER_IN, N_PER_LBF, PA_PER_PSI, System};
 
+/// The display system of a run: the `--units` flag, else the job's
+/// `units`, else the catalog's, else US.
+pub fn choose(flag: Option<System>, job: Option<System>, catalog: Option<System>) -> System {
+    flag.or(job).or(catalog).unwrap_or(System::Us)
+}
+
+/// A JSON or CSV key of a US run (`span_ft`) as the system writes it
+/// (`span_m` in SI).
+pub fn key(k: &str, sys: System) -> String {
+    match (sys, key_row(k)) {
+        (System::Si, Some(r)) => format!("{}{}", &k[..k.len() - r.us_key.len()], r.si_key),
+        _ => k.to_string(),
+    }
+}
+
 /// One unit as printed: its US spelling, its SI counterpart, the factor
 /// from the US value to the SI one, decimals in SI tables, and the JSON key
 /// suffixes in each system.
@@ -124,6 +139,19 @@ pub fn localize(text: &str, sys: System) -> String {
     let b = text.as_bytes();
     let mut i = 0;
     while i < text.len() {
+        // a unit named alone in brackets: "(psi)"
+        if b[i] == b'(' {
+            if let Some(r) = TABLE
+                .iter()
+                .find(|r| text[i + 1..].starts_with(r.us) && text[i + 1 + r.us.len()..].starts_with(')'))
+            {
+                out.push('(');
+                out.push_str(r.si);
+                out.push(')');
+                i += r.us.len() + 2;
+                continue;
+            }
+        }
         let starts_number = b[i].is_ascii_digit() && !after_word(b, i);
         if starts_number {
             if let Some((len_in, used)) = feet_inches(&text[i..]) {
@@ -360,6 +388,10 @@ mod tests {
             "camber -6.35 mm; 12.7 mm strand; 38.1 mm"
         );
         assert_eq!(localize("$9.40/ft²", System::Si), "$101/m²");
+        assert_eq!(
+            localize("stresses (psi), moments (kip-ft)", System::Si),
+            "stresses (MPa), moments (kN·m)"
+        );
         // not units: words, ids, clauses, ratios
         for keep in [
             "ACI 318-19 Table 24.5.4.1",
