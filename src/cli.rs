@@ -374,12 +374,13 @@ fn sections(file: Option<PathBuf>, json: bool, topping: Option<&str>, topping_mi
     report::write_section_table(&mut out, &cat, sys)?;
     if let Some((th, mix)) = &top {
         writeln!(out)?;
-        writeln!(
-            out,
+        let head = format!(
             "With a {} composite topping ({}; n = Ec,topping / Ec,precast):",
             display::with_unit(th.get(), "in", 2, sys),
             mix.id
-        )?;
+        );
+        // the default mix's name says its strength
+        writeln!(out, "{}", display::localize(&head, sys))?;
         let si = sys == System::Si;
         let (au, hu, iu, su) = if si {
             ("e3mm2", "mm", "e6mm4", "e6mm3")
