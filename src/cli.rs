@@ -187,7 +187,9 @@ pub fn run() -> i32 {
             BAD_INPUT
         }
         Err(Failure::Message(m)) => {
-            eprintln!("plankwise: {}", plankwise::input::escape_controls(&m));
+            // a message of several lines keeps its lines; each is escaped
+            let lines: Vec<String> = m.split('\n').map(plankwise::input::escape_controls).collect();
+            eprintln!("plankwise: {}", lines.join("\n"));
             BAD_INPUT
         }
     }
@@ -247,12 +249,16 @@ fn ui_or_summary(catalog: Option<&PathBuf>, job: Option<&PathBuf>, summary: bool
     let (cat, _) = load(catalog)?;
     print_warnings(&cat);
     let (job, path) = match (job, catalog) {
-        (Some(j), _) if j.as_os_str() == "demo" => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
+        (Some(j), _) if j.as_os_str() == "demo" => (plankwise::job::demo_for(&cat)?.0, None),
         (Some(j), _) => (plankwise::job::Job::load(j)?, Some(j.clone())),
         // the built-in demo catalog opens on the demo job
         (None, None) => (plankwise::job::Job::from_str(plankwise::job::DEMO_JOB, "demo-job.toml")?, None),
-        // a user's catalog without a job opens one empty bay in its units
-        (None, Some(_)) => (plankwise::job::Job::empty_for(&cat), None),
+        // the SI demo catalog opens on the SI demo job; a user's catalog
+        // without a job on one empty bay in its units
+        (None, Some(_)) => match plankwise::job::demo_for(&cat)? {
+            (j, name) if name.starts_with("demo-job-si") => (j, None),
+            _ => (plankwise::job::Job::empty_for(&cat), None),
+        },
     };
     let problems = plankwise::select::cross_check(&cat, &job.bays);
     if !problems.is_empty() {

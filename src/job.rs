@@ -48,6 +48,19 @@ pub struct Job {
 
 /// The demo job, embedded like the demo catalog.
 pub const DEMO_JOB: &str = include_str!("../catalog/demo-job.toml");
+/// The SI demo job, for the SI demo catalog.
+pub const DEMO_JOB_SI: &str = include_str!("../catalog/demo-job-si.toml");
+
+/// The built-in demo job that goes with a catalog: the SI one for the SI
+/// demo catalog (recognised by its content), else the US one.
+pub fn demo_for(cat: &crate::catalog::Catalog) -> Result<(Job, &'static str), crate::catalog::Problems> {
+    let si = crate::catalog::Catalog::from_str(crate::catalog::DEMO_SI, "demo-si.toml")?;
+    if cat.hash == si.hash {
+        Ok((Job::from_str(DEMO_JOB_SI, "demo-job-si.toml")?, "demo-job-si.toml (built in)"))
+    } else {
+        Ok((Job::from_str(DEMO_JOB, "demo-job.toml")?, "demo-job.toml (built in)"))
+    }
+}
 
 #[derive(Debug, Deserialize)]
 #[serde(deny_unknown_fields)]

@@ -29,7 +29,7 @@ fn default_run_prints_the_demo_catalog_and_the_cautions() {
 fn demo_catalogs_validate_cleanly() {
     for (file, counts) in [
         ("catalog/demo-us.toml", "12 sections, 33 patterns"),
-        ("catalog/demo-si.toml", "5 sections, 14 patterns"),
+        ("catalog/demo-si.toml", "6 sections, 15 patterns"),
     ] {
         let (code, out, err) = run(&["validate", file]);
         assert_eq!(code, 0, "{err}");

@@ -7,7 +7,7 @@ use serde::Serialize;
 
 use plankwise::bay::{Bay, Objective};
 use plankwise::catalog::Catalog;
-use plankwise::job::{DEMO_JOB, Job};
+use plankwise::job::Job;
 use plankwise::report::shortlist::{self, Format};
 use plankwise::select::envelope::{LoadLimit, longest_span, max_live, span_map};
 use plankwise::select::{Entry, Ranked, case_for, cross_check, failure_reason, rank_bay, topping_mix};
@@ -120,9 +120,11 @@ pub struct ShortlistArgs {
     units: UnitsFlag,
 }
 
-fn load_job(path: &Path) -> Result<(Job, String), Failure> {
+/// A job file, or with "demo" the built-in demo job of the catalog.
+fn load_job(path: &Path, cat: &Catalog) -> Result<(Job, String), Failure> {
     if path.as_os_str() == "demo" {
-        return Ok((Job::from_str(DEMO_JOB, "demo-job.toml")?, "demo-job.toml (built in)".into()));
+        let (job, name) = plankwise::job::demo_for(cat)?;
+        return Ok((job, name.into()));
     }
     Ok((Job::load(path)?, path.display().to_string()))
 }
@@ -150,7 +152,7 @@ fn job_or_flags(job: Option<&PathBuf>, flags: &BayFlags, cat: &Catalog) -> Resul
                     ignored.join(", ")
                 )));
             }
-            let job = load_job(j)?.0;
+            let job = load_job(j, cat)?.0;
             Ok((job.bays, objective(obj)?, job.units))
         }
         None => Ok((vec![flags.to_bay(cat)?], None, None)),
@@ -482,7 +484,7 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
     let mut job_units = None;
     let bay = match (&a.job, &a.bay_name) {
         (Some(j), Some(name)) => {
-            let job = load_job(j)?.0;
+            let job = load_job(j, &cat)?.0;
             job_units = job.units;
             let names: Vec<&str> = job.bays.iter().map(|b| b.name.as_str()).collect();
             job.bays.iter().find(|b| &b.name == name).cloned().ok_or_else(|| {
@@ -533,7 +535,7 @@ pub fn spanmap(a: &SpanmapArgs) -> Result<i32, Failure> {
 pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
-    let (job, _) = load_job(&a.job)?;
+    let (job, _) = load_job(&a.job, &cat)?;
     check_job(&cat, &job.bays)?;
     let sys = a.units.system(Some(&job), &cat);
     let format = match a.format.as_str() {

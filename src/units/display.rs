@@ -160,8 +160,10 @@ pub fn localize(text: &str, sys: System) -> String {
                 continue;
             }
             if let Some((value, digits, used, r)) = number_unit(&text[i..]) {
+                // as many significant figures as written (at least three),
+                // no more decimals than the unit's SI tables print
                 let sig = digits.max(3);
-                out.push_str(&significant(value * r.factor, sig));
+                out.push_str(&significant(value * r.factor, sig, r.si_places));
                 if !r.si.starts_with('/') {
                     out.push(' ');
                 }
@@ -273,13 +275,14 @@ fn feet_inches(s: &str) -> Option<(f64, usize)> {
     Some((12.0 * ft + inches, apos + 2 + quote + 1))
 }
 
-/// `v` with `sig` significant figures, written without an exponent.
-fn significant(v: f64, sig: usize) -> String {
+/// `v` with `sig` significant figures but at most `most` decimals,
+/// written without an exponent.
+fn significant(v: f64, sig: usize, most: usize) -> String {
     if v == 0.0 {
         return "0".into();
     }
     let mag = v.abs().log10().floor() as i32;
-    let places = (sig as i32 - 1 - mag).max(0) as usize;
+    let places = ((sig as i32 - 1 - mag).max(0) as usize).min(most);
     format!("{v:.places$}")
 }
 
@@ -375,7 +378,7 @@ mod tests {
         let t = "Flexural strength: 43.08 kip-ft against 42.02 kip-ft (ratio 1.03)";
         assert_eq!(
             localize(t, System::Si),
-            "Flexural strength: 58.41 kN·m against 56.97 kN·m (ratio 1.03)"
+            "Flexural strength: 58.4 kN·m against 57.0 kN·m (ratio 1.03)"
         );
         assert_eq!(localize(t, System::Us), t);
         assert_eq!(
@@ -385,7 +388,7 @@ mod tests {
         assert_eq!(localize("span 30'-6\", 2 in topping", System::Si), "span 9.296 m, 50.8 mm topping");
         assert_eq!(
             localize("camber -0.25 in; 1/2 in strand; 1 1/2 in", System::Si),
-            "camber -6.35 mm; 12.7 mm strand; 38.1 mm"
+            "camber -6.3 mm; 12.7 mm strand; 38.1 mm"
         );
         assert_eq!(localize("$9.40/ft²", System::Si), "$101/m²");
         assert_eq!(
