@@ -145,6 +145,8 @@ enum Target {
     LeftTip,
     /// The tip of the right overhang.
     RightTip,
+    /// A point between the supports, in from the left support.
+    At(f64),
 }
 
 /// The moment of a unit downward load at the target, on a member on
@@ -154,6 +156,16 @@ fn unit_moment(t: Target, (s0, s1): (f64, f64), (lo, hi): (f64, f64), x: f64) ->
     let l = s1 - s0;
     let u = x - s0;
     match t {
+        Target::At(p) => {
+            let a = p - s0;
+            if u < 0.0 || u > l {
+                0.0
+            } else if u <= a {
+                u * (l - a) / l
+            } else {
+                a * (l - u) / l
+            }
+        }
         Target::Mid => {
             if u < 0.0 || u > l {
                 0.0
@@ -445,10 +457,163 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
     }
 }
 
+/// One point of the camber along the member, upward positive, in.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct CamberPoint {
+    /// From the left support, in.
+    pub x_in: f64,
+    /// At release.
+    pub release_in: f64,
+    /// At erection.
+    pub erection_in: f64,
+    /// Final, under permanent loads.
+    pub final_in: f64,
+}
+
+/// The camber between the supports at `n` + 1 evenly spaced points, at
+/// release, erection and final (the picture of the UI). Each part —
+/// prestress, self-weight, topping, superimposed dead load — takes the
+/// shape of its own curvature (the virtual-work integral with a unit load
+/// at each point) scaled to the midspan value of [`camber`], and the parts
+/// combine with the same Martin (1977) multipliers, so the picture passes
+/// through the numbers the report prints.
+///
+/// With an overhang the erection and final parts are those of the member
+/// on its bed scaled alike (the report's midspan numbers use the in-place
+/// supports): a picture, not a number to read.
+pub fn profile(m: &Member, cam: &Camber, n: usize) -> Vec<CamberPoint> {
+    let n = n.max(2);
+    let po = m.history.fpo_psi;
+    let mut breaks: Vec<f64> = m.loads.breaks().into_iter().map(|b| b.0).collect();
+    if let Some(c) = m.cut {
+        breaks.extend([c.along.0, c.along.1]);
+    }
+    let (e0, e1) = m.ends;
+    for layer in &m.layers {
+        breaks.extend([e0 + layer.debond, e1 - layer.debond]);
+        if let Some(h) = m.hold_down {
+            breaks.extend([e0 + h, e1 - h]);
+        }
+    }
+    let pre = |x: f64| {
+        let (p, y) = m.force_at(x, po, m.ltr);
+        let pr = m.props_at(x).0;
+        p * (pr.yb_in - y) / (m.eci * pr.ix_in4)
+    };
+    let own = |x: f64| m.loads.at(crate::loads::SELF, x).0 / (m.eci * m.props_at(x).0.ix_in4);
+    let group = |g: usize| {
+        move |x: f64| {
+            let (p, c) = m.props_at(x);
+            let ei = if g <= crate::loads::TOPPING {
+                m.ec * p.ix_in4
+            } else {
+                m.ec * c.map_or(p.ix_in4, |c| c.ix_in4)
+            };
+            m.loads.at(g, x).0 / ei
+        }
+    };
+    let l = m.l;
+    let shape = |kappa: &dyn Fn(f64) -> f64| -> Vec<f64> {
+        let at = |x: f64| deflection_on(Target::At(x), (0.0, l), (0.0, l), &breaks, kappa);
+        let mid = at(l / 2.0);
+        (0..=n)
+            .map(|k| {
+                let v = at(l * k as f64 / n as f64);
+                if mid.abs() > 1e-12 { v / mid } else { 0.0 }
+            })
+            .collect()
+    };
+    let (sp, ss) = (shape(&pre), shape(&own));
+    let st = shape(&group(crate::loads::TOPPING));
+    let sd = shape(&group(crate::loads::SDL));
+    let mu = cam.multipliers;
+    (0..=n)
+        .map(|k| {
+            let (p, w) = (cam.prestress_release_in * sp[k], cam.self_release_in * ss[k]);
+            let (t, d) = (cam.topping_in * st[k], cam.sdl_in * sd[k]);
+            CamberPoint {
+                x_in: l * k as f64 / n as f64,
+                release_in: p - w,
+                erection_in: mu.erection_prestress * p - mu.erection_self * w,
+                final_in: mu.final_prestress * p - mu.final_self * w - mu.final_topping * t - mu.final_sdl * d,
+            }
+        })
+        .collect()
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
     use approx::assert_relative_eq;
+
+    /// A demo hollow-core candidate under a case.
+    fn demo_member_profile(case: &crate::case::DesignCase, n: usize) -> (Camber, Vec<CamberPoint>) {
+        let cat = crate::catalog::Catalog::from_str(crate::catalog::DEMO_US, "demo-us.toml").unwrap();
+        let s = cat.section("plank-8in-4ft").unwrap();
+        let cand = crate::checks::Candidate {
+            section: s,
+            pattern: &s.patterns[1],
+            mix: s.mix(&cat),
+        };
+        let ev = crate::checks::evaluate(&cand, case);
+        let m = Member::new(s, &s.patterns[1], s.mix(&cat), case);
+        let p = profile(&m, &ev.camber, n);
+        (ev.camber, p)
+    }
+
+    #[test]
+    fn the_camber_picture_passes_through_the_printed_numbers() {
+        let mut bay = crate::bay::Bay::new("b", crate::units::Length::from_unit(26.0, "ft"));
+        bay.case.sdl = crate::units::AreaLoad::from_unit(20.0, "psf");
+        bay.case.live = crate::units::AreaLoad::from_unit(50.0, "psf");
+        let (cam, p) = demo_member_profile(&bay.case, 8);
+        assert_eq!(p.len(), 9);
+        // zero over the supports, the printed values at midspan
+        for q in [p[0], p[8]] {
+            assert!(
+                q.release_in.abs() < 1e-9 && q.erection_in.abs() < 1e-9 && q.final_in.abs() < 1e-9,
+                "{q:?}"
+            );
+        }
+        assert_relative_eq!(p[4].release_in, cam.camber_release_in, max_relative = 1e-9);
+        assert_relative_eq!(p[4].erection_in, cam.camber_erection_in, max_relative = 1e-9);
+        assert_relative_eq!(p[4].final_in, cam.camber_final_in, max_relative = 1e-9);
+        // symmetric member: symmetric picture
+        assert_relative_eq!(p[1].erection_in, p[7].erection_in, max_relative = 1e-6);
+    }
+
+    #[test]
+    fn a_uniform_load_bends_to_the_elastic_curve() {
+        // the elastic curve of a simple span under uniform load (any
+        // mechanics text): y(x) = w x (L³ − 2 L x² + x³) / 24EI, so at L/4
+        // it is 57/80 = 0.7125 of the midspan value. Self-weight alone at
+        // release: the member a little longer than the span (bearing), so
+        // to 1 %.
+        let mut bay = crate::bay::Bay::new("b", crate::units::Length::from_unit(26.0, "ft"));
+        bay.case.sdl = crate::units::AreaLoad::from_unit(20.0, "psf");
+        let (cam, _) = demo_member_profile(&bay.case, 4);
+        let cat = crate::catalog::Catalog::from_str(crate::catalog::DEMO_US, "demo-us.toml").unwrap();
+        let s = cat.section("plank-8in-4ft").unwrap();
+        let m = Member::new(s, &s.patterns[1], s.mix(&cat), &bay.case);
+        // a member with no prestress part to see the self-weight shape
+        let only_self = Camber {
+            prestress_release_in: 0.0,
+            topping_in: 0.0,
+            sdl_in: 0.0,
+            ..cam
+        };
+        let p = profile(&m, &only_self, 4);
+        assert_relative_eq!(p[1].release_in / p[2].release_in, 57.0 / 80.0, max_relative = 1e-2);
+        // and the superimposed dead load (uniform on the span) to 1e-6
+        let only_sdl = Camber {
+            prestress_release_in: 0.0,
+            self_release_in: 0.0,
+            topping_in: 0.0,
+            ..cam
+        };
+        let p = profile(&m, &only_sdl, 4);
+        assert_relative_eq!(p[1].final_in / p[2].final_in, 57.0 / 80.0, max_relative = 1e-6);
+    }
 
     #[test]
     fn example_c_release_camber() {

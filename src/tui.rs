@@ -69,6 +69,8 @@ pub enum Action {
     ToggleFailing,
     /// Detail or chart.
     ToggleView,
+    /// Show or leave the side-by-side view of the marked candidates.
+    Compare,
     /// Mark the selected candidate for the shortlist.
     Mark,
     /// Write the shortlist (asks for a path).
@@ -141,6 +143,10 @@ pub enum View {
     Detail,
     /// Its capacity envelope.
     Chart,
+    /// Its camber along the member at release, erection and final.
+    Camber,
+    /// The marked candidates side by side, every check a row.
+    Compare,
 }
 
 /// Display units: the system every pane shows.
@@ -326,6 +332,11 @@ pub struct App {
     pub detail_page: std::cell::Cell<usize>,
     /// Envelopes for the chart: (label, limits), selected first.
     pub chart: Vec<(String, Vec<LoadLimit>)>,
+    /// The camber picture of the selected candidate (when that view shows).
+    pub camber: Vec<crate::camber::CamberPoint>,
+    /// The marked candidates of the bay, evaluated, for the compare view
+    /// (label, weight, depth, evaluation).
+    pub compare: Vec<(String, Metrics, Evaluation)>,
     /// Monochrome display (NO_COLOR).
     pub mono: bool,
     /// Bays with more entries than this are ranked off the UI thread (the
@@ -366,6 +377,8 @@ impl App {
             detail_max: std::cell::Cell::new(usize::MAX),
             detail_page: std::cell::Cell::new(1),
             chart: Vec::new(),
+            camber: Vec::new(),
+            compare: Vec::new(),
             mono: false,
             background: None,
             request: None,
@@ -498,9 +511,53 @@ impl App {
         let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
         self.detail = Some(crate::checks::evaluate(&e.candidate(), &case));
         self.chart.clear();
-        if self.view == View::Chart {
-            self.refresh_chart();
+        self.camber.clear();
+        match self.view {
+            View::Chart => self.refresh_chart(),
+            View::Camber => self.refresh_camber(),
+            View::Compare => self.refresh_compare(),
+            View::Detail => {}
         }
+    }
+
+    /// Points of the camber picture.
+    pub const CAMBER_POINTS: usize = 24;
+
+    /// The camber picture of the selected candidate.
+    pub fn refresh_camber(&mut self) {
+        let (Some(r), Some(ev)) = (self.selected_row().cloned(), self.detail.as_ref()) else {
+            self.camber.clear();
+            return;
+        };
+        let bay = self.current_bay().clone();
+        let e = self.entry_of(&r);
+        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        let m = crate::member::Member::new(e.section, e.pattern, e.mix, &case);
+        self.camber = crate::camber::profile(&m, &ev.camber, App::CAMBER_POINTS);
+    }
+
+    /// The most candidates the compare view shows.
+    pub const COMPARE_MOST: usize = 4;
+
+    /// Evaluate the bay's marked candidates (at most four) for the compare view.
+    pub fn refresh_compare(&mut self) {
+        let bay = self.current_bay().clone();
+        let tm = topping_mix(&self.catalog, &bay);
+        let rows: Vec<Row> = bay
+            .marked
+            .iter()
+            .filter_map(|m| self.rows.iter().find(|r| &r.label == m))
+            .take(App::COMPARE_MOST)
+            .cloned()
+            .collect();
+        self.compare = rows
+            .iter()
+            .map(|r| {
+                let e = self.entry_of(r);
+                let case = case_for(&bay, r.topping, &tm);
+                (r.label.clone(), r.metrics, crate::checks::evaluate(&e.candidate(), &case))
+            })
+            .collect();
     }
 
     /// The capacity envelopes of the selected and the next two viable candidates.
@@ -898,9 +955,29 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             );
         }
         Action::ToggleView => {
-            app.view = if app.view == View::Detail { View::Chart } else { View::Detail };
-            if app.view == View::Chart {
-                app.refresh_chart();
+            app.view = match app.view {
+                View::Detail => View::Chart,
+                View::Chart => View::Camber,
+                View::Camber | View::Compare => View::Detail,
+            };
+            match app.view {
+                View::Chart => app.refresh_chart(),
+                View::Camber => app.refresh_camber(),
+                _ => {}
+            }
+        }
+        Action::Compare => {
+            if app.view == View::Compare {
+                app.view = View::Detail;
+            } else {
+                app.view = View::Compare;
+                app.refresh_compare();
+                let n = app.compare.len();
+                if n < 2 {
+                    app.say("mark two to four viable candidates (space) to compare them side by side", true);
+                } else if app.current_bay().marked.len() > App::COMPARE_MOST {
+                    app.say(format!("comparing the first {} marked candidates", App::COMPARE_MOST), false);
+                }
             }
         }
         Action::Mark => {
@@ -919,6 +996,9 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                         app.say(format!("marked {label}"), false);
                     }
                     app.dirty = true;
+                    if app.view == View::Compare {
+                        app.refresh_compare();
+                    }
                 }
             }
         }

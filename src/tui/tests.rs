@@ -213,6 +213,8 @@ fn toggles_objective_bays_and_help() {
     assert_eq!(a.view, View::Chart);
     assert!(!a.chart.is_empty());
     update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Camber);
+    update(&mut a, Action::ToggleView);
     assert_eq!(a.view, View::Detail);
 }
 
@@ -555,4 +557,71 @@ fn screens_in_both_systems_at_three_sizes() {
             insta::assert_snapshot!(format!("screen_{}_{w}x{h}", units.name()), s);
         }
     }
+}
+
+#[test]
+fn the_compare_view_sets_marked_candidates_side_by_side() {
+    let mut a = app();
+    update(&mut a, Action::Compare);
+    assert_eq!(a.view, View::Compare);
+    assert!(a.status.1 && a.status.0.contains("mark two to four"), "{:?}", a.status);
+    assert!(screen(&a, 100, 30).contains("Mark two to four viable candidates"));
+    // mark three viable candidates
+    for _ in 0..3 {
+        update(&mut a, Action::Mark);
+        update(&mut a, Action::Down);
+    }
+    assert_eq!(a.compare.len(), 3, "marking refreshes the view");
+    let s = screen(&a, 120, 40);
+    assert!(s.contains("Compare 3 marked"), "{s}");
+    for (label, _, ev) in &a.compare {
+        let short: String = label.chars().take(12).collect();
+        assert!(s.contains(&short), "{short} in\n{s}");
+        // the governing check of each is marked in its column
+        assert!(ev.viable);
+    }
+    assert!(s.contains("◀ governs"), "{s}");
+    assert!(s.contains("Flexural strength"), "{s}");
+    // the ratio shown is the check's own
+    let (_, _, ev) = &a.compare[0];
+    let flex = ev.check("flexure").unwrap();
+    assert!(s.contains(&format!("{:.2} ok", flex.ratio)), "{s}");
+    update(&mut a, Action::Compare);
+    assert_eq!(a.view, View::Detail);
+}
+
+#[test]
+fn the_camber_picture_and_the_chart_legend() {
+    let mut a = app();
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Chart);
+    let s = screen(&a, 100, 30);
+    // a legend with the markers, the design point labelled, ticks in the units
+    for frag in [
+        "o plank-6in-4ft / 5x1/2 (selected)",
+        "+ ",
+        "# design point 24'-0\", 40 psf",
+        "span ft",
+        "live psf",
+    ] {
+        assert!(s.contains(frag), "'{frag}' in\n{s}");
+    }
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Camber);
+    assert_eq!(a.camber.len(), App::CAMBER_POINTS + 1);
+    let ev = a.detail.as_ref().unwrap();
+    let mid = a.camber[App::CAMBER_POINTS / 2];
+    assert!((mid.final_in - ev.camber.camber_final_in).abs() < 1e-9);
+    let s = screen(&a, 100, 30);
+    assert!(s.contains("Camber along the span"), "{s}");
+    assert!(s.contains(&format!("# final {:.2} in", ev.camber.camber_final_in)), "{s}");
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::Detail);
+    // a roof bay's chart varies the roof load
+    let roof = a.job.bays.iter().position(|b| b.case.member_use == crate::case::Use::Roof).unwrap();
+    a.bay = roof;
+    a.rerank();
+    update(&mut a, Action::ToggleView);
+    let s = screen(&a, 100, 30);
+    assert!(s.contains("roof Lr or S psf"), "{s}");
 }

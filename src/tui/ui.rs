@@ -53,6 +53,8 @@ pub fn render(app: &App, area: Rect, buf: &mut Buffer, table: &mut TableState) {
     match app.view {
         View::Detail => detail(app, lower, buf, &t),
         View::Chart => chart(app, lower, buf, &t),
+        View::Camber => camber(app, lower, buf, &t),
+        View::Compare => compare(app, lower, buf, &t),
     }
     status_line(app, status, buf, &t);
     footer_line(app, footer, buf, &t);
@@ -388,11 +390,28 @@ fn wrap_words(text: &str, width: usize) -> Vec<String> {
     out
 }
 
+/// Markers of the chart's curves, told apart without colour: the selected
+/// candidate, the next best two, and the design point.
+pub const CHART_MARKS: [char; 3] = ['o', '+', 'x'];
+/// The design point's marker.
+pub const DESIGN_MARK: char = '#';
+
+/// `n` + 1 evenly spaced tick labels from `lo` to `hi` (ratatui spreads
+/// the labels evenly along the axis).
+fn ticks(lo: f64, hi: f64, n: usize, places: usize) -> Vec<String> {
+    (0..=n)
+        .map(|k| format!("{:.places$}", lo + (hi - lo) * k as f64 / n as f64))
+        .collect()
+}
+
 fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    use ratatui::widgets::LegendPosition;
     let focused = app.focus == Focus::Detail;
     let bay = app.current_bay();
-    let to_load = |psf: f64| if app.units == Units::Us { psf } else { psf * 0.04788026 };
-    let to_span = |ft: f64| if app.units == Units::Us { ft } else { ft * 0.3048 };
+    let sys = app.units;
+    let roof = bay.case.member_use == crate::case::Use::Roof;
+    let to_load = |psf: f64| display::convert(psf, "psf", sys).0;
+    let to_span = |ft: f64| display::convert(ft, "ft", sys).0;
     let data: Vec<Vec<(f64, f64)>> = app
         .chart
         .iter()
@@ -402,17 +421,24 @@ fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
                 .collect()
         })
         .collect();
-    let point = vec![(to_span(bay.case.span.get() / 12.0), to_load(bay.case.live.in_unit("psf")))];
+    // the design point: the bay's span and the load its use varies
+    let design = (to_span(bay.case.span.get() / 12.0), to_load(bay.case.varied().in_unit("psf")));
+    let point = vec![design];
     let colors = [t.focus, t.status, t.muted];
+    let short = |label: &str| -> String {
+        let l: String = label.chars().take(26).collect();
+        if label.chars().count() > 26 { format!("{l}…") } else { l }
+    };
     let mut sets: Vec<Dataset> = app
         .chart
         .iter()
         .zip(&data)
         .enumerate()
         .map(|(i, ((label, _), d))| {
+            let mark = CHART_MARKS[i.min(2)];
             Dataset::default()
-                .name(label.clone())
-                .marker(if app.mono { Marker::Dot } else { Marker::Braille })
+                .name(format!("{mark} {}{}", short(label), if i == 0 { " (selected)" } else { "" }))
+                .marker(Marker::Custom(mark))
                 .graph_type(GraphType::Line)
                 .style(colors[i.min(2)])
                 .data(d)
@@ -420,39 +446,215 @@ fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         .collect();
     sets.push(
         Dataset::default()
-            .name("design point")
-            .marker(Marker::Block)
+            .name(format!(
+                "{DESIGN_MARK} design point {}, {}",
+                display::span(bay.case.span.get(), sys),
+                display::with_unit(bay.case.varied().in_unit("psf"), "psf", 0, sys)
+            ))
+            .marker(Marker::Custom(DESIGN_MARK))
             .graph_type(GraphType::Scatter)
             .style(t.error)
             .data(&point),
     );
-    let xs: Vec<f64> = data.iter().flatten().map(|p| p.0).chain([point[0].0]).collect();
-    let ys: Vec<f64> = data.iter().flatten().map(|p| p.1).chain([point[0].1]).collect();
+    let xs: Vec<f64> = data.iter().flatten().map(|p| p.0).chain([design.0]).collect();
+    let ys: Vec<f64> = data.iter().flatten().map(|p| p.1).chain([design.1]).collect();
     let (x0, x1) = (
         xs.iter().copied().fold(f64::INFINITY, f64::min),
         xs.iter().copied().fold(f64::NEG_INFINITY, f64::max),
     );
+    let x1 = x1.max(x0 + 1e-6);
     let y1 = ys.iter().copied().fold(0.0, f64::max).max(1.0) * 1.1;
-    let (xu, yu) = if app.units == Units::Us {
-        ("span ft", "live psf")
-    } else {
-        ("span m", "live kPa")
-    };
+    let load = if roof { "roof Lr or S" } else { "live" };
+    let xu = format!("span {}", display::unit("ft", sys));
+    let yu = format!("{load} {}", display::unit("psf", sys));
+    let (xp, yp) = if sys == Units::Us { (1, 0) } else { (2, 1) };
+    let title = format!(
+        " Capacity: largest {} by span ",
+        if roof { "roof load (Lr = S varied)" } else { "live load" }
+    );
     let chart = Chart::new(sets)
-        .block(block(" Capacity: largest live load by span ".into(), focused, t))
+        .block(block(title, focused, t))
+        .legend_position(Some(LegendPosition::TopRight))
+        // the legend always shows, however small the pane
+        .hidden_legend_constraints((Constraint::Percentage(100), Constraint::Percentage(100)))
+        .x_axis(Axis::default().title(xu).bounds([x0, x1]).labels(ticks(x0, x1, 4, xp)))
+        .y_axis(Axis::default().title(yu).bounds([0.0, y1]).labels(ticks(0.0, y1, 4, yp)));
+    chart.render(area, buf);
+}
+
+/// Markers of the camber picture: release, erection, final.
+pub const CAMBER_MARKS: [char; 3] = ['.', 'o', '#'];
+
+fn camber(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    use ratatui::widgets::LegendPosition;
+    let focused = app.focus == Focus::Detail;
+    let sys = app.units;
+    if app.camber.is_empty() {
+        Paragraph::new("no candidate selected")
+            .block(block(" Camber ".into(), focused, t))
+            .render(area, buf);
+        return;
+    }
+    let x = |v: f64| display::convert(v / 12.0, "ft", sys).0;
+    let y = |v: f64| display::convert(v, "in", sys).0;
+    let parts: [(&str, fn(&crate::camber::CamberPoint) -> f64); 3] = [
+        ("release", |p| p.release_in),
+        ("erection", |p| p.erection_in),
+        ("final", |p| p.final_in),
+    ];
+    let data: Vec<Vec<(f64, f64)>> = parts
+        .iter()
+        .map(|(_, f)| app.camber.iter().map(|p| (x(p.x_in), y(f(p)))).collect())
+        .collect();
+    let mid = app.camber.len() / 2;
+    let colors = [t.muted, t.status, t.focus];
+    let sets: Vec<Dataset> = parts
+        .iter()
+        .zip(&data)
+        .enumerate()
+        .map(|(i, ((name, f), d))| {
+            Dataset::default()
+                .name(format!(
+                    "{} {name} {}",
+                    CAMBER_MARKS[i],
+                    display::with_unit(f(&app.camber[mid]), "in", 2, sys)
+                ))
+                .marker(Marker::Custom(CAMBER_MARKS[i]))
+                .graph_type(GraphType::Line)
+                .style(colors[i])
+                .data(d)
+        })
+        .collect();
+    let xs = (0.0, x(app.camber.last().map_or(1.0, |p| p.x_in)).max(1e-6));
+    let (lo, hi) = data
+        .iter()
+        .flatten()
+        .fold((0.0f64, 0.0f64), |(lo, hi), p| (lo.min(p.1), hi.max(p.1)));
+    let pad = 0.15 * (hi - lo).max(1e-3);
+    let (y0, y1) = (lo - pad, hi + pad);
+    let (xp, yp) = if sys == Units::Us { (1, 2) } else { (2, 1) };
+    let chart = Chart::new(sets)
+        .block(block(
+            " Camber along the span, upward positive (Martin multipliers) ".into(),
+            focused,
+            t,
+        ))
+        .legend_position(Some(LegendPosition::TopRight))
+        .hidden_legend_constraints((Constraint::Percentage(100), Constraint::Percentage(100)))
         .x_axis(
             Axis::default()
-                .title(xu)
-                .bounds([x0, x1.max(x0 + 1e-6)])
-                .labels([format!("{x0:.1}"), format!("{x1:.1}")]),
+                .title(format!("from support {}", display::unit("ft", sys)))
+                .bounds([xs.0, xs.1])
+                .labels(ticks(xs.0, xs.1, 4, xp)),
         )
         .y_axis(
             Axis::default()
-                .title(yu)
-                .bounds([0.0, y1])
-                .labels(["0".to_string(), format!("{y1:.0}")]),
+                .title(format!("camber {}", display::unit("in", sys)))
+                .bounds([y0, y1])
+                .labels(ticks(y0, y1, 4, yp)),
         );
     chart.render(area, buf);
+}
+
+/// The marked candidates side by side: every check a row, each cell its
+/// ratio and verdict, the check that governs each candidate marked.
+fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    let focused = app.focus == Focus::Detail;
+    let sys = app.units;
+    if app.compare.len() < 2 {
+        Paragraph::new("Mark two to four viable candidates with space, then press v again to see them side by side.")
+            .wrap(ratatui::widgets::Wrap { trim: true })
+            .block(block(" Compare ".into(), focused, t))
+            .render(area, buf);
+        return;
+    }
+    let n = app.compare.len();
+    let inner_w = area.width.saturating_sub(2) as usize;
+    let col_w = ((inner_w.saturating_sub(22)) / n).clamp(10, 40);
+    let name_w = inner_w.saturating_sub(col_w * n + n).max(12);
+    let cut = |s: &str, w: usize| -> String {
+        if s.chars().count() <= w {
+            s.to_string()
+        } else {
+            let k: String = s.chars().take(w.saturating_sub(1)).collect();
+            format!("{k}…")
+        }
+    };
+    let mut header = vec![Cell::from("")];
+    header.extend(
+        app.compare
+            .iter()
+            .enumerate()
+            .map(|(i, (l, _, _))| Cell::from(cut(&format!("{} {l}", i + 1), col_w))),
+    );
+    let mut rows: Vec<TRow> = Vec::new();
+    let fig = |name: &str, f: &dyn Fn(&crate::select::Metrics) -> String| {
+        let mut cells = vec![Cell::from(name.to_string())];
+        cells.extend(app.compare.iter().map(|(_, m, _)| Cell::from(f(m))));
+        TRow::new(cells).style(t.muted)
+    };
+    rows.push(fig(&format!("weight {}", display::unit("psf", sys)), &|m| {
+        display::num(m.weight_psf, "psf", 1, sys)
+    }));
+    rows.push(fig(&format!("depth {}", display::unit("in", sys)), &|m| {
+        display::num(m.depth_in, "in", 1, sys)
+    }));
+    let mut verdict = vec![Cell::from("verdict")];
+    verdict.extend(app.compare.iter().map(|(_, _, ev)| {
+        Cell::from(Span::styled(
+            if ev.viable { "viable" } else { "NOT viable" },
+            if ev.viable { t.bar_ok } else { t.error },
+        ))
+    }));
+    rows.push(TRow::new(verdict));
+    for info in crate::checks::REGISTRY.iter().map(|c| &c.info) {
+        if !app.compare.iter().any(|(_, _, ev)| ev.check(info.id).is_some()) {
+            continue;
+        }
+        let mut cells = vec![Cell::from(cut(info.title, name_w))];
+        for (_, _, ev) in &app.compare {
+            let gov = ev.governing().info.id == info.id;
+            cells.push(match ev.check(info.id) {
+                None => Cell::from("-"),
+                Some(c) => Cell::from(Span::styled(
+                    format!(
+                        "{:.2} {}{}",
+                        c.ratio,
+                        if c.pass { "ok" } else { "FAIL" },
+                        if gov { " ◀ governs" } else { "" }
+                    ),
+                    if !c.pass {
+                        t.error
+                    } else if gov {
+                        t.focus
+                    } else {
+                        Style::new()
+                    },
+                )),
+            });
+        }
+        rows.push(TRow::new(cells));
+    }
+    let mut widths = vec![Constraint::Length(name_w as u16)];
+    widths.extend(std::iter::repeat_n(Constraint::Length(col_w as u16), n));
+    // scrolls as the Detail pane does
+    let inner = (area.height as usize).saturating_sub(3);
+    let total = rows.len();
+    let max = total.saturating_sub(inner);
+    app.detail_max.set(max);
+    app.detail_page.set(inner.saturating_sub(1).max(1));
+    let top = app.detail_scroll.min(max);
+    let rows: Vec<TRow> = rows.into_iter().skip(top).collect();
+    let table = Table::new(rows, widths).header(TRow::new(header).style(t.muted)).block(block(
+        format!(
+            " Compare {n} marked · rows {}–{}/{total} · v to leave ",
+            top + 1,
+            (top + inner).min(total)
+        ),
+        focused,
+        t,
+    ));
+    Widget::render(table, area, buf);
 }
 
 fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
@@ -494,6 +696,7 @@ fn footer_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         (Action::WriteShortlist, "shortlist"),
         (Action::NextBay, "bay"),
         (Action::ToggleView, "chart"),
+        (Action::Compare, "compare"),
         (Action::Quit, "quit"),
     ];
     let text: Vec<String> = items
