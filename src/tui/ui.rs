@@ -482,6 +482,9 @@ fn chart(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     chart.render(area, buf);
 }
 
+/// One curve of the camber picture: its value at a point.
+type CamberPart = fn(&crate::camber::CamberPoint) -> f64;
+
 /// Markers of the camber picture: release, erection, final.
 pub const CAMBER_MARKS: [char; 3] = ['.', 'o', '#'];
 
@@ -497,7 +500,7 @@ fn camber(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     }
     let x = |v: f64| display::convert(v / 12.0, "ft", sys).0;
     let y = |v: f64| display::convert(v, "in", sys).0;
-    let parts: [(&str, fn(&crate::camber::CamberPoint) -> f64); 3] = [
+    let parts: [(&str, CamberPart); 3] = [
         ("release", |p| p.release_in),
         ("erection", |p| p.erection_in),
         ("final", |p| p.final_in),
