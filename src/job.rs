@@ -35,6 +35,10 @@ pub struct Job {
     pub notes: Vec<String>,
     /// Display units the job asks for, if it names them.
     pub units: Option<System>,
+    /// The UI's search when the job was saved ("" for none).
+    pub search: String,
+    /// The UI hid the non-viable candidates when the job was saved.
+    pub hide_failing: bool,
     /// Bays.
     pub bays: Vec<Bay>,
     /// Content hash of the file.
@@ -71,6 +75,8 @@ struct RawJobMeta {
     code: Option<S>,
     notes: Option<Vec<S>>,
     units: Option<S>,
+    search: Option<S>,
+    hide_failing: Option<Spanned<bool>>,
 }
 
 const TOP_KEYS: &[&str] = &["job", "defaults", "bay"];
@@ -412,6 +418,8 @@ fn finish(mut cx: Ctx, st: Reading, text: &str, start: usize) -> Result<Job, Pro
             }
         },
     };
+    let search = cx.text(&meta.search, "job", "search");
+    let hide_failing = meta.hide_failing.as_ref().is_some_and(|b| *b.get_ref());
     if cx.rep.has_errors() {
         return Err(Problems(cx.rep.finish()));
     }
@@ -422,6 +430,8 @@ fn finish(mut cx: Ctx, st: Reading, text: &str, start: usize) -> Result<Job, Pro
         code,
         notes,
         units,
+        search,
+        hide_failing,
         bays: st.bays,
         hash: content_hash(text),
         source: Some(text.to_string()),
@@ -515,6 +525,8 @@ impl Job {
             code: "ACI 318-19".into(),
             notes: Vec::new(),
             units: None,
+            search: String::new(),
+            hide_failing: false,
             bays: vec![bay],
             hash: String::new(),
             source: None,
@@ -718,9 +730,26 @@ impl Job {
                     .collect()
             })
             .unwrap_or_default();
-        if self.units != was.units {
-            if let (Some(u), Some(job)) = (self.units, doc.get_mut("job").and_then(|j| j.as_table_mut())) {
-                put(job, "units", u.name().into());
+        if let Some(job) = doc.get_mut("job").and_then(|j| j.as_table_mut()) {
+            if self.units != was.units {
+                if let Some(u) = self.units {
+                    put(job, "units", u.name().into());
+                }
+            }
+            // the UI's view of the job: kept only while it differs from none
+            if self.search != was.search {
+                if self.search.is_empty() {
+                    job.remove("search");
+                } else {
+                    put(job, "search", self.search.as_str().into());
+                }
+            }
+            if self.hide_failing != was.hide_failing {
+                if self.hide_failing {
+                    put(job, "hide_failing", true.into());
+                } else {
+                    job.remove("hide_failing");
+                }
             }
         }
         let bays = doc.get_mut("bay")?.as_array_of_tables_mut()?;
@@ -767,6 +796,12 @@ impl Job {
         }
         if let Some(u) = self.units {
             job.insert("units", toml_edit::value(u.name()));
+        }
+        if !self.search.is_empty() {
+            job.insert("search", toml_edit::value(self.search.as_str()));
+        }
+        if self.hide_failing {
+            job.insert("hide_failing", toml_edit::value(true));
         }
         doc.insert("job", toml_edit::Item::Table(job));
         let mut bays = toml_edit::ArrayOfTables::new();

@@ -354,6 +354,7 @@ impl App {
     /// A new app on a catalog and a job.
     pub fn new(catalog: Catalog, job: Job, job_path: Option<PathBuf>) -> App {
         let units = crate::units::display::choose(None, job.units, catalog.meta.units);
+        let (show_failing, query) = (!job.hide_failing, job.search.clone());
         let mut app = App {
             catalog: Arc::new(catalog),
             job,
@@ -365,8 +366,9 @@ impl App {
             units,
             field: 0,
             selected: 0,
-            show_failing: true,
-            query: String::new(),
+            // the view the job was saved with
+            show_failing,
+            query,
             rows: Vec::new(),
             visible: Vec::new(),
             dirty: false,
@@ -944,6 +946,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         }
         Action::ToggleFailing => {
             app.show_failing = !app.show_failing;
+            app.job.hide_failing = !app.show_failing;
             app.refilter();
             app.say(
                 if app.show_failing {
@@ -1014,6 +1017,8 @@ pub fn update(app: &mut App, action: Action) -> Effect {
         }
         Action::ToggleUnits => {
             app.units = if app.units == Units::Us { Units::Si } else { Units::Us };
+            // the job keeps the units its user works in (saved with it)
+            app.job.units = Some(app.units);
             app.say(
                 if app.units == Units::Us {
                     "US customary display"
@@ -1075,10 +1080,15 @@ fn input(app: &mut App, key: Key) -> Effect {
             match f.key(key) {
                 Outcome::Cancel => {
                     app.query.clear();
+                    app.job.search.clear();
                     app.mode = Mode::Normal;
                     app.say("search cleared", false);
                 }
-                Outcome::Done => app.mode = Mode::Normal,
+                Outcome::Done => {
+                    // kept with the job, saved with its next save
+                    app.job.search = app.query.trim().to_string();
+                    app.mode = Mode::Normal;
+                }
                 Outcome::Edited => {
                     app.query = f.text.clone();
                     app.mode = Mode::Search(f);

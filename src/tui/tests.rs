@@ -625,3 +625,31 @@ fn the_camber_picture_and_the_chart_legend() {
     let s = screen(&a, 100, 30);
     assert!(s.contains("roof Lr or S psf"), "{s}");
 }
+
+#[test]
+fn the_session_is_saved_with_the_job_and_restored() {
+    let mut a = app();
+    // marks, objective, search, filter and units
+    update(&mut a, Action::Mark);
+    update(&mut a, Action::CycleObjective);
+    update(&mut a, Action::Search);
+    press(&mut a, &typed("8in"));
+    press(&mut a, &[Key::Enter]);
+    update(&mut a, Action::ToggleFailing);
+    update(&mut a, Action::ToggleUnits);
+    let text = a.job.save_text(a.units);
+    let job = Job::from_str(&text, "saved.toml").unwrap();
+    let b = App::new(Catalog::from_str(DEMO_US, "demo-us.toml").unwrap(), job, None);
+    assert_eq!(b.units, Units::Si);
+    assert_eq!(b.query, "8in");
+    assert!(!b.show_failing);
+    assert_eq!(b.current_bay().marked, a.current_bay().marked);
+    assert_eq!(b.current_bay().objective, a.current_bay().objective);
+    assert_eq!(b.visible.len(), a.visible.len());
+    // the saved file keeps the rest of the user's text as it was
+    assert!(
+        text.contains("search = \"8in\"") && text.contains("hide_failing = true") && text.contains("units = \"si\""),
+        "{text}"
+    );
+    assert!(text.contains("# plankwise demo job."), "comments kept");
+}
