@@ -1053,6 +1053,17 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                 app.detail_scroll.saturating_sub(page)
             };
         }
+        // Esc leaves what there is to leave, and never quits
+        Action::Unbound(Key::Esc) => {
+            if app.query.is_empty() {
+                app.say("esc: nothing to leave (q quits)", false);
+            } else {
+                app.query.clear();
+                app.job.search.clear();
+                app.refilter();
+                app.say("search cleared", false);
+            }
+        }
         Action::Unbound(key) => {
             let help = app.keymap.key_of(Action::Help).map_or("the help".to_string(), |k| k.to_string());
             app.say(format!("the key {key} does nothing here; {help} lists the keys"), true);

@@ -288,3 +288,118 @@ fn the_shortlist_is_never_written_over_the_open_catalog() {
     assert_eq!(std::fs::read(dir.join("mine.toml")).unwrap(), before);
     std::fs::remove_dir_all(&dir).unwrap();
 }
+
+/// A fresh folder for one terminal test.
+fn scratch(tag: &str) -> std::path::PathBuf {
+    let dir = std::env::temp_dir().join(format!("plankwise-e2e-{tag}-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    dir
+}
+
+#[test]
+fn esc_after_a_search_never_quits() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = scratch("esc");
+    let s = Session::start("esc", &command(&dir));
+    s.wait_for("Candidates 12 viable of 18");
+    s.keys(&["/", "1", "6"]);
+    s.wait_for("/16");
+    s.keys(&["Escape"]);
+    s.wait_for("search cleared");
+    s.keys(&["Escape", "Escape"]);
+    let after = s.wait_for("nothing to leave");
+    assert!(!after.contains("EXITED"), "{after}");
+    assert!(after.contains("Candidates 12 viable of 18"), "{after}");
+    sleep(Duration::from_millis(300));
+    assert!(!s.screen().contains("EXITED"));
+    s.keys(&["q"]);
+    s.wait_for("EXITED 0");
+    std::fs::remove_dir_all(&dir).unwrap();
+}
+
+#[test]
+fn the_detail_pane_scrolls_and_the_compare_view_opens() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = scratch("scroll");
+    let s = Session::start("scroll", &command(&dir));
+    s.wait_for("Detail 1–");
+    // Tab to the Detail pane; j scrolls it, the list stays
+    s.keys(&["Tab", "j", "j", "j"]);
+    let scrolled = s.wait_for("Detail 4–");
+    assert!(scrolled.contains("j/k pgup/pgdn"), "{scrolled}");
+    s.keys(&["PageDown"]);
+    s.wait_for_gone("Detail 4–");
+    // back to the list: mark three and compare them
+    s.keys(&["BTab", "Space", "j", "Space", "j", "Space", "v"]);
+    let cmp = s.wait_for("Compare 3 marked");
+    assert!(cmp.contains("governs"), "{cmp}");
+    assert!(cmp.contains("Flexural strength"), "{cmp}");
+    s.keys(&["v"]);
+    s.wait_for("Detail 1–");
+    s.keys(&["q"]);
+    s.wait_for("quit anyway? y / n");
+    s.keys(&["y"]);
+    s.wait_for("EXITED 0");
+    std::fs::remove_dir_all(&dir).unwrap();
+}
+
+/// An SI session from start to shortlist: the SI demo opens on its job, a
+/// load typed in kPa, a member marked, the shortlist written — in SI only.
+#[test]
+fn an_si_session_end_to_end() {
+    if !have_tmux() {
+        eprintln!("tmux not found: terminal test skipped");
+        return;
+    }
+    let dir = scratch("si");
+    let cat = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("catalog/demo-si.toml");
+    let cmd = format!(
+        "cd {} && TERM=xterm-256color {} {}; echo EXITED $?; sleep 30",
+        dir.display(),
+        env!("CARGO_BIN_EXE_plankwise"),
+        cat.display()
+    );
+    let s = Session::start("si", &cmd);
+    let first = s.wait_for("Quayside library extension");
+    assert!(first.contains("· SI") && first.contains("kPa"), "{first}");
+    // the live load of the first bay, typed in kPa
+    s.keys(&["BTab", "j", "j", "Enter"]);
+    s.wait_for("edit Live");
+    s.keys(&["3", ".", "5", " ", "k", "P", "a", "Enter"]);
+    s.wait_for("3.5 kPa");
+    // mark the best member and write the shortlist
+    s.keys(&["Tab", "Space", "w"]);
+    s.wait_for("shortlist file");
+    s.keys(&["C-u", "s", "i", ".", "t", "x", "t", "Enter"]);
+    s.wait_for("wrote si.txt");
+    let text = std::fs::read_to_string(dir.join("si.txt")).unwrap();
+    assert!(
+        text.contains("L 3.5 kPa") || text.contains("L 4 kPa") || text.contains("kPa"),
+        "{text}"
+    );
+    assert!(text.contains("Units     SI"), "{text}");
+    // no number in a US unit (a word such as "in" after a word is not one)
+    assert!(!text.contains("'-"), "{text}");
+    for us in [" psf", " psi", " ksi", " kip", " klf", " pcf", " in", " ft"] {
+        for (i, _) in text.match_indices(us) {
+            let after = text[i + us.len()..].chars().next().unwrap_or(' ');
+            let number = text[..i].ends_with(|c: char| c.is_ascii_digit());
+            assert!(
+                !(number && !after.is_alphanumeric()),
+                "'{us}' after a number in an SI shortlist:\n{text}"
+            );
+        }
+    }
+    s.keys(&["q"]);
+    s.wait_for("quit anyway? y / n");
+    s.keys(&["y"]);
+    s.wait_for("EXITED 0");
+    std::fs::remove_dir_all(&dir).unwrap();
+}
