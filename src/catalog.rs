@@ -315,12 +315,20 @@ impl Catalog {
 
     /// Validate catalog text; `file` names it in messages.
     pub fn from_str(text: &str, file: &str) -> Result<Catalog, Problems> {
-        validate::catalog(text, file)
+        // a metric catalog's problems are told in metric units
+        let sys = written_in(text);
+        match validate::catalog(text, file) {
+            Ok(mut c) => {
+                c.warnings = Problems(std::mem::take(&mut c.warnings)).localized(sys).0;
+                Ok(c)
+            }
+            Err(p) => Err(p.localized(sys)),
+        }
     }
 
     /// Every problem in the text, warnings included (empty when clean).
     pub fn problems(text: &str, file: &str) -> Vec<Problem> {
-        match validate::catalog(text, file) {
+        match Catalog::from_str(text, file) {
             Ok(c) => c.warnings,
             Err(p) => p.0,
         }

@@ -451,6 +451,11 @@ impl Job {
     /// whole (a 20 000-bay job stays within a few tens of MB); one that does
     /// not split cleanly is parsed whole, with the same messages.
     pub fn from_str(text: &str, file: &str) -> Result<Job, Problems> {
+        // a metric job's problems are told in metric units
+        Job::read(text, file).map_err(|p| p.localized(crate::catalog::written_in(text)))
+    }
+
+    fn read(text: &str, file: &str) -> Result<Job, Problems> {
         if text.len() >= BLOCKS_ABOVE {
             if let Some(r) = Job::from_blocks(text, file) {
                 return r;

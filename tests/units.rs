@@ -259,3 +259,30 @@ proptest! {
         prop_assert!(n > 100);
     }
 }
+
+#[test]
+fn a_metric_file_is_told_its_problems_in_metric_units() {
+    use plankwise::catalog::{Catalog, DEMO_SI};
+    let bad = DEMO_SI.replace(
+        r#"cores = { shape = "circle", count = 6, diameter = "160 mm", spacing = "186 mm" }"#,
+        r#"cores = { shape = "circle", count = 6, diameter = "175 mm", spacing = "186 mm" }"#,
+    );
+    assert_ne!(bad, DEMO_SI);
+    let e = Catalog::from_str(&bad, "si.toml").unwrap_err().to_string();
+    assert!(
+        e.contains("spacing 186.0 mm less core width 175.0 mm leaves 10.9 mm of web, at least 19.0 mm needed"),
+        "{e}"
+    );
+    // the user's own text, quoted, stays as written; a US file stays in US units
+    let e = Catalog::from_str(&DEMO_SI.replacen("\"1190 mm\"", "\"47 in\" ", 1), "si.toml");
+    if let Err(e) = e {
+        assert!(!e.to_string().contains("'1193.8 mm'"), "{e}");
+    }
+    let us = plankwise::catalog::DEMO_US.replacen(
+        r#"diameter = "5.5 in", spacing = "7.5 in""#,
+        r#"diameter = "7.0 in", spacing = "7.5 in""#,
+        1,
+    );
+    let e = Catalog::from_str(&us, "us.toml").unwrap_err().to_string();
+    assert!(e.contains(" in ") && !e.contains(" mm"), "{e}");
+}

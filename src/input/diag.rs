@@ -79,6 +79,36 @@ impl Problems {
     pub fn error_count(&self) -> usize {
         self.0.iter().filter(|p| p.severity == Severity::Error).count()
     }
+
+    /// The messages in the units the file is written in (a metric file's
+    /// problems say mm, not in); the user's own text quoted in a message
+    /// stays as written.
+    pub fn localized(mut self, sys: crate::units::System) -> Problems {
+        for p in &mut self.0 {
+            p.message = localize_message(&p.message, sys);
+        }
+        self
+    }
+}
+
+/// [`crate::units::display::localize`] outside the user's quoted text
+/// ('…'): with an even number of quotes the quoted parts stay as written.
+pub fn localize_message(text: &str, sys: crate::units::System) -> String {
+    use crate::units::display::localize;
+    if sys == crate::units::System::Us {
+        return text.to_string();
+    }
+    let parts: Vec<&str> = text.split('\'').collect();
+    if parts.len() % 2 == 0 {
+        // an odd number of quotes: a feet-inch length or an apostrophe
+        return localize(text, sys);
+    }
+    parts
+        .iter()
+        .enumerate()
+        .map(|(i, p)| if i % 2 == 1 { p.to_string() } else { localize(p, sys) })
+        .collect::<Vec<_>>()
+        .join("'")
 }
 
 /// Turns byte spans of one text into line and column, and collects problems.
