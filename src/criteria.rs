@@ -1039,25 +1039,33 @@ impl Criterion {
 
     /// The allowed values in words, for help and the schema.
     pub fn allowed(&self) -> String {
+        self.allowed_in(System::Us)
+    }
+
+    /// What the criterion allows, its range in the display system `sys`
+    /// (the UI's prompt in SI says "from 0.61 to 61 m").
+    pub fn allowed_in(&self, sys: System) -> String {
+        // a range's ends in the system: the unit's SI form, three figures
+        let r = |range: &Range| -> (String, String, &'static str) {
+            match crate::units::display::find(range.unit).filter(|_| sys == System::Si) {
+                Some(row) => (significant3(range.lo * row.factor), significant3(range.hi * row.factor), row.si),
+                None => (trim_number(range.lo, 6), trim_number(range.hi, 6), range.unit),
+            }
+        };
         match self.form {
             Form::Quantity { q, range } => format!(
                 "{} from {} to {} {}{}",
                 q.name(),
-                trim_number(range.lo, 6),
-                trim_number(range.hi, 6),
-                range.unit,
+                r(&range).0,
+                r(&range).1,
+                r(&range).2,
                 if !self.required && self.default.is_empty() {
                     ", or none"
                 } else {
                     ""
                 }
             ),
-            Form::Number { range } => format!(
-                "a number from {} to {} {}",
-                trim_number(range.lo, 6),
-                trim_number(range.hi, 6),
-                range.unit
-            ),
+            Form::Number { range } => format!("a number from {} to {} {}", r(&range).0, r(&range).1, r(&range).2),
             Form::Count { lo, hi } => format!("a whole number from {lo} to {hi}"),
             Form::Choice(c) => format!("one of: {}", c.join(", ")),
             Form::Flag => "true or false".into(),
@@ -1065,9 +1073,9 @@ impl Criterion {
             Form::QuantityList { q, range } => format!(
                 "a list of \"none\" or {} from {} to {} {}",
                 q.name(),
-                trim_number(range.lo, 6),
-                trim_number(range.hi, 6),
-                range.unit
+                r(&range).0,
+                r(&range).1,
+                r(&range).2
             ),
             Form::ChoiceList(c) => format!("\"all\", or a list of: {}", c.join(", ")),
             Form::Text => "text, no control characters".into(),
@@ -1075,12 +1083,21 @@ impl Criterion {
                 "{}, or {} from {} to {} {}",
                 choices.join(", "),
                 q.name(),
-                trim_number(range.lo, 6),
-                trim_number(range.hi, 6),
-                range.unit
+                r(&range).0,
+                r(&range).1,
+                r(&range).2
             ),
         }
     }
+}
+
+/// A number to three significant figures, trailing zeros dropped.
+fn significant3(v: f64) -> String {
+    if v == 0.0 {
+        return "0".into();
+    }
+    let mag = v.abs().log10().floor() as i32;
+    trim_number(v, (2 - mag).max(0) as usize)
 }
 
 /// A quantity written in the unit style of `like`: feet and inches when it

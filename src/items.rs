@@ -616,6 +616,22 @@ impl ItemKind {
     }
 
     /// An example of the text form.
+    /// An example in the display system: the UI's prompt and the text a
+    /// new row starts with.
+    pub fn example_in(&self, sys: System) -> &'static str {
+        if sys == System::Us {
+            return self.example();
+        }
+        match self.key {
+            "line" => "\"w=9 kN/m, at=2.4 m, kind=dead\"",
+            "point" => "\"p=18 kN, at=3.6 m, across=600 mm, long=200 mm, wide=200 mm, kind=live\"",
+            "strip" => "\"w=7 kN/m, from=0 m, to=6 m, kind=dead\"",
+            "patch" => "\"q=7 kPa, from=3 m, to=5 m, across=0 mm, wide=1200 mm, kind=live\"",
+            _ => "\"from=2.4 m, to=4.2 m, across=300 mm, wide=600 mm, header=3 kN/m\"",
+        }
+    }
+
+    /// An example in US units (the job file reference and the flags).
     pub fn example(&self) -> &'static str {
         match self.key {
             "line" => "\"w=0.6 klf, at=8 ft, kind=dead\"",

@@ -662,13 +662,13 @@ impl App {
     /// What an edit of pane row `i` asks for, in words.
     pub fn row_allowed(&self, i: usize) -> (String, String) {
         match self.pane_row(i) {
-            PaneRow::Criterion(c) => (FIELDS[c].label.to_string(), FIELDS[c].allowed()),
+            PaneRow::Criterion(c) => (FIELDS[c].label.to_string(), FIELDS[c].allowed_in(self.units)),
             PaneRow::Item(k, _) | PaneRow::Add(k) => (
                 k.label.to_string(),
                 format!(
                     "key=value parts ({}), e.g. {}; empty removes",
                     k.parts.iter().map(|p| p.key).collect::<Vec<_>>().join(", "),
-                    k.example()
+                    k.example_in(self.units)
                 ),
             ),
         }
@@ -916,7 +916,7 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             Focus::Bay if app.field_cycles(app.field) => app.cycle_field(1),
             Focus::Bay => {
                 let t = match app.pane_row(app.field) {
-                    PaneRow::Add(k) => k.example().trim_matches('"').to_string(),
+                    PaneRow::Add(k) => k.example_in(app.units).trim_matches('"').to_string(),
                     _ => app.row_text(app.field).1,
                 };
                 app.mode = Mode::Edit(TextField::prefilled(t));

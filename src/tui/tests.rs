@@ -653,3 +653,27 @@ fn the_session_is_saved_with_the_job_and_restored() {
     );
     assert!(text.contains("# plankwise demo job."), "comments kept");
 }
+
+#[test]
+fn prompts_and_examples_follow_the_display_units() {
+    let mut a = app();
+    a.units = Units::Si;
+    a.focus = Focus::Bay;
+    a.field = field("span");
+    update(&mut a, Action::Edit);
+    let s = screen(&a, 200, 40);
+    assert!(s.contains("a length from 0.61 to 61 m"), "{s}");
+    press(&mut a, &[Key::Esc]);
+    // a new point load starts from an SI example that reads back as typed
+    let add = a
+        .pane_rows()
+        .iter()
+        .position(|r| matches!(r, PaneRow::Add(k) if k.key == "point"))
+        .unwrap();
+    a.field = add;
+    update(&mut a, Action::Edit);
+    let Mode::Edit(f) = &a.mode else { panic!("edit") };
+    assert!(f.text.contains("p=18 kN") && f.text.contains("600 mm"), "{}", f.text);
+    press(&mut a, &[Key::Enter]);
+    assert_eq!(a.current_bay().case.placed.len(), 1, "{:?}", a.status);
+}
