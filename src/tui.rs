@@ -596,10 +596,7 @@ impl App {
 
     /// A length as the display units show it.
     pub fn show_len(&self, l: Length) -> String {
-        match self.units {
-            Units::Us => format!("{:.2} ft", l.in_unit("ft")),
-            Units::Si => format!("{:.2} m", l.in_unit("m")),
-        }
+        crate::units::display::span(l.get(), self.units)
     }
 
     /// An area load as the display units show it.
