@@ -865,6 +865,9 @@ pub fn update(app: &mut App, action: Action) -> Effect {
                     } else {
                         app.field.saturating_sub(1)
                     };
+                    // the whole value, however narrow the pane
+                    let (label, text) = app.row_text(app.field);
+                    app.say(format!("{label}: {text}"), false);
                 }
                 Focus::Detail => {
                     // the Detail pane scrolls (the drawing stops at its last page)

@@ -591,6 +591,7 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             .map(|(i, (l, _, _))| Cell::from(cut(&format!("{} {l}", i + 1), col_w))),
     );
     let mut rows: Vec<TRow> = Vec::new();
+    let mut heights: Vec<usize> = Vec::new();
     let fig = |name: &str, f: &dyn Fn(&crate::select::Metrics) -> String| {
         let mut cells = vec![Cell::from(name.to_string())];
         cells.extend(app.compare.iter().map(|(_, m, _)| Cell::from(f(m))));
@@ -610,11 +611,17 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         ))
     }));
     rows.push(TRow::new(verdict));
+    heights.extend([1, 1, 1]);
     for info in crate::checks::REGISTRY.iter().map(|c| &c.info) {
         if !app.compare.iter().any(|(_, _, ev)| ev.check(info.id).is_some()) {
             continue;
         }
-        let mut cells = vec![Cell::from(cut(info.title, name_w))];
+        // the title wraps between words over as many lines as it needs
+        let lines = wrap_words(info.title, name_w);
+        let height = lines.len().max(1) as u16;
+        let mut cells = vec![Cell::from(ratatui::text::Text::from(
+            lines.into_iter().map(Line::from).collect::<Vec<_>>(),
+        ))];
         for (_, _, ev) in &app.compare {
             let gov = ev.governing().info.id == info.id;
             cells.push(match ev.check(info.id) {
@@ -636,24 +643,33 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
                 )),
             });
         }
-        rows.push(TRow::new(cells));
+        rows.push(TRow::new(cells).height(height));
+        heights.push(height as usize);
     }
     let mut widths = vec![Constraint::Length(name_w as u16)];
     widths.extend(std::iter::repeat_n(Constraint::Length(col_w as u16), n));
     // scrolls as the Detail pane does
     let inner = (area.height as usize).saturating_sub(3);
     let total = rows.len();
-    let max = total.saturating_sub(inner);
+    // the first row from which the rest fits: the last the scroll can reach
+    let mut max = total;
+    let mut used = 0;
+    while max > 0 && used + heights[max - 1] <= inner {
+        used += heights[max - 1];
+        max -= 1;
+    }
     app.detail_max.set(max);
     app.detail_page.set(inner.saturating_sub(1).max(1));
     let top = app.detail_scroll.min(max);
     let rows: Vec<TRow> = rows.into_iter().skip(top).collect();
+    // the last row shown whole
+    let (mut last, mut room) = (top, inner);
+    while last < total && heights[last] <= room {
+        room -= heights[last];
+        last += 1;
+    }
     let table = Table::new(rows, widths).header(TRow::new(header).style(t.muted)).block(block(
-        format!(
-            " Compare {n} marked · rows {}–{}/{total} · v to leave ",
-            top + 1,
-            (top + inner).min(total)
-        ),
+        format!(" Compare {n} marked · rows {}–{last}/{total} · v to leave ", top + 1),
         focused,
         t,
     ));
