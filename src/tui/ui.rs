@@ -584,12 +584,14 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         }
     };
     let mut header = vec![Cell::from("")];
-    header.extend(
-        app.compare
-            .iter()
-            .enumerate()
-            .map(|(i, (l, _, _))| Cell::from(cut(&format!("{} {l}", i + 1), col_w))),
-    );
+    header.extend(app.compare.iter().enumerate().map(|(i, (l, _, _))| {
+        // section on one line, pattern (and topping) on the next
+        let (sec, pat) = l.split_once(" / ").unwrap_or((l.as_str(), ""));
+        Cell::from(ratatui::text::Text::from(vec![
+            Line::from(cut(&format!("{} {sec}", i + 1), col_w)),
+            Line::from(cut(&format!("  {pat}"), col_w)),
+        ]))
+    }));
     let mut rows: Vec<TRow> = Vec::new();
     let mut heights: Vec<usize> = Vec::new();
     let fig = |name: &str, f: &dyn Fn(&crate::select::Metrics) -> String| {
@@ -649,7 +651,7 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     let mut widths = vec![Constraint::Length(name_w as u16)];
     widths.extend(std::iter::repeat_n(Constraint::Length(col_w as u16), n));
     // scrolls as the Detail pane does
-    let inner = (area.height as usize).saturating_sub(3);
+    let inner = (area.height as usize).saturating_sub(4);
     let total = rows.len();
     // the first row from which the rest fits: the last the scroll can reach
     let mut max = total;
@@ -668,11 +670,13 @@ fn compare(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         room -= heights[last];
         last += 1;
     }
-    let table = Table::new(rows, widths).header(TRow::new(header).style(t.muted)).block(block(
-        format!(" Compare {n} marked · rows {}–{last}/{total} · v to leave ", top + 1),
-        focused,
-        t,
-    ));
+    let table = Table::new(rows, widths)
+        .header(TRow::new(header).height(2).style(t.muted))
+        .block(block(
+            format!(" Compare {n} marked · rows {}–{last}/{total} · v to leave ", top + 1),
+            focused,
+            t,
+        ));
     Widget::render(table, area, buf);
 }
 
