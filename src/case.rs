@@ -261,6 +261,8 @@ pub struct DesignCase {
     pub class_allowed: ServiceClass,
     /// Average ambient relative humidity, %.
     pub humidity: f64,
+    /// Age of the members at erection, days (camber with age).
+    pub erection_age: f64,
     /// Loss method.
     pub losses: LossMethod,
     /// Required fire rating, hours (None: not required).
@@ -283,6 +285,8 @@ pub const DEFAULT_BEARING_IN: f64 = 4.0;
 pub const DEFAULT_SUSTAINED_LIVE: f64 = 0.3;
 /// Default relative humidity, %.
 pub const DEFAULT_HUMIDITY: f64 = 70.0;
+/// Default age at erection, days (common practice, no source).
+pub const DEFAULT_ERECTION_AGE: f64 = 30.0;
 
 impl DesignCase {
     /// A floor case with the defaults and no loads.
@@ -307,6 +311,7 @@ impl DesignCase {
             member_use: Use::Floor,
             class_allowed: ServiceClass::U,
             humidity: DEFAULT_HUMIDITY,
+            erection_age: DEFAULT_ERECTION_AGE,
             losses: LossMethod::Zia,
             fire_rating: None,
             restrained: false,

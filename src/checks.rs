@@ -608,6 +608,9 @@ pub struct Evaluation {
     pub member_length_in: f64,
     /// Camber and deflections.
     pub camber: crate::camber::Camber,
+    /// Camber with age by ACI 209R-92 and the age-adjusted effective
+    /// modulus method, beside the multipliers of `camber`.
+    pub aged: crate::camber::AgedCamber,
     /// Fire assessment.
     pub fire: fire::Fire,
     /// Natural frequency, Hz.
@@ -1495,6 +1498,7 @@ fn results(an: &Analysis) -> Evaluation {
         transfer_length_in: an.member.ltr,
         member_length_in: an.member.lm,
         camber: an.camber,
+        aged: aged_camber(&an.member, &an.camber),
         fire: an.fire.clone(),
         frequency_hz: an.frequency_hz,
         stations: Vec::new(),
@@ -1502,6 +1506,22 @@ fn results(an: &Analysis) -> Evaluation {
         openings: Vec::new(),
         checks,
     }
+}
+
+/// The conditions of the precast concrete with age: steam cured (the
+/// usual precast practice: common practice, no source), the bay's humidity,
+/// the section's volume-to-surface ratio.
+pub fn aging_conditions(m: &Member) -> crate::aging::Conditions {
+    crate::aging::Conditions {
+        curing: crate::aging::Curing::Steam,
+        humidity: m.case.humidity,
+        vs_in: m.bare.vs_ratio_in,
+    }
+}
+
+/// The member's camber with age at the bay's erection age.
+fn aged_camber(m: &Member, cam: &crate::camber::Camber) -> crate::camber::AgedCamber {
+    crate::camber::aged(&crate::camber::aged_inputs(m, cam), m.case.erection_age, &aging_conditions(m))
 }
 
 /// What the output says of one unit analysed: which it is, how its

@@ -615,6 +615,25 @@ pub const CRITERIA: &[Criterion] = &[
         set: |b, v| b.case.humidity = num(&v),
     },
     Criterion {
+        key: "erection_age",
+        label: "Erection age",
+        flag: Some("erection-age"),
+        help: "age of the members when erected, days (camber with age by ACI 209R-92; 30 by common practice, no source)",
+        form: Form::Number {
+            range: Range {
+                lo: 3.0,
+                hi: 720.0,
+                unit: "days",
+            },
+        },
+        default: "30",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| Value::Num(Some(b.case.erection_age)),
+        set: |b, v| b.case.erection_age = num(&v),
+    },
+    Criterion {
         key: "lump_loss",
         label: "Lump-sum loss",
         flag: Some("lump-loss"),

@@ -13,6 +13,7 @@
 
 #![forbid(unsafe_code)]
 
+pub mod aging;
 pub mod bay;
 pub mod beam;
 pub mod camber;

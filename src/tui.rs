@@ -145,6 +145,8 @@ pub enum View {
     Chart,
     /// Its camber along the member at release, erection and final.
     Camber,
+    /// Its midspan camber against age (ACI 209R-92), with the multipliers' values.
+    CamberAge,
     /// The marked candidates side by side, every check a row.
     Compare,
 }
@@ -334,6 +336,8 @@ pub struct App {
     pub chart: Vec<(String, Vec<LoadLimit>)>,
     /// The camber picture of the selected candidate (when that view shows).
     pub camber: Vec<crate::camber::CamberPoint>,
+    /// Its midspan camber against age, days (when that view shows).
+    pub camber_age: Vec<(f64, f64)>,
     /// The marked candidates of the bay, evaluated, for the compare view
     /// (label, weight, depth, evaluation).
     pub compare: Vec<(String, Metrics, Evaluation)>,
@@ -380,6 +384,7 @@ impl App {
             detail_page: std::cell::Cell::new(1),
             chart: Vec::new(),
             camber: Vec::new(),
+            camber_age: Vec::new(),
             compare: Vec::new(),
             mono: false,
             background: None,
@@ -517,6 +522,7 @@ impl App {
         match self.view {
             View::Chart => self.refresh_chart(),
             View::Camber => self.refresh_camber(),
+            View::CamberAge => self.refresh_camber_age(),
             View::Compare => self.refresh_compare(),
             View::Detail => {}
         }
@@ -536,6 +542,29 @@ impl App {
         let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
         let m = crate::member::Member::new(e.section, e.pattern, e.mix, &case);
         self.camber = crate::camber::profile(&m, &ev.camber, App::CAMBER_POINTS);
+    }
+
+    /// The selected candidate's midspan camber from release to the final age.
+    pub fn refresh_camber_age(&mut self) {
+        let (Some(r), Some(ev)) = (self.selected_row().cloned(), self.detail.as_ref()) else {
+            self.camber_age.clear();
+            return;
+        };
+        let bay = self.current_bay().clone();
+        let e = self.entry_of(&r);
+        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        let m = crate::member::Member::new(e.section, e.pattern, e.mix, &case);
+        let x = crate::camber::aged_inputs(&m, &ev.camber);
+        let cond = crate::checks::aging_conditions(&m);
+        let te = ev.aged.erection_age_days;
+        // log-spaced ages, with the erection age on both sides of its step
+        let mut ages: Vec<f64> = (0..=40).map(|k| 10f64.powf(4.0 * k as f64 / 40.0)).collect();
+        ages.extend([te, te + 1e-6]);
+        ages.sort_by(f64::total_cmp);
+        self.camber_age = ages
+            .into_iter()
+            .map(|t| (t, crate::camber::camber_at_age(&x, te, &cond, t)))
+            .collect();
     }
 
     /// The most candidates the compare view shows.
@@ -961,11 +990,13 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             app.view = match app.view {
                 View::Detail => View::Chart,
                 View::Chart => View::Camber,
-                View::Camber | View::Compare => View::Detail,
+                View::Camber => View::CamberAge,
+                View::CamberAge | View::Compare => View::Detail,
             };
             match app.view {
                 View::Chart => app.refresh_chart(),
                 View::Camber => app.refresh_camber(),
+                View::CamberAge => app.refresh_camber_age(),
                 _ => {}
             }
         }

@@ -139,6 +139,9 @@ pub struct CheckJson {
     pub defl_live_in: f64,
     /// Deflection after attachment of nonstructural elements (downward), in.
     pub defl_after_attach_in: f64,
+    /// Camber with age (ACI 209R-92 creep, age-adjusted effective modulus):
+    /// release, erection, topping placed and final, in, with the ages in days.
+    pub aged_camber: crate::camber::AgedCamber,
     /// Fire rating reached, h (null when a criterion is not rated).
     pub fire_rating_h: Option<f64>,
     /// Rating by heat transmission, h.
@@ -236,6 +239,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         net_final_with_live_in: ev.camber.net_final_with_live_in,
         defl_live_in: ev.camber.defl_live_in,
         defl_after_attach_in: ev.camber.defl_after_attach_in,
+        aged_camber: ev.aged,
         fire_rating_h: ev.fire.rating_h,
         fire_rating_thickness_h: ev.fire.rating_thickness_h,
         equiv_thickness_in: ev.fire.equiv_thickness_in,
@@ -413,6 +417,30 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
         } else {
             ""
         }
+    )?;
+    let a = &ev.aged;
+    writeln!(
+        w,
+        "With age   release {} {len_u}; erection at {:.0} d {} {len_u} (multipliers {}, {}); topping placed {} {len_u}; final {} {len_u} (multipliers {}, {})",
+        signed(a.release_in),
+        a.erection_age_days,
+        signed(a.erection_in),
+        signed(c.camber_erection_in),
+        signed(c.camber_erection_in - a.erection_in) + " apart",
+        signed(a.topping_placed_in),
+        signed(a.final_in),
+        signed(c.camber_final_in),
+        signed(c.camber_final_in - a.final_in) + " apart"
+    )?;
+    writeln!(
+        w,
+        "           ACI 209R-92 creep (steam cured, released at {:.0} d, RH {:.0} %; φ {:.2} at erection, {:.2} final) by the age-adjusted effective modulus (χ 0.8, from memory); loss reached {:.1} % then {:.1} % of fpo",
+        a.release_age_days,
+        case.humidity,
+        a.creep_erection,
+        a.creep_final,
+        100.0 * a.loss_erection,
+        100.0 * a.loss_final
     )?;
     let f = &ev.fire;
     writeln!(

@@ -215,6 +215,8 @@ fn toggles_objective_bays_and_help() {
     update(&mut a, Action::ToggleView);
     assert_eq!(a.view, View::Camber);
     update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::CamberAge);
+    update(&mut a, Action::ToggleView);
     assert_eq!(a.view, View::Detail);
 }
 
@@ -615,6 +617,17 @@ fn the_camber_picture_and_the_chart_legend() {
     let s = screen(&a, 100, 30);
     assert!(s.contains("Camber along the span"), "{s}");
     assert!(s.contains(&format!("# final {:.2} in", ev.camber.camber_final_in)), "{s}");
+    // camber with age: the curve passes through the values the report prints
+    update(&mut a, Action::ToggleView);
+    assert_eq!(a.view, View::CamberAge);
+    let ev = a.detail.as_ref().unwrap();
+    let te = ev.aged.erection_age_days;
+    let at = |age: f64| a.camber_age.iter().find(|p| (p.0 - age).abs() < 1e-9).map(|p| p.1);
+    assert!((at(te).unwrap() - ev.aged.erection_in).abs() < 1e-12);
+    assert!((at(10_000.0).unwrap() - ev.aged.final_in).abs() < 1e-12);
+    let s = screen(&a, 100, 30);
+    assert!(s.contains("Camber at midspan with age · erected at 30 d"), "{s}");
+    assert!(s.contains("ACI 209R-92: erection") && s.contains("# multipliers: erection"), "{s}");
     update(&mut a, Action::ToggleView);
     assert_eq!(a.view, View::Detail);
     // a roof bay's chart varies the roof load

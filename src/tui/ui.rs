@@ -54,6 +54,7 @@ pub fn render(app: &App, area: Rect, buf: &mut Buffer, table: &mut TableState) {
         View::Detail => detail(app, lower, buf, &t),
         View::Chart => chart(app, lower, buf, &t),
         View::Camber => camber(app, lower, buf, &t),
+        View::CamberAge => camber_age(app, lower, buf, &t),
         View::Compare => compare(app, lower, buf, &t),
     }
     status_line(app, status, buf, &t);
@@ -307,6 +308,15 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             ev.frequency_hz
         ))
         .style(t.muted),
+        Line::from(format!(
+            "camber with age (ACI 209R-92): erection at {:.0} d {} · final {} (multipliers {} / {})",
+            ev.aged.erection_age_days,
+            display::with_unit(ev.aged.erection_in, "in", 2, sys),
+            display::with_unit(ev.aged.final_in, "in", 2, sys),
+            display::with_unit(c.camber_erection_in, "in", 2, sys),
+            display::with_unit(c.camber_final_in, "in", 2, sys)
+        ))
+        .style(t.muted),
     ];
     // which units the bay's openings cut, for this member's width
     if let Some(e) = app.selected_entry() {
@@ -549,6 +559,80 @@ fn camber(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
                 .title(format!("from support {}", display::unit("ft", sys)))
                 .bounds([xs.0, xs.1])
                 .labels(ticks(xs.0, xs.1, 4, xp)),
+        )
+        .y_axis(
+            Axis::default()
+                .title(format!("camber {}", display::unit("in", sys)))
+                .bounds([y0, y1])
+                .labels(ticks(y0, y1, 4, yp)),
+        );
+    chart.render(area, buf);
+}
+
+/// The midspan camber against age (log scale), by ACI 209R-92 and the
+/// age-adjusted effective modulus, with the multipliers' values marked.
+fn camber_age(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
+    use ratatui::widgets::LegendPosition;
+    let focused = app.focus == Focus::Detail;
+    let sys = app.units;
+    let Some(ev) = app.detail.as_ref().filter(|_| !app.camber_age.is_empty()) else {
+        Paragraph::new("no candidate selected")
+            .block(block(" Camber with age ".into(), focused, t))
+            .render(area, buf);
+        return;
+    };
+    let y = |v: f64| display::convert(v, "in", sys).0;
+    let curve: Vec<(f64, f64)> = app.camber_age.iter().map(|&(a, c)| (a.log10(), y(c))).collect();
+    let c = &ev.camber;
+    let a = &ev.aged;
+    let marks = vec![
+        (a.release_age_days.log10(), y(c.camber_release_in)),
+        (a.erection_age_days.log10(), y(c.camber_erection_in)),
+        (crate::aging::FINAL_AGE_DAYS.log10(), y(c.camber_final_in)),
+    ];
+    let sets = vec![
+        Dataset::default()
+            .name(format!(
+                "o ACI 209R-92: erection {}, final {}",
+                display::with_unit(a.erection_in, "in", 2, sys),
+                display::with_unit(a.final_in, "in", 2, sys)
+            ))
+            .marker(Marker::Custom('o'))
+            .graph_type(GraphType::Line)
+            .style(t.focus)
+            .data(&curve),
+        Dataset::default()
+            .name(format!(
+                "# multipliers: erection {}, final {}",
+                display::with_unit(c.camber_erection_in, "in", 2, sys),
+                display::with_unit(c.camber_final_in, "in", 2, sys)
+            ))
+            .marker(Marker::Custom('#'))
+            .graph_type(GraphType::Scatter)
+            .style(t.error)
+            .data(&marks),
+    ];
+    let (lo, hi) = curve
+        .iter()
+        .chain(&marks)
+        .fold((0.0f64, 0.0f64), |(lo, hi), p| (lo.min(p.1), hi.max(p.1)));
+    // room above the curve for the legend
+    let range = (hi - lo).max(1e-3);
+    let (y0, y1) = (lo - 0.15 * range, hi + 0.9 * range);
+    let yp = if sys == Units::Us { 2 } else { 1 };
+    let chart = Chart::new(sets)
+        .block(block(
+            format!(" Camber at midspan with age · erected at {:.0} d ", a.erection_age_days),
+            focused,
+            t,
+        ))
+        .legend_position(Some(LegendPosition::TopLeft))
+        .hidden_legend_constraints((Constraint::Percentage(100), Constraint::Percentage(100)))
+        .x_axis(
+            Axis::default()
+                .title("age, days (log)")
+                .bounds([0.0, 4.0])
+                .labels(["1", "10", "100", "1000", "10000"]),
         )
         .y_axis(
             Axis::default()
