@@ -263,6 +263,8 @@ pub struct DesignCase {
     pub humidity: f64,
     /// Age of the members at erection, days (camber with age).
     pub erection_age: f64,
+    /// Width of the bearing (pad) at each support, when the bay gives it.
+    pub pad_width: Option<Length>,
     /// Loss method.
     pub losses: LossMethod,
     /// Required fire rating, hours (None: not required).
@@ -312,6 +314,7 @@ impl DesignCase {
             class_allowed: ServiceClass::U,
             humidity: DEFAULT_HUMIDITY,
             erection_age: DEFAULT_ERECTION_AGE,
+            pad_width: None,
             losses: LossMethod::Zia,
             fire_rating: None,
             restrained: false,

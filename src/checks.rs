@@ -7,6 +7,8 @@
 //!
 //! Sign convention for stresses: **compression positive, tension negative**.
 
+pub mod bearing_length;
+pub mod bearing_stress;
 pub mod cover;
 pub mod deflection;
 pub mod fire;
@@ -52,6 +54,8 @@ pub enum Group {
     Fire,
     /// Cover.
     Cover,
+    /// Bearing length and strength.
+    Bearing,
     /// Production limits.
     Production,
 }
@@ -319,6 +323,14 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: spacing::INFO,
         run: spacing::run,
+    },
+    Check {
+        info: bearing_length::INFO,
+        run: bearing_length::run,
+    },
+    Check {
+        info: bearing_stress::INFO,
+        run: bearing_stress::run,
     },
     Check {
         info: production_length::INFO,

@@ -460,6 +460,31 @@ pub const CRITERIA: &[Criterion] = &[
         set: |b, v| b.case.bearing = Length::new(num(&v)),
     },
     Criterion {
+        key: "pad_width",
+        label: "Pad width",
+        flag: Some("pad-width"),
+        help: "width of the bearing at each support (ACI 318-19 22.8 bearing area = width × (bearing − ½ in)); default the unit's width, or a double tee's stems",
+        form: Form::Quantity {
+            q: LENGTH,
+            range: Range {
+                lo: 1.0,
+                hi: 240.0,
+                unit: "in",
+            },
+        },
+        default: "",
+        required: false,
+        inherit: true,
+        units: ("in", "mm"),
+        get: |b| Value::Num(b.case.pad_width.map(|w| w.get())),
+        set: |b, v| {
+            b.case.pad_width = match v {
+                Value::Num(Some(x)) => Some(Length::new(x)),
+                _ => None,
+            }
+        },
+    },
+    Criterion {
         key: "overhang_left",
         label: "Overhang (L)",
         flag: Some("overhang-left"),
