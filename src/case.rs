@@ -265,6 +265,14 @@ pub struct DesignCase {
     pub erection_age: f64,
     /// Width of the bearing (pad) at each support, when the bay gives it.
     pub pad_width: Option<Length>,
+    /// Whether stripping, storage, transport and erection are checked.
+    pub handling: bool,
+    /// How the member is lifted.
+    pub rigging: crate::handling::Rigging,
+    /// Lift points from each end, when the bay gives them.
+    pub lift_at: Option<Length>,
+    /// Truck bunks from each end, when the bay gives them.
+    pub bunk_at: Option<Length>,
     /// Loss method.
     pub losses: LossMethod,
     /// Required fire rating, hours (None: not required).
@@ -315,6 +323,10 @@ impl DesignCase {
             humidity: DEFAULT_HUMIDITY,
             erection_age: DEFAULT_ERECTION_AGE,
             pad_width: None,
+            handling: true,
+            rigging: crate::handling::Rigging::TwoPoint,
+            lift_at: None,
+            bunk_at: None,
             losses: LossMethod::Zia,
             fire_rating: None,
             restrained: false,

@@ -13,6 +13,7 @@ pub mod cover;
 pub mod deflection;
 pub mod fire;
 pub mod flexure;
+pub mod handling;
 pub mod hogging;
 pub mod horizontal_shear;
 pub mod jacking;
@@ -323,6 +324,10 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: spacing::INFO,
         run: spacing::run,
+    },
+    Check {
+        info: handling::INFO,
+        run: handling::run,
     },
     Check {
         info: bearing_length::INFO,
@@ -1242,7 +1247,9 @@ impl<'a> Prepared<'a> {
             let an = self.analysis(i, q);
             for r in REGISTRY.iter().filter(|c| ids.contains(&c.info.id)).filter_map(|c| (c.run)(&an)) {
                 match out.iter_mut().find(|o| o.0 == r.info.id) {
-                    Some(o) => o.1 = o.1.max(r.ratio),
+                    // the worst as merge keeps it: a later unit only when higher by more than rounding
+                    Some(o) if r.ratio > o.1 + 1e-12 => o.1 = r.ratio,
+                    Some(_) => {}
                     None => out.push((r.info.id, r.ratio)),
                 }
             }

@@ -95,6 +95,8 @@ enum Command {
     },
     /// Run every ACI 318-19 check on one catalog entry for one span and set of loads.
     Check(Box<CheckArgs>),
+    /// One entry before service: stripping, yard storage, transport and erection, stage by stage.
+    Handling(Box<CheckArgs>),
     /// Rank every catalog entry for each bay of a job (or one bay given by flags).
     Rank(Box<select::RankArgs>),
     /// Largest live load an entry carries over a range of spans, and its longest span.
@@ -163,6 +165,7 @@ pub fn run() -> i32 {
             units,
         }) => sections(file, json, topping.as_deref(), topping_mix.as_deref(), units),
         Some(Command::Check(a)) => check(&a),
+        Some(Command::Handling(a)) => handling(&a),
         Some(Command::Rank(a)) => select::rank(&a),
         Some(Command::Envelope(a)) => select::envelope(&a),
         Some(Command::Spanmap(a)) => select::spanmap(&a),
@@ -456,6 +459,100 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
         );
         report::check::write_table(&mut out, &title, &case, &ev, sys)?;
     }
+    Ok(OK)
+}
+
+/// `plankwise handling`: the stages of one entry before service.
+fn handling(a: &CheckArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let (section, pattern) = find_entry(&cat, &a.section, &a.pattern)?;
+    let bay = a.bay.to_bay(&cat)?;
+    let case = plankwise::select::case_for(&bay, bay.toppings[0], &plankwise::select::topping_mix(&cat, &bay));
+    let m = plankwise::member::Member::new(section, pattern, section.mix(&cat), &case);
+    let setup = plankwise::handling::Setup {
+        rigging: case.rigging,
+        lift_at: case.lift_at.map(|l| l.get()),
+        bunk_at: case.bunk_at.map(|l| l.get()),
+        erection_age: case.erection_age,
+    };
+    let stages = plankwise::handling::stages(&m, &setup);
+    let sys = a.units.system(None, &cat);
+    let mut out = io::stdout().lock();
+    if a.json {
+        write_json(&mut out, &stages, sys)?;
+        return Ok(OK);
+    }
+    writeln!(
+        out,
+        "{} — {} ({} / {}), member {} long; {}",
+        section.designation,
+        pattern.designation,
+        section.id,
+        pattern.id,
+        display::span(m.lm, sys),
+        if case.handling {
+            "handling checked"
+        } else {
+            "handling marked not checked for this bay (reported only)"
+        }
+    )?;
+    let su = display::unit("psi", sys);
+    writeln!(
+        out,
+        "{:<13} {:>5} {:>8} {:>5} {:>22} {:>9} {:>9} {:>17} {:>17} {:>6}",
+        "stage",
+        "age d",
+        format!("f'c {su}"),
+        "×w",
+        format!("supports from end {}", display::unit("ft", sys)),
+        format!("M+ {}", display::unit("kip-ft", sys)),
+        format!("M- {}", display::unit("kip-ft", sys)),
+        "tension / limit",
+        "compr. / limit",
+        "ratio"
+    )?;
+    let (e0, _) = m.ends;
+    for st in &stages {
+        let from_end: Vec<String> = st
+            .supports_in
+            .iter()
+            .filter(|&&x| x - e0 <= 0.5 * m.lm + 1e-9)
+            .map(|x| display::num((x - e0) / 12.0, "ft", 2, sys))
+            .collect();
+        writeln!(
+            out,
+            "{:<13} {:>5.0} {:>8} {:>5.1} {:>22} {:>9} {:>9} {:>17} {:>17} {:>6.3}",
+            st.name,
+            st.age_days,
+            display::num(st.fc_psi, "psi", 0, sys),
+            st.multiplier,
+            from_end.join(", "),
+            display::num(st.m_pos_lbin / 12000.0, "kip-ft", 2, sys),
+            display::num(st.m_neg_lbin / 12000.0, "kip-ft", 2, sys),
+            format!(
+                "{} / -{}",
+                display::num(st.tension_psi, "psi", 0, sys),
+                display::num(st.tension_limit_psi, "psi", 0, sys)
+            ),
+            format!(
+                "{} / {}",
+                display::num(st.compression_psi, "psi", 0, sys),
+                display::num(st.compression_limit_psi, "psi", 0, sys)
+            ),
+            st.ratio()
+        )?;
+    }
+    writeln!(out)?;
+    for st in &stages {
+        writeln!(out, "  {}: ×{} — {}", st.name, st.multiplier, st.multiplier_source)?;
+    }
+    writeln!(
+        out,
+        "  limits (PCI, from memory): tension 5λ√f'c(t) (no cracking), compression 0.60 f'c(t); f'c after release by ACI 209R-92 (steam cured), never below f'ci; stresses compression positive"
+    )?;
+    writeln!(out)?;
+    report::write_cautions(&mut out)?;
     Ok(OK)
 }
 

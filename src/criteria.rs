@@ -188,6 +188,8 @@ const OBJECTIVES: &[&str] = &["lightest", "shallowest", "least-steel", "cheapest
 const FAMILIES: &[&str] = &["hollow-core", "double-tee", "generic"];
 const SHARES: &[&str] = &["whole", "rule"];
 const STEM_SHARES: &[&str] = &["lever", "one"];
+const HANDLING: &[&str] = &["checked", "not-checked"];
+const RIGGINGS: &[&str] = &["two-point", "four-point"];
 
 /// The area-load range every load criterion allows, psf.
 const LOAD_RANGE: Range = Range {
@@ -479,6 +481,94 @@ pub const CRITERIA: &[Criterion] = &[
         get: |b| Value::Num(b.case.pad_width.map(|w| w.get())),
         set: |b, v| {
             b.case.pad_width = match v {
+                Value::Num(Some(x)) => Some(Length::new(x)),
+                _ => None,
+            }
+        },
+    },
+    Criterion {
+        key: "handling",
+        label: "Handling",
+        flag: Some("handling"),
+        help: "check stripping, yard storage, transport and erection (PCI handling multipliers and limits, from memory), or leave them to the producer",
+        form: Form::Choice(HANDLING),
+        default: "checked",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| Value::Pick(if b.case.handling { 0 } else { 1 }),
+        set: |b, v| b.case.handling = pick(&v) == 0,
+    },
+    Criterion {
+        key: "rigging",
+        label: "Rigging",
+        flag: Some("rigging"),
+        help: "how the member is lifted: two-point (slings at 0.207 L from each end) or four-point (equalising, 0.104 L and 0.396 L)",
+        form: Form::Choice(RIGGINGS),
+        default: "two-point",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| {
+            Value::Pick(if b.case.rigging == crate::handling::Rigging::FourPoint {
+                1
+            } else {
+                0
+            })
+        },
+        set: |b, v| {
+            b.case.rigging = if pick(&v) == 1 {
+                crate::handling::Rigging::FourPoint
+            } else {
+                crate::handling::Rigging::TwoPoint
+            }
+        },
+    },
+    Criterion {
+        key: "lift_at",
+        label: "Lift points",
+        flag: Some("lift-at"),
+        help: "lift points (and dunnage) from each end of the member, instead of the rigging's own",
+        form: Form::Quantity {
+            q: LENGTH,
+            range: Range {
+                lo: 0.0,
+                hi: 60.0,
+                unit: "ft",
+            },
+        },
+        default: "",
+        required: false,
+        inherit: true,
+        units: ("ft-in", "m"),
+        get: |b| Value::Num(b.case.lift_at.map(|w| w.get())),
+        set: |b, v| {
+            b.case.lift_at = match v {
+                Value::Num(Some(x)) => Some(Length::new(x)),
+                _ => None,
+            }
+        },
+    },
+    Criterion {
+        key: "bunk_at",
+        label: "Truck bunks",
+        flag: Some("bunk-at"),
+        help: "truck bunks from each end of the member in transport, instead of the lift points",
+        form: Form::Quantity {
+            q: LENGTH,
+            range: Range {
+                lo: 0.0,
+                hi: 60.0,
+                unit: "ft",
+            },
+        },
+        default: "",
+        required: false,
+        inherit: true,
+        units: ("ft-in", "m"),
+        get: |b| Value::Num(b.case.bunk_at.map(|w| w.get())),
+        set: |b, v| {
+            b.case.bunk_at = match v {
                 Value::Num(Some(x)) => Some(Length::new(x)),
                 _ => None,
             }

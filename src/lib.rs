@@ -23,6 +23,7 @@ pub mod checks;
 pub mod criteria;
 pub mod files;
 pub mod fire;
+pub mod handling;
 pub mod input;
 pub mod items;
 pub mod job;
