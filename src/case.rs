@@ -263,6 +263,12 @@ pub struct DesignCase {
     pub humidity: f64,
     /// Age of the members at erection, days (camber with age).
     pub erection_age: f64,
+    /// How much older the oldest members may be at erection, days (units
+    /// cast weeks apart set side by side).
+    pub erection_spread: f64,
+    /// The largest camber difference allowed between adjacent units at
+    /// erection, in.
+    pub camber_limit: Length,
     /// Width of the bearing (pad) at each support, when the bay gives it.
     pub pad_width: Option<Length>,
     /// Whether stripping, storage, transport and erection are checked.
@@ -295,6 +301,9 @@ pub const DEFAULT_BEARING_IN: f64 = 4.0;
 pub const DEFAULT_SUSTAINED_LIVE: f64 = 0.3;
 /// Default relative humidity, %.
 pub const DEFAULT_HUMIDITY: f64 = 70.0;
+/// Default limit on the camber difference between adjacent units at
+/// erection, in (common practice, no source).
+pub const DEFAULT_CAMBER_LIMIT_IN: f64 = 0.75;
 /// Default age at erection, days (common practice, no source).
 pub const DEFAULT_ERECTION_AGE: f64 = 30.0;
 
@@ -322,6 +331,8 @@ impl DesignCase {
             class_allowed: ServiceClass::U,
             humidity: DEFAULT_HUMIDITY,
             erection_age: DEFAULT_ERECTION_AGE,
+            erection_spread: 0.0,
+            camber_limit: Length::new(DEFAULT_CAMBER_LIMIT_IN),
             pad_width: None,
             handling: true,
             rigging: crate::handling::Rigging::TwoPoint,

@@ -11,6 +11,7 @@ pub mod bearing_length;
 pub mod bearing_stress;
 pub mod cover;
 pub mod deflection;
+pub mod differential_camber;
 pub mod fire;
 pub mod flexure;
 pub mod handling;
@@ -306,6 +307,10 @@ pub const REGISTRY: &[Check] = &[
         run: tip::run,
     },
     Check {
+        info: differential_camber::INFO,
+        run: differential_camber::run,
+    },
+    Check {
         info: vibration::INFO,
         run: vibration::run,
     },
@@ -585,6 +590,8 @@ pub struct Analysis<'a> {
     pub unit: String,
     /// Camber and deflections.
     pub camber: crate::camber::Camber,
+    /// Camber with age (ACI 209R-92, age-adjusted effective modulus).
+    pub aged: crate::camber::AgedCamber,
     /// Fire assessment.
     pub fire: fire::Fire,
     /// Natural frequency, Hz.
@@ -628,6 +635,9 @@ pub struct Evaluation {
     /// Camber with age by ACI 209R-92 and the age-adjusted effective
     /// modulus method, beside the multipliers of `camber`.
     pub aged: crate::camber::AgedCamber,
+    /// The camber at erection to expect (age-adjusted method), least and
+    /// greatest over the erection ages of the bay and the units analysed, in.
+    pub camber_range: (f64, f64),
     /// Fire assessment.
     pub fire: fire::Fire,
     /// Natural frequency, Hz.
@@ -1174,6 +1184,7 @@ fn complete<'a>(
         shear_zones,
         unit,
         camber: crate::camber::Camber::default(),
+        aged: crate::camber::AgedCamber::default(),
         fire,
         frequency_hz,
         brief,
@@ -1190,6 +1201,7 @@ fn complete<'a>(
     let f_live = eff.m_live.max(eff.m_roof) / s_live;
     let class = service::class_of(ft_total, m.mix.fc.get());
     an.camber = crate::camber::camber(m, class, ft_total, f_live);
+    an.aged = aged_camber(&an.member, &an.camber);
     an
 }
 
@@ -1451,7 +1463,10 @@ pub fn merge(mut evs: Vec<Evaluation>) -> Evaluation {
         }
         out.service_class = out.service_class.max(ev.service_class);
         out.units.extend(ev.units);
+        out.camber_range = (out.camber_range.0.min(ev.camber_range.0), out.camber_range.1.max(ev.camber_range.1));
     }
+    // units side by side: the spread of their cambers at erection
+    differential_camber::across_units(&mut out);
     out.checks.sort_by_key(|c| REGISTRY.iter().position(|r| r.info.id == c.info.id));
     out.viable = out.checks.iter().all(|c| c.pass);
     out.governing = governing_of(&out.checks);
@@ -1517,7 +1532,8 @@ fn results(an: &Analysis) -> Evaluation {
         transfer_length_in: an.member.ltr,
         member_length_in: an.member.lm,
         camber: an.camber,
-        aged: aged_camber(&an.member, &an.camber),
+        aged: an.aged,
+        camber_range: differential_camber::range(an),
         fire: an.fire.clone(),
         frequency_hz: an.frequency_hz,
         stations: Vec::new(),

@@ -91,3 +91,81 @@ fn the_check_table_shows_both_methods_side_by_side() {
     assert!(text.contains("erection at 30 d") && text.contains("(multipliers"), "{text}");
     assert!(text.contains("ACI 209R-92 creep (steam cured"), "{text}");
 }
+
+fn check(v: &serde_json::Value, id: &str) -> serde_json::Value {
+    v["checks"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|c| c["id"] == id)
+        .unwrap_or_else(|| panic!("{id}"))
+        .clone()
+}
+
+#[test]
+fn units_of_other_ages_or_strands_camber_apart() {
+    // one unit, one age: no difference
+    let j = check_json(&[]);
+    assert_eq!(check(&j, "differential_camber")["demand"], 0.0);
+    // units erected at 30 and 90 days: the difference is the camber gained
+    // from 30 to 90 days (the age-adjusted method, each at its own erection)
+    let j = check_json(&["--erection-spread", "60"]);
+    let d = check(&j, "differential_camber");
+    let at90 = check_json(&["--erection-age", "90"])["aged_camber"]["erection_in"]
+        .as_f64()
+        .unwrap();
+    let at30 = j["aged_camber"]["erection_in"].as_f64().unwrap();
+    assert!((d["demand"].as_f64().unwrap() - (at90 - at30).abs()).abs() < 1e-12, "{d}");
+    assert_eq!(d["capacity"], 0.75, "¾ in by default (common practice, no source)");
+    // a tight limit makes the entry fail, with its reason
+    let out = Command::new(env!("CARGO_BIN_EXE_plankwise"))
+        .args([
+            "check",
+            "--section",
+            "plank-8in-4ft",
+            "--pattern",
+            "6x1/2",
+            "--span",
+            "26 ft",
+            "--erection-spread",
+            "300",
+            "--camber-limit",
+            "0.1 in",
+        ])
+        .output()
+        .unwrap();
+    let text = String::from_utf8_lossy(&out.stdout);
+    assert!(
+        text.contains("Camber difference between units at erection") && text.contains("NOT VIABLE"),
+        "{text}"
+    );
+}
+
+#[test]
+fn a_unit_an_opening_cuts_cambers_less_than_its_neighbours() {
+    // a double tee whose opening cuts a stem's strands: two units analysed
+    let out = Command::new(env!("CARGO_BIN_EXE_plankwise"))
+        .args([
+            "check",
+            "--section",
+            "tee-24in-10ft",
+            "--pattern",
+            "8-straight",
+            "--span",
+            "34 ft",
+            "--use",
+            "roof",
+            "--roof-live",
+            "20 psf",
+            "--opening",
+            "from=14 ft, to=18 ft, across=20 in, wide=24 in",
+            "--json",
+        ])
+        .output()
+        .unwrap();
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let d = check(&v, "differential_camber");
+    assert!(v["units"].as_array().unwrap().len() > 1, "{}", v["units"]);
+    assert!(d["demand"].as_f64().unwrap() > 0.0, "{d}");
+    assert!(d["note"].as_str().unwrap().contains("the units analysed"), "{d}");
+}

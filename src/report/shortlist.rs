@@ -44,6 +44,8 @@ struct Row {
     camber_erection: f64,
     camber_final: f64,
     defl_live: f64,
+    /// Camber at erection to expect (age-adjusted method): least, greatest.
+    camber_range: (f64, f64),
     fire: String,
     member_length_in: f64,
     pieces: Option<u64>,
@@ -90,6 +92,7 @@ fn row(cat: &Catalog, r: &Ranked, bay: &Bay, sys: System) -> Row {
         camber_erection: e.camber.camber_erection_in,
         camber_final: e.camber.camber_final_in,
         defl_live: e.camber.defl_live_in,
+        camber_range: e.camber_range,
         fire,
         member_length_in: e.member_length_in,
         pieces,
@@ -317,6 +320,12 @@ fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &Ba
         )?;
         writeln!(
             w,
+            "     expected camber at erection {} to {} {len_u} (ACI 209R-92 with age, the bay's erection ages and units)",
+            signed(x.camber_range.0, sys),
+            signed(x.camber_range.1, sys)
+        )?;
+        writeln!(
+            w,
             "     fire {}{}",
             x.fire,
             x.pieces.map_or(String::new(), |p| format!("; {p} pieces"))
@@ -374,14 +383,14 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
         let (wu, lu) = (display::unit("psf", sys), display::unit("in", sys));
         writeln!(
             w,
-            "| # | member | topping | {wu} | depth {lu} | governs | ratio | φMn/Mu | Vu/φVn | class | camber erection {lu} | camber final {lu} | live defl {lu} | fire | length | pieces |"
+            "| # | member | topping | {wu} | depth {lu} | governs | ratio | φMn/Mu | Vu/φVn | class | camber erection {lu} | expected at erection {lu} | camber final {lu} | live defl {lu} | fire | length | pieces |"
         )?;
-        writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
+        writeln!(w, "|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|---|")?;
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
             let x = row(cat, r, b.bay, sys);
             writeln!(
                 w,
-                "| {} | {} (`{}`) | {} | {} | {} | {} | {:.2} | {:.2} | {:.2} | {} | {} | {} | {} | {} | {} | {} |",
+                "| {} | {} (`{}`) | {} | {} | {} | {} | {:.2} | {:.2} | {:.2} | {} | {} | {} to {} | {} | {} | {} | {} | {} |",
                 k + 1,
                 x.designation,
                 x.id,
@@ -394,6 +403,8 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
                 x.shear_ratio,
                 x.class,
                 signed(x.camber_erection, sys),
+                signed(x.camber_range.0, sys),
+                signed(x.camber_range.1, sys),
                 signed(x.camber_final, sys),
                 display::num(x.defl_live, "in", 2, sys),
                 x.fire,
@@ -448,7 +459,7 @@ fn q(s: &str) -> String {
 }
 
 /// The CSV columns of a US run; an SI run renames those with a unit.
-const CSV_COLUMNS: &str = "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_final_in,defl_live_in,fire,member_length_ft,pieces,units_cut";
+const CSV_COLUMNS: &str = "project,bay,rank,section,pattern,designation,topping_in,weight_psf,depth_in,governing,governing_ratio,phi_mn_over_mu,shear_ratio,service_class,camber_erection_in,camber_erection_low_in,camber_erection_high_in,camber_final_in,defl_live_in,fire,member_length_ft,pieces,units_cut";
 
 fn csv_head(w: &mut impl Write, sys: System) -> io::Result<()> {
     let cols: Vec<String> = CSV_COLUMNS.split(',').map(|c| display::key(c, sys)).collect();
@@ -465,7 +476,7 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
     let b = BayList { bay, ranking };
     {
         if b.ranking.viable.is_empty() {
-            writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
+            writeln!(w, "{},{},,,,NO VIABLE MEMBER,,,,,,,,,,,,,,,,,", q(&job.project), q(&b.bay.name))?;
             return Ok(());
         }
         for (k, r) in b.ranking.viable.iter().take(top).enumerate() {
@@ -473,7 +484,7 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
             let n = |v: f64, us: &'static str, places: usize| display::num(v, us, places, sys);
             writeln!(
                 w,
-                "{},{},{},{},{},{},{},{},{},{},{:.3},{:.3},{:.3},{},{},{},{},{},{},{},{}",
+                "{},{},{},{},{},{},{},{},{},{},{:.3},{:.3},{:.3},{},{},{},{},{},{},{},{},{},{}",
                 q(&job.project),
                 q(&b.bay.name),
                 k + 1,
@@ -489,6 +500,8 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
                 x.shear_ratio,
                 x.class,
                 n(x.camber_erection, "in", 3),
+                n(x.camber_range.0, "in", 3),
+                n(x.camber_range.1, "in", 3),
                 n(x.camber_final, "in", 3),
                 n(x.defl_live, "in", 3),
                 q(&x.fire),
