@@ -271,10 +271,15 @@ pub struct DesignCase {
     pub camber_limit: Length,
     /// Width of the bearing (pad) at each support, when the bay gives it.
     pub pad_width: Option<Length>,
+    /// The bearing pad's material, if the bay names one.
+    pub pad: Pad,
     /// Whether stripping, storage, transport and erection are checked.
     pub handling: bool,
     /// How the member is lifted.
     pub rigging: crate::handling::Rigging,
+    /// The form finish: exposed aggregate (with retarder) instead of a
+    /// smooth mould with form oil only (less form suction at stripping).
+    pub exposed_finish: bool,
     /// Lift points from each end, when the bay gives them.
     pub lift_at: Option<Length>,
     /// Truck bunks from each end, when the bay gives them.
@@ -301,6 +306,45 @@ pub const DEFAULT_BEARING_IN: f64 = 4.0;
 pub const DEFAULT_SUSTAINED_LIVE: f64 = 0.3;
 /// Default relative humidity, %.
 pub const DEFAULT_HUMIDITY: f64 = 70.0;
+/// A bearing pad's material, with the average service pressure it takes.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Pad {
+    /// No pad named: the member bears on grout, mortar or the support (only
+    /// ACI 318-19 22.8 is checked).
+    None,
+    /// Plain elastomeric.
+    Elastomeric,
+    /// Random-oriented fibre reinforced.
+    Fibre,
+    /// Cotton-duck.
+    CottonDuck,
+}
+
+impl Pad {
+    /// The average service pressure allowed, psi: the PCI Design Handbook's
+    /// ranges, **from memory, low confidence** — plain elastomeric about
+    /// 800–1000 psi (the lower end taken), random-oriented fibre about
+    /// 1500 psi, cotton-duck about 2500–3000 psi (the lower end taken).
+    pub fn allowable_psi(self) -> Option<f64> {
+        match self {
+            Pad::None => None,
+            Pad::Elastomeric => Some(800.0),
+            Pad::Fibre => Some(1500.0),
+            Pad::CottonDuck => Some(2500.0),
+        }
+    }
+    /// Its name in a job file.
+    pub fn name(self) -> &'static str {
+        match self {
+            Pad::None => "none",
+            Pad::Elastomeric => "elastomeric",
+            Pad::Fibre => "fibre",
+            Pad::CottonDuck => "cotton-duck",
+        }
+    }
+}
+
 /// Default limit on the camber difference between adjacent units at
 /// erection, in (common practice, no source).
 pub const DEFAULT_CAMBER_LIMIT_IN: f64 = 0.75;
@@ -334,8 +378,10 @@ impl DesignCase {
             erection_spread: 0.0,
             camber_limit: Length::new(DEFAULT_CAMBER_LIMIT_IN),
             pad_width: None,
+            pad: Pad::None,
             handling: true,
             rigging: crate::handling::Rigging::TwoPoint,
+            exposed_finish: false,
             lift_at: None,
             bunk_at: None,
             losses: LossMethod::Zia,

@@ -19,6 +19,7 @@ pub mod hogging;
 pub mod horizontal_shear;
 pub mod jacking;
 pub mod min_strength;
+pub mod pad_pressure;
 pub mod production_length;
 pub mod punching;
 pub mod release;
@@ -341,6 +342,10 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: bearing_stress::INFO,
         run: bearing_stress::run,
+    },
+    Check {
+        info: pad_pressure::INFO,
+        run: pad_pressure::run,
     },
     Check {
         info: production_length::INFO,

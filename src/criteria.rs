@@ -189,6 +189,8 @@ const FAMILIES: &[&str] = &["hollow-core", "double-tee", "generic"];
 const SHARES: &[&str] = &["whole", "rule"];
 const STEM_SHARES: &[&str] = &["lever", "one"];
 const HANDLING: &[&str] = &["checked", "not-checked"];
+const FINISHES: &[&str] = &["smooth", "exposed"];
+const PADS: &[&str] = &["none", "elastomeric", "fibre", "cotton-duck"];
 const RIGGINGS: &[&str] = &["two-point", "four-point"];
 
 /// The area-load range every load criterion allows, psf.
@@ -487,6 +489,33 @@ pub const CRITERIA: &[Criterion] = &[
         },
     },
     Criterion {
+        key: "pad",
+        label: "Bearing pad",
+        flag: Some("pad"),
+        help: "the bearing pad's material: none, elastomeric, fibre or cotton-duck (its average service pressure, PCI, from memory, low confidence)",
+        form: Form::Choice(PADS),
+        default: "none",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| {
+            Value::Pick(match b.case.pad {
+                crate::case::Pad::None => 0,
+                crate::case::Pad::Elastomeric => 1,
+                crate::case::Pad::Fibre => 2,
+                crate::case::Pad::CottonDuck => 3,
+            })
+        },
+        set: |b, v| {
+            b.case.pad = match pick(&v) {
+                1 => crate::case::Pad::Elastomeric,
+                2 => crate::case::Pad::Fibre,
+                3 => crate::case::Pad::CottonDuck,
+                _ => crate::case::Pad::None,
+            }
+        },
+    },
+    Criterion {
         key: "handling",
         label: "Handling",
         flag: Some("handling"),
@@ -523,6 +552,19 @@ pub const CRITERIA: &[Criterion] = &[
                 crate::handling::Rigging::TwoPoint
             }
         },
+    },
+    Criterion {
+        key: "finish",
+        label: "Form finish",
+        flag: Some("finish"),
+        help: "the form's finish at stripping: smooth (mould with form oil only) or exposed (exposed aggregate with retarder: less form suction)",
+        form: Form::Choice(FINISHES),
+        default: "smooth",
+        required: false,
+        inherit: true,
+        units: ("", ""),
+        get: |b| Value::Pick(if b.case.exposed_finish { 1 } else { 0 }),
+        set: |b, v| b.case.exposed_finish = pick(&v) == 1,
     },
     Criterion {
         key: "lift_at",

@@ -9,7 +9,7 @@
 //!
 //! | stage | age | supports | multiplier |
 //! |---|---|---|---|
-//! | stripping / lifting from the bed | release (f′ci, prestress after transfer) | the lift points | by product: hollow-core lifted from its bed 1.2 (no form suction: common practice, no source); a double tee stripped from a steel form as "fluted, with proper drafts", smooth mould 1.6 (the row: from memory, low confidence); other slabs "flat, removable side forms", smooth mould 1.3 |
+//! | stripping / lifting from the bed | release (f′ci, prestress after transfer) | the lift points | by product and finish (`finish`): hollow-core lifted from its bed 1.2 (no form suction: common practice, no source); a double tee stripped from a steel form as "fluted, with proper drafts", smooth mould 1.6, exposed aggregate 1.4 (the row: from memory, low confidence); other slabs "flat, removable side forms", smooth mould 1.3, exposed aggregate 1.2 |
 //! | yard storage | 7 days (common practice, no source) | dunnage at the lift points (common practice, no source) | 1.2 |
 //! | transport | the erection age | the truck bunks (`bunk_at`, default the lift points) | 1.5 |
 //! | erection | the erection age | the lift points | 1.2 |
@@ -99,18 +99,25 @@ impl Stage {
     }
 }
 
-/// The multiplier of stripping by product (see the module table) and its source.
-pub fn stripping_multiplier(family: Family) -> (f64, &'static str) {
-    match family {
-        Family::HollowCore => (
+/// The multiplier of stripping by product and finish (see the module
+/// table; `exposed`: exposed aggregate with retarder, else a smooth mould
+/// with form oil only) and its source.
+pub fn stripping_multiplier(family: Family, exposed: bool) -> (f64, &'static str) {
+    match (family, exposed) {
+        (Family::HollowCore, _) => (
             1.2,
             "lifted from the bed, no form suction (common practice, no source): yard handling 1.2 (PCI, from memory)",
         ),
-        Family::DoubleTee => (
+        (Family::DoubleTee, false) => (
             1.6,
             "stripped from a steel form, fluted with proper drafts, smooth mould (PCI, from memory; the row from memory, low confidence)",
         ),
-        Family::Generic => (1.3, "stripped, flat, removable side forms, smooth mould (PCI, from memory)"),
+        (Family::DoubleTee, true) => (
+            1.4,
+            "stripped from a form, fluted with proper drafts, exposed aggregate (PCI, from memory; the row from memory, low confidence)",
+        ),
+        (Family::Generic, false) => (1.3, "stripped, flat, removable side forms, smooth mould (PCI, from memory)"),
+        (Family::Generic, true) => (1.2, "stripped, flat, removable side forms, exposed aggregate (PCI, from memory)"),
     }
 }
 
@@ -190,7 +197,7 @@ pub fn stages(m: &Member, setup: &Setup) -> Vec<Stage> {
     xs.sort_by(f64::total_cmp);
     xs.dedup_by(|a, b| (*a - *b).abs() < 1e-9);
     let pre: Vec<Point> = xs.iter().map(|&x| point(m, x)).collect();
-    let (strip_k, strip_src) = stripping_multiplier(m.section.family);
+    let (strip_k, strip_src) = stripping_multiplier(m.section.family, m.case.exposed_finish);
     let strip = |supports: &[f64]| {
         stage(
             m,

@@ -122,3 +122,49 @@ fn bearing_strength_by_hand() {
         "{b}"
     );
 }
+
+#[test]
+fn a_named_pad_takes_the_service_reaction_over_its_area() {
+    // plank-8in-4ft, 24 ft span, 20 psf SDL, 40 psf live, on a 4 in bearing
+    // with an elastomeric pad the width of the unit: the service reaction
+    // is half the member's weight and loads over the span (the engine's
+    // statics carry the self-weight between the bearing centres; the 2 in
+    // beyond each is 0.7 % of this reaction): (61.657 + 60) × 4 × 24 / 2
+    // = 5839.5 lb, over 48 × 3.5 = 168 in²: 34.76 psi against 800 psi
+    // (PCI range, from memory, low confidence).
+    let (code, out, err) = run(&[
+        "check",
+        "--section",
+        "plank-8in-4ft",
+        "--pattern",
+        "6x1/2",
+        "--span",
+        "24 ft",
+        "--sdl",
+        "20 psf",
+        "--live",
+        "40 psf",
+        "--pad",
+        "elastomeric",
+        "--json",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    let p = check(&v, "pad_pressure");
+    let want = (61.656_961_808_167_49 + 60.0) * 4.0 * 24.0 / 2.0 / 168.0;
+    assert!((p["demand"].as_f64().unwrap() - want).abs() < 1e-3 * want, "{p} against {want}");
+    assert_eq!(p["capacity"], 800.0);
+    // no pad named: no pad check
+    let (_, out, _) = run(&[
+        "check",
+        "--section",
+        "plank-8in-4ft",
+        "--pattern",
+        "6x1/2",
+        "--span",
+        "24 ft",
+        "--json",
+    ]);
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    assert!(v["checks"].as_array().unwrap().iter().all(|c| c["id"] != "pad_pressure"));
+}

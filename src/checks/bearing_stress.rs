@@ -68,6 +68,18 @@ pub fn factored_reaction(an: &Analysis) -> (f64, usize, &'static str) {
     best
 }
 
+/// The largest service reaction (lbf): dead plus the larger of the live
+/// and the roof load, unfactored, at either support.
+pub fn service_reaction(an: &Analysis) -> f64 {
+    [0.0, an.member.l]
+        .into_iter()
+        .map(|xs| {
+            let r = reaction(an, xs);
+            r.v_dead() + r.v_live.max(r.v_roof)
+        })
+        .fold(0.0, f64::max)
+}
+
 /// The bearing width, in: the bay's pad width if given, else the unit's
 /// width (slabs) or the stems' summed width at the soffit (double tees).
 pub fn bearing_width(an: &Analysis) -> f64 {
