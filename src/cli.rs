@@ -101,6 +101,8 @@ enum Command {
     Rank(Box<select::RankArgs>),
     /// Largest live load an entry carries over a range of spans, and its longest span.
     Envelope(Box<select::EnvelopeArgs>),
+    /// The capacity of the whole catalog: for every entry the longest span at each load level and the check that ends it.
+    Capacity(Box<select::CapacityArgs>),
     /// Which entry is best at each span of a range, as breakpoints.
     Spanmap(Box<select::SpanmapArgs>),
     /// Write the shortlist for the supplier (text, Markdown or CSV).
@@ -169,6 +171,7 @@ pub fn run() -> i32 {
         Some(Command::Rank(a)) => select::rank(&a),
         Some(Command::Envelope(a)) => select::envelope(&a),
         Some(Command::Spanmap(a)) => select::spanmap(&a),
+        Some(Command::Capacity(a)) => select::capacity(&a),
         Some(Command::Shortlist(a)) => select::shortlist(&a),
         Some(Command::Completions { shell }) => {
             use clap::CommandFactory;

@@ -1,5 +1,6 @@
 //! Printers over `impl Write`: plain text for people, JSON for scripts.
 
+pub mod capacity;
 pub mod check;
 pub mod shortlist;
 

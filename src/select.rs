@@ -2,6 +2,7 @@
 //! option) evaluated for each bay, filtered, ranked and explained; the
 //! capacity envelope by inverting the checks; the span map.
 
+pub mod capacity;
 pub mod envelope;
 
 use std::cmp::Ordering;

@@ -96,6 +96,178 @@ pub struct SpanmapArgs {
     units: UnitsFlag,
 }
 
+/// Arguments of `plankwise capacity`.
+#[derive(Debug, clap::Args)]
+pub struct CapacityArgs {
+    /// Catalog file (TOML); the built-in demo catalog when omitted.
+    catalog: Option<PathBuf>,
+    /// Span range of the largest loads, e.g. "20 ft..40 ft"; the longest
+    /// spans are sought within it.
+    #[arg(long, default_value = "12 ft..60 ft")]
+    spans: String,
+    /// Step between spans.
+    #[arg(long, default_value = "2 ft")]
+    step: String,
+    /// Load levels for the longest spans (the load the bay's use names:
+    /// floor live, or roof Lr = S), e.g. "40 psf, 100 psf" (default: 40, 60,
+    /// 80, 100, 150 psf on a floor; 20, 30, 40, 60 psf on a roof).
+    #[arg(long)]
+    loads: Option<String>,
+    /// Only entries whose depth with topping lies in this range, e.g. "8 in..12 in".
+    #[arg(long)]
+    depth: Option<String>,
+    #[command(flatten)]
+    bay: BayFlags,
+    /// text, md, csv or json (default: from the extension of -o, else text).
+    #[arg(long, value_enum)]
+    format: Option<OutFormat>,
+    /// Write to this file instead of the standard output.
+    #[arg(short = 'o', long = "output")]
+    output: Option<PathBuf>,
+    /// Replace an existing output file.
+    #[arg(long, requires = "output")]
+    force: bool,
+    #[command(flatten)]
+    units: UnitsFlag,
+}
+
+/// An output format, as `--format` spells it.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, clap::ValueEnum)]
+pub enum OutFormat {
+    /// Plain text.
+    Text,
+    /// Markdown.
+    Md,
+    /// Comma-separated values.
+    Csv,
+    /// JSON.
+    Json,
+}
+
+impl OutFormat {
+    /// The format a file's extension names, if any.
+    pub fn of_path(p: &Path) -> Option<OutFormat> {
+        match p.extension()?.to_str()?.to_ascii_lowercase().as_str() {
+            "txt" | "text" => Some(OutFormat::Text),
+            "md" | "markdown" => Some(OutFormat::Md),
+            "csv" => Some(OutFormat::Csv),
+            "json" => Some(OutFormat::Json),
+            _ => None,
+        }
+    }
+}
+
+/// Load levels as typed: "40 psf, 60 psf".
+fn loads(text: &str) -> Result<Vec<f64>, Failure> {
+    let mut v = Vec::new();
+    for part in text.split(',').map(str::trim).filter(|p| !p.is_empty()) {
+        let q = plankwise::units::AreaLoad::parse(part).map_err(|e| Failure::Message(format!("--loads: {e}")))?;
+        let psf = q.in_unit("psf");
+        if !(0.0..=2000.0).contains(&psf) {
+            return Err(Failure::Message(format!("--loads: '{part}' must lie from 0 to 2000 psf")));
+        }
+        v.push(psf);
+    }
+    if v.is_empty() || v.len() > 12 {
+        return Err(Failure::Message(format!(
+            "--loads: '{text}' must give 1 to 12 loads, e.g. \"40 psf, 100 psf\""
+        )));
+    }
+    Ok(v)
+}
+
+/// `plankwise capacity`: the capacity table of the catalog.
+pub fn capacity(a: &CapacityArgs) -> Result<i32, Failure> {
+    let (cat, _) = load(a.catalog.as_ref())?;
+    print_warnings(&cat);
+    let spans = range(&a.spans, &a.step)?;
+    let mut flags = a.bay.clone();
+    if flags.gives("span") {
+        return Err(Failure::Message("--span: the capacity table takes its spans from --spans".into()));
+    }
+    flags.given.push(("span", format!("{} ft", spans[0])));
+    let bay = flags.to_bay(&cat)?;
+    check_job(&cat, std::slice::from_ref(&bay))?;
+    let roof = bay.case.member_use == plankwise::case::Use::Roof;
+    let levels = match &a.loads {
+        Some(t) => loads(t)?,
+        None if roof => vec![20.0, 30.0, 40.0, 60.0],
+        None => vec![40.0, 60.0, 80.0, 100.0, 150.0],
+    };
+    let depth = match &a.depth {
+        None => None,
+        Some(t) => {
+            let (lo, hi) = t
+                .split_once("..")
+                .ok_or_else(|| Failure::Message(format!("--depth: '{t}' should read like \"8 in..12 in\"")))?;
+            let p = |x: &str| Length::parse(x).map_err(|e| Failure::Message(format!("--depth: {e}")));
+            let (lo, hi) = (p(lo)?.get(), p(hi)?.get());
+            if hi < lo {
+                return Err(Failure::Message(format!("--depth: '{t}' must run upward")));
+            }
+            Some((lo, hi))
+        }
+    };
+    let req = plankwise::select::capacity::Request {
+        spans_ft: spans,
+        loads_psf: levels,
+        depth_in: depth,
+    };
+    let format = a
+        .format
+        .or_else(|| a.output.as_deref().and_then(OutFormat::of_path))
+        .unwrap_or(OutFormat::Text);
+    let sys = a.units.system(None, &cat);
+    // refused before any work
+    let target = match &a.output {
+        None => None,
+        Some(o) => {
+            let inputs: Vec<&Path> = a.catalog.iter().map(|p| p.as_path()).collect();
+            Some(plankwise::files::writable(o, &inputs, a.force).map_err(|e| Failure::Message(format!("-o: '{}' {e}", o.display())))?)
+        }
+    };
+    let rows = plankwise::select::capacity::table(&cat, &bay, &req);
+    let load = |q: plankwise::units::AreaLoad| display::with_unit(q.in_unit("psf"), "psf", 0, sys);
+    let heading = plankwise::report::capacity::Heading {
+        catalog: &cat.meta.name,
+        hash: &cat.hash,
+        held: format!(
+            "SDL {}{}{}",
+            load(bay.case.sdl),
+            if bay.toppings.iter().any(|t| t.is_some()) {
+                ", toppings as listed"
+            } else {
+                ""
+            },
+            bay.case.fire_rating.map_or(String::new(), |h| format!(", fire rating {h} h"))
+        ),
+        varied: if roof { "roof (Lr = S)" } else { "live" },
+    };
+    let write = |w: &mut dyn Write| -> io::Result<()> {
+        let mut w = w;
+        match format {
+            OutFormat::Text => plankwise::report::capacity::text(&mut w, &heading, &rows, sys),
+            OutFormat::Md => plankwise::report::capacity::markdown(&mut w, &heading, &rows, sys),
+            OutFormat::Csv => plankwise::report::capacity::csv(&mut w, &rows, sys),
+            OutFormat::Json => {
+                let v = serde_json::to_value(&rows).map_err(io::Error::from)?;
+                serde_json::to_writer_pretty(&mut w, &display::json(v, sys)).map_err(io::Error::from)?;
+                writeln!(w)
+            }
+        }
+    };
+    match target {
+        None => write(&mut io::stdout().lock())?,
+        Some(real) => {
+            let shown = a.output.as_ref().map_or(String::new(), |o| o.display().to_string());
+            plankwise::files::write_atomic_with(&real, |mut w| write(&mut w))
+                .map_err(|e| Failure::Message(format!("-o: '{shown}' cannot be written: {e}")))?;
+            eprintln!("plankwise: wrote {shown} ({} entries)", rows.len());
+        }
+    }
+    Ok(OK)
+}
+
 /// Arguments of `plankwise shortlist`.
 #[derive(Debug, clap::Args)]
 pub struct ShortlistArgs {
@@ -107,9 +279,9 @@ pub struct ShortlistArgs {
     /// Output file.
     #[arg(short = 'o', long = "output")]
     output: PathBuf,
-    /// text, md or csv.
-    #[arg(long, default_value = "text")]
-    format: String,
+    /// text, md or csv (default: from the extension of -o — .md, .csv — else text).
+    #[arg(long)]
+    format: Option<String>,
     /// Members listed per bay (1 or more).
     #[arg(long, default_value_t = 5, value_parser = clap::value_parser!(u32).range(1..))]
     top: u32,
@@ -538,7 +710,12 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let (job, _) = load_job(&a.job, &cat)?;
     check_job(&cat, &job.bays)?;
     let sys = a.units.system(Some(&job), &cat);
-    let format = match a.format.as_str() {
+    let named = a.format.clone().unwrap_or_else(|| match OutFormat::of_path(&a.output) {
+        Some(OutFormat::Md) => "md".into(),
+        Some(OutFormat::Csv) => "csv".into(),
+        _ => "text".into(),
+    });
+    let format = match named.as_str() {
         "text" | "txt" => Format::Text,
         "md" | "markdown" => Format::Markdown,
         "csv" => Format::Csv,
