@@ -128,8 +128,12 @@ struct CheckArgs {
     #[command(flatten)]
     bay: BayFlags,
     /// Print JSON instead of a table (keys carry their units).
-    #[arg(long)]
+    #[arg(long, conflicts_with = "sheet")]
     json: bool,
+    /// Print the calculation sheet instead: every number the checks use,
+    /// in order, each with its key in the JSON (`text` or `md`).
+    #[arg(long, value_name = "FORMAT", num_args = 0..=1, default_missing_value = "text", value_parser = ["text", "md"])]
+    sheet: Option<String>,
     #[command(flatten)]
     units: UnitsFlag,
 }
@@ -455,6 +459,10 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
     if a.json {
         let j = report::check::to_json(&cand, &case, &ev);
         write_json(&mut out, &j, sys)?;
+    } else if let Some(f) = &a.sheet {
+        let j = report::check::to_json(&cand, &case, &ev);
+        let title = format!("{} — {}", section.designation, pattern.designation);
+        report::sheet::write(&mut out, &title, &j, sys, f == "md")?;
     } else {
         let title = format!(
             "{} — {} ({} / {})",

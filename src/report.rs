@@ -2,6 +2,7 @@
 
 pub mod capacity;
 pub mod check;
+pub mod sheet;
 pub mod shortlist;
 
 use std::io::{self, Write};

@@ -75,6 +75,8 @@ pub enum Action {
     Mark,
     /// Write the shortlist (asks for a path).
     WriteShortlist,
+    /// Write the calculation sheet of the selected candidate.
+    WriteSheet,
     /// Save the job (asks for a path when there is none).
     Save,
     /// US or SI display.
@@ -115,6 +117,14 @@ pub enum Effect {
         path: PathBuf,
         /// Format.
         format: Format,
+        /// Replace an existing file.
+        force: bool,
+    },
+    /// Write the calculation sheet of the selected candidate (Markdown
+    /// for a .md path, else text).
+    WriteSheet {
+        /// Where.
+        path: PathBuf,
         /// Replace an existing file.
         force: bool,
     },
@@ -161,6 +171,8 @@ pub enum Question {
     Quit,
     /// Overwrite this shortlist file?
     Overwrite(PathBuf, Format),
+    /// Overwrite this calculation sheet?
+    OverwriteSheet(PathBuf),
 }
 
 /// What a prompt asks for.
@@ -170,6 +182,8 @@ pub enum PromptKind {
     Shortlist,
     /// Path to save the job to.
     SaveJob,
+    /// Path of the calculation sheet.
+    Sheet,
 }
 
 /// Input mode.
@@ -1037,6 +1051,13 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             }
         }
         Action::WriteShortlist => app.mode = Mode::Prompt(PromptKind::Shortlist, TextField::prefilled("shortlist.txt")),
+        Action::WriteSheet => {
+            if app.selected_row().is_some() && app.detail.is_some() {
+                app.mode = Mode::Prompt(PromptKind::Sheet, TextField::prefilled("sheet.txt"));
+            } else {
+                app.say("select a candidate to write its calculation sheet", true);
+            }
+        }
         Action::Save => {
             return match &app.job_path {
                 Some(p) => Effect::SaveJob { path: p.clone() },
@@ -1070,7 +1091,9 @@ pub fn update(app: &mut App, action: Action) -> Effect {
             }
         }
         Action::AskOverwrite => {
-            if let Mode::Prompt(PromptKind::Shortlist, p) | Mode::Edit(p) = &app.mode {
+            if let Mode::Prompt(PromptKind::Sheet, p) = &app.mode {
+                app.mode = Mode::Confirm(Question::OverwriteSheet(PathBuf::from(p.text.clone())));
+            } else if let Mode::Prompt(PromptKind::Shortlist, p) | Mode::Edit(p) = &app.mode {
                 let p = PathBuf::from(p.text.clone());
                 let f = format_for(&p.to_string_lossy());
                 app.mode = Mode::Confirm(Question::Overwrite(p, f));
@@ -1183,6 +1206,8 @@ fn input(app: &mut App, key: Key) -> Effect {
                         app.mode = Mode::Normal;
                         Effect::SaveJob { path }
                     }
+                    // stays in the prompt until the shell answers
+                    PromptKind::Sheet => Effect::WriteSheet { path, force: false },
                 }
             }
             Outcome::Edited => {
@@ -1197,6 +1222,7 @@ fn input(app: &mut App, key: Key) -> Effect {
                 match q {
                     Question::Quit => Effect::Quit,
                     Question::Overwrite(path, format) => Effect::WriteShortlist { path, format, force: true },
+                    Question::OverwriteSheet(path) => Effect::WriteSheet { path, force: true },
                 }
             }
             _ => {
@@ -1210,7 +1236,7 @@ fn input(app: &mut App, key: Key) -> Effect {
 
 /// After the shell has carried out an effect: report it.
 pub fn report(app: &mut App, result: Result<String, String>) {
-    if matches!(app.mode, Mode::Prompt(PromptKind::Shortlist, _)) {
+    if matches!(app.mode, Mode::Prompt(PromptKind::Shortlist | PromptKind::Sheet, _)) {
         app.mode = Mode::Normal;
     }
     match result {

@@ -397,6 +397,13 @@ fn an_si_session_end_to_end() {
             );
         }
     }
+    // the calculation sheet of the selected member, in Markdown, in SI
+    s.keys(&["e"]);
+    s.wait_for("calculation sheet file");
+    s.keys(&["C-u", "c", "a", "l", "c", ".", "m", "d", "Enter"]);
+    s.wait_for("wrote calc.md");
+    let sheet = std::fs::read_to_string(dir.join("calc.md")).unwrap();
+    assert!(sheet.starts_with("# Calculation sheet") && sheet.contains("kN·m") && sheet.contains("[fse_mpa]"), "{sheet}");
     s.keys(&["q"]);
     s.wait_for("quit anyway? y / n");
     s.keys(&["y"]);

@@ -74,6 +74,27 @@ fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::F
     Ok(format!("wrote {}", path.display()))
 }
 
+fn write_sheet(app: &App, inputs: &Inputs, path: &Path, force: bool) -> Result<String, String> {
+    let open: Vec<&Path> = inputs.catalog.iter().chain(app.job_path.iter()).map(|p| p.as_path()).collect();
+    match plankwise::files::writable(path, &open, force) {
+        Err(plankwise::files::Refusal::Exists) => return Err("exists".into()),
+        Err(e) => return Err(format!("'{}' {e}", path.display())),
+        Ok(_) => {}
+    }
+    let (Some(row), Some(entry), Some(ev)) = (app.selected_row(), app.selected_entry(), app.detail.as_ref()) else {
+        return Err("select a candidate first".into());
+    };
+    let bay = app.current_bay();
+    let case = plankwise::select::case_for(bay, row.topping, &plankwise::select::topping_mix(&app.catalog, bay));
+    let j = plankwise::report::check::to_json(&entry.candidate(), &case, ev);
+    let title = format!("{} — {} (bay '{}')", entry.section.designation, entry.pattern.designation, bay.name);
+    let md = path.extension().is_some_and(|e| e.eq_ignore_ascii_case("md"));
+    let mut buf = Vec::new();
+    plankwise::report::sheet::write(&mut buf, &title, &j, app.units, md).map_err(|e| e.to_string())?;
+    plankwise::files::write_safely(path, &buf, &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;
+    Ok(format!("wrote {}", path.display()))
+}
+
 fn save_job(app: &App, inputs: &Inputs, path: &Path) -> Result<String, String> {
     // the job may be saved over itself (edited in place, a backup kept),
     // never over the catalog
@@ -202,6 +223,12 @@ pub fn run(
                 Effect::None => {}
                 Effect::Quit => return Ok(()),
                 Effect::WriteShortlist { path, format, force } => match write_shortlist(&app, &inputs, &path, format, force) {
+                    Err(e) if e == "exists" => {
+                        update(&mut app, Action::AskOverwrite);
+                    }
+                    r => report(&mut app, r),
+                },
+                Effect::WriteSheet { path, force } => match write_sheet(&app, &inputs, &path, force) {
                     Err(e) if e == "exists" => {
                         update(&mut app, Action::AskOverwrite);
                     }

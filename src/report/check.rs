@@ -62,6 +62,35 @@ pub struct ConcreteJson {
     pub beta1: f64,
 }
 
+/// The bay's inputs the checks read, as numbers.
+#[derive(Debug, Clone, Serialize)]
+pub struct InputsJson {
+    /// Superimposed dead load, psf.
+    pub sdl_psf: f64,
+    /// Live load, psf.
+    pub live_psf: f64,
+    /// Roof live load, psf.
+    pub roof_live_psf: f64,
+    /// Snow load, psf.
+    pub snow_psf: f64,
+    /// Sustained share of the live load.
+    pub sustained_live: f64,
+    /// Bearing length, in.
+    pub bearing_in: f64,
+    /// Relative humidity, %.
+    pub humidity_pct: f64,
+    /// f′ci, psi.
+    pub fci_psi: f64,
+    /// Strand tensile strength fpu, ksi.
+    pub fpu_ksi: f64,
+    /// Strand modulus, ksi.
+    pub eps_ksi: f64,
+    /// Strand diameter, in.
+    pub strand_diameter_in: f64,
+    /// Strands in the pattern.
+    pub strand_count: usize,
+}
+
 /// The JSON of `plankwise check`.
 #[derive(Debug, Clone, Serialize)]
 pub struct CheckJson {
@@ -75,6 +104,10 @@ pub struct CheckJson {
     pub member_length_ft: f64,
     /// Topping thickness, in (0 when none).
     pub topping_in: f64,
+    /// The bay's inputs the checks read.
+    pub inputs: InputsJson,
+    /// The precast section's exact properties (bare).
+    pub section_props: crate::section::Properties,
     /// Every check passes.
     pub viable: bool,
     /// Id of the check with the highest ratio.
@@ -203,6 +236,21 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         span_ft: case.span.get() / 12.0,
         member_length_ft: ev.member_length_in / 12.0,
         topping_in: case.topping.as_ref().map_or(0.0, |t| t.thickness.get()),
+        inputs: InputsJson {
+            sdl_psf: case.sdl.in_unit("psf"),
+            live_psf: case.live.in_unit("psf"),
+            roof_live_psf: case.roof_live.in_unit("psf"),
+            snow_psf: case.snow.in_unit("psf"),
+            sustained_live: case.sustained_live,
+            bearing_in: case.bearing.get(),
+            humidity_pct: case.humidity,
+            fci_psi: cand.mix.fci.get(),
+            fpu_ksi: cand.pattern.strand.fpu.get() / 1000.0,
+            eps_ksi: cand.pattern.strand.eps.get() / 1000.0,
+            strand_diameter_in: cand.pattern.strand.diameter.get(),
+            strand_count: cand.pattern.rows.iter().map(|r| r.x.len()).sum(),
+        },
+        section_props: cand.section.props.clone(),
         viable: ev.viable,
         governing: ev.governing().info.id.to_string(),
         governing_ratio: ev.governing().ratio,

@@ -198,6 +198,12 @@ impl Default for Keymap {
                 b(Action::Compare, "compare", "marked candidates side by side", &[Char('v')]),
                 b(Action::Mark, "mark", "mark for the shortlist", &[Char(' ')]),
                 b(Action::WriteShortlist, "write_shortlist", "write the shortlist", &[Char('w')]),
+                b(
+                    Action::WriteSheet,
+                    "write_sheet",
+                    "write the calculation sheet of the selected candidate",
+                    &[Char('e')],
+                ),
                 b(Action::Save, "save", "save the job (keeps a backup)", &[Char('s')]),
                 b(Action::ToggleUnits, "units", "US / SI display", &[Char('u')]),
                 b(Action::NextBay, "next_bay", "next bay", &[Char('n'), PageDown]),

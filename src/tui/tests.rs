@@ -690,3 +690,30 @@ fn prompts_and_examples_follow_the_display_units() {
     press(&mut a, &[Key::Enter]);
     assert_eq!(a.current_bay().case.placed.len(), 1, "{:?}", a.status);
 }
+
+#[test]
+fn the_calculation_sheet_is_written_from_the_ui() {
+    let mut a = app();
+    press(&mut a, &[Key::Char('e')]);
+    assert!(matches!(&a.mode, Mode::Prompt(PromptKind::Sheet, f) if f.text == "sheet.txt"));
+    press(&mut a, &typed("calc.md"));
+    let e = press(&mut a, &[Key::Enter]);
+    assert_eq!(
+        e,
+        vec![Effect::WriteSheet {
+            path: PathBuf::from("calc.md"),
+            force: false
+        }]
+    );
+    // an existing file is asked about first
+    update(&mut a, Action::AskOverwrite);
+    assert!(matches!(&a.mode, Mode::Confirm(Question::OverwriteSheet(p)) if p == &PathBuf::from("calc.md")));
+    let e = press(&mut a, &[Key::Char('y')]);
+    assert_eq!(
+        e,
+        vec![Effect::WriteSheet {
+            path: PathBuf::from("calc.md"),
+            force: true
+        }]
+    );
+}

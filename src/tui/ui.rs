@@ -785,7 +785,16 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
             )
         }
         Mode::Confirm(Question::Quit) => ("the job has unsaved edits — quit anyway? y / n".into(), t.error),
-        Mode::Confirm(Question::Overwrite(p, _)) => (format!("'{}' exists — replace it? y / n", p.display()), t.error),
+        Mode::Confirm(Question::Overwrite(p, _)) | Mode::Confirm(Question::OverwriteSheet(p)) => {
+            (format!("'{}' exists — replace it? y / n", p.display()), t.error)
+        }
+        Mode::Prompt(PromptKind::Sheet, p) => (
+            format!(
+                "calculation sheet file (.txt or .md): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
+                p.shown()
+            ),
+            t.status,
+        ),
         _ => (app.status.0.clone(), if app.status.1 { t.error } else { t.status }),
     };
     Paragraph::new(crate::input::escape_controls(&text)).style(style).render(area, buf);

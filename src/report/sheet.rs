@@ -1,0 +1,242 @@
+//! The calculation sheet of one entry in one bay: every number the checks
+//! use, in the order an engineer checks them — inputs, section properties,
+//! prestress and losses, stresses at release and in service, strength,
+//! shear, camber and deflection, fire — each with the key it has in
+//! `plankwise check --json` in brackets, so the engineer of record can find
+//! any number in the data and a test can prove the two agree.
+//!
+//! A printer over [`super::check::CheckJson`]: it computes nothing.
+
+use std::io::{self, Write};
+
+use super::check::CheckJson;
+use crate::units::{System, display};
+
+struct Sheet<'w, W: Write> {
+    w: &'w mut W,
+    sys: System,
+    md: bool,
+}
+
+impl<W: Write> Sheet<'_, W> {
+    fn head(&mut self, title: &str) -> io::Result<()> {
+        if self.md {
+            writeln!(self.w, "\n## {title}\n")
+        } else {
+            writeln!(self.w, "\n{title}\n{}", "-".repeat(title.chars().count()))
+        }
+    }
+
+    /// One number: its label, value in the display units and its JSON key.
+    fn num(&mut self, label: &str, v: f64, us: &'static str, places: usize, key: &str) -> io::Result<()> {
+        let shown = if us.is_empty() {
+            format!("{v:.places$}")
+        } else {
+            display::with_unit(v, us, places, self.sys)
+        };
+        let key = display::key(key, self.sys);
+        if self.md {
+            writeln!(self.w, "- {label}: **{shown}** `[{key}]`")
+        } else {
+            writeln!(self.w, "  {label:<44} {shown:>18}   [{key}]")
+        }
+    }
+
+    fn text(&mut self, line: &str) -> io::Result<()> {
+        let line = display::localize(line, self.sys);
+        if self.md {
+            writeln!(self.w, "{line}  ")
+        } else {
+            writeln!(self.w, "  {line}")
+        }
+    }
+}
+
+/// Write the sheet (`md`: Markdown, else text) in the display system.
+pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bool) -> io::Result<()> {
+    let mut s = Sheet { w, sys, md };
+    if md {
+        writeln!(s.w, "# Calculation sheet — {title}")?;
+    } else {
+        writeln!(s.w, "CALCULATION SHEET — {title}")?;
+        writeln!(s.w, "{}", "=".repeat(78))?;
+    }
+    s.text(&format!(
+        "ACI 318-19; entry {} / {}; numbers as `plankwise check --json` gives them, its key in brackets",
+        j.section, j.pattern
+    ))?;
+
+    s.head("1. Inputs")?;
+    s.num("span, bearing centre to bearing centre", j.span_ft, "ft", 3, "span_ft")?;
+    s.num("member length (span + bearing)", j.member_length_ft, "ft", 3, "member_length_ft")?;
+    s.num("bearing length", j.inputs.bearing_in, "in", 2, "inputs.bearing_in")?;
+    s.num("composite topping", j.topping_in, "in", 2, "topping_in")?;
+    s.num("superimposed dead load SDL", j.inputs.sdl_psf, "psf", 1, "inputs.sdl_psf")?;
+    s.num("live load L", j.inputs.live_psf, "psf", 1, "inputs.live_psf")?;
+    s.num("roof live load Lr", j.inputs.roof_live_psf, "psf", 1, "inputs.roof_live_psf")?;
+    s.num("snow load S", j.inputs.snow_psf, "psf", 1, "inputs.snow_psf")?;
+    s.num("sustained share of L", j.inputs.sustained_live, "", 2, "inputs.sustained_live")?;
+    s.num("relative humidity, %", j.inputs.humidity_pct, "", 0, "inputs.humidity_pct")?;
+    for item in &j.items {
+        s.text(item)?;
+    }
+    s.num("f′c", j.concrete.fc_psi, "psi", 0, "concrete.fc_psi")?;
+    s.num("f′ci", j.inputs.fci_psi, "psi", 0, "inputs.fci_psi")?;
+    s.num("Ec (ACI 318-19 19.2.2)", j.concrete.ec_psi, "psi", 0, "concrete.ec_psi")?;
+    s.num("fr = 7.5λ√f′c (19.2.3)", j.concrete.fr_psi, "psi", 0, "concrete.fr_psi")?;
+    s.num("β1 (22.2.2.4.3)", j.concrete.beta1, "", 3, "concrete.beta1")?;
+    s.num("strand diameter", j.inputs.strand_diameter_in, "in", 3, "inputs.strand_diameter_in")?;
+    s.num("strands", j.inputs.strand_count as f64, "", 0, "inputs.strand_count")?;
+    s.num("fpu", j.inputs.fpu_ksi, "ksi", 0, "inputs.fpu_ksi")?;
+    s.num("Eps", j.inputs.eps_ksi, "ksi", 0, "inputs.eps_ksi")?;
+
+    s.head("2. Section (exact, bare precast)")?;
+    let p = &j.section_props;
+    s.num("net area A", p.area_in2, "in²", 1, "section_props.area_in2")?;
+    s.num("centroid above soffit yb", p.yb_in, "in", 3, "section_props.yb_in")?;
+    s.num("centroid to top yt", p.yt_in, "in", 3, "section_props.yt_in")?;
+    s.num("second moment I", p.ix_in4, "in⁴", 0, "section_props.ix_in4")?;
+    s.num("Sb = I/yb", p.sb_in3, "in³", 1, "section_props.sb_in3")?;
+    s.num("St = I/yt", p.st_in3, "in³", 1, "section_props.st_in3")?;
+    s.num(
+        "least summed web width bw",
+        p.web_width_min_in,
+        "in",
+        2,
+        "section_props.web_width_min_in",
+    )?;
+    s.num("volume-to-surface ratio", p.vs_ratio_in, "in", 3, "section_props.vs_ratio_in")?;
+
+    s.head("3. Prestress and losses (Zia et al. 1979)")?;
+    s.num("jacking stress fpj", j.fpj_ksi, "ksi", 2, "fpj_ksi")?;
+    s.num("elastic shortening ES", j.loss_es_ksi, "ksi", 2, "loss_es_ksi")?;
+    s.num("after transfer fpo", j.fpo_ksi, "ksi", 2, "fpo_ksi")?;
+    s.num("creep CR", j.loss_cr_ksi, "ksi", 2, "loss_cr_ksi")?;
+    s.num("shrinkage SH", j.loss_sh_ksi, "ksi", 2, "loss_sh_ksi")?;
+    s.num("relaxation RE", j.loss_re_ksi, "ksi", 2, "loss_re_ksi")?;
+    s.num("total loss", j.loss_total_ksi, "ksi", 2, "loss_total_ksi")?;
+    s.num("effective fse", j.fse_ksi, "ksi", 2, "fse_ksi")?;
+    s.num("effective force Pe", j.pe_kip, "kip", 2, "pe_kip")?;
+    s.num("transfer length (fse/3000) db", j.transfer_length_in, "in", 2, "transfer_length_in")?;
+    s.text(&format!("loss method: {}", j.loss_method))?;
+
+    s.head("4. At the section of the greatest factored moment")?;
+    s.num("factored moment Mu", j.mu_kipft, "kip-ft", 2, "mu_kipft")?;
+    s.num("nominal strength Mn (strain compatibility)", j.mn_kipft, "kip-ft", 2, "mn_kipft")?;
+    s.num("design strength φMn", j.phi_mn_kipft, "kip-ft", 2, "phi_mn_kipft")?;
+    s.num("cracking moment Mcr", j.mcr_kipft, "kip-ft", 2, "mcr_kipft")?;
+    s.num(
+        "service moment (total)",
+        j.m_service_total_kipft,
+        "kip-ft",
+        2,
+        "m_service_total_kipft",
+    )?;
+    s.num("bottom fibre at service", j.f_bottom_service_psi, "psi", 0, "f_bottom_service_psi")?;
+    s.num("top fibre at service", j.f_top_service_psi, "psi", 0, "f_top_service_psi")?;
+    s.num("factored shear Vu at the shear station", j.vu_kip, "kip", 2, "vu_kip")?;
+    s.num("φVn there", j.phi_vn_kip, "kip", 2, "phi_vn_kip")?;
+
+    s.head("5. Camber and deflection (upward positive)")?;
+    s.num(
+        "prestress camber at release",
+        j.camber_prestress_release_in,
+        "in",
+        3,
+        "camber_prestress_release_in",
+    )?;
+    s.num(
+        "self-weight deflection at release",
+        j.defl_self_release_in,
+        "in",
+        3,
+        "defl_self_release_in",
+    )?;
+    s.num("camber at release", j.camber_release_in, "in", 3, "camber_release_in")?;
+    s.num(
+        "camber at erection (multipliers)",
+        j.camber_erection_in,
+        "in",
+        3,
+        "camber_erection_in",
+    )?;
+    s.num("final camber (multipliers)", j.camber_final_in, "in", 3, "camber_final_in")?;
+    let a = &j.aged_camber;
+    s.num("erection age, days", a.erection_age_days, "", 0, "aged_camber.erection_age_days")?;
+    s.num(
+        "camber at erection (ACI 209R-92)",
+        a.erection_in,
+        "in",
+        3,
+        "aged_camber.erection_in",
+    )?;
+    s.num("final camber (ACI 209R-92)", a.final_in, "in", 3, "aged_camber.final_in")?;
+    s.num("immediate live-load deflection", j.defl_live_in, "in", 3, "defl_live_in")?;
+    s.num(
+        "deflection after attachment",
+        j.defl_after_attach_in,
+        "in",
+        3,
+        "defl_after_attach_in",
+    )?;
+    s.num("natural frequency, Hz", j.frequency_hz, "", 2, "frequency_hz")?;
+
+    s.head("6. Fire (IBC 2021 722.2)")?;
+    if let Some(h) = j.fire_rating_h {
+        s.num("rating reached, h", h, "", 1, "fire_rating_h")?;
+    } else {
+        s.text("rating: not rated by plankwise's tables [fire_rating_h]")?;
+    }
+    s.num(
+        "rating by heat transmission, h",
+        j.fire_rating_thickness_h,
+        "",
+        1,
+        "fire_rating_thickness_h",
+    )?;
+    s.num("equivalent thickness te", j.equiv_thickness_in, "in", 2, "equiv_thickness_in")?;
+    s.num("cover used for the rating", j.fire_cover_in, "in", 2, "fire_cover_in")?;
+
+    s.head("7. Every check (demand against capacity)")?;
+    for c in &j.checks {
+        let (d, u) = display::convert(c.demand, c.unit, sys);
+        let (cap, _) = display::convert(c.capacity, c.unit, sys);
+        if md {
+            writeln!(
+                s.w,
+                "- **{}** ({}): {d:.2} / {cap:.2} {u}, ratio {:.3}, {} `[checks.{}]`  \n  {}",
+                c.info.title,
+                c.info.clause,
+                c.ratio,
+                if c.pass { "passes" } else { "FAILS" },
+                c.info.id,
+                display::localize(&c.note, sys)
+            )?;
+        } else {
+            writeln!(
+                s.w,
+                "  {:<44} {d:>9.2} / {cap:>9.2} {u:<6} ratio {:.3} {}   [checks.{}]",
+                c.info.title,
+                c.ratio,
+                if c.pass { "ok" } else { "FAILS" },
+                c.info.id
+            )?;
+            writeln!(s.w, "      {} — {}", c.info.clause, display::localize(&c.note, sys))?;
+        }
+    }
+    s.head("Result")?;
+    s.text(&format!(
+        "{}; governing {} (ratio {:.3})",
+        if j.viable { "VIABLE" } else { "NOT VIABLE" },
+        j.governing,
+        j.governing_ratio
+    ))?;
+    s.text(&super::check::sign_convention(sys))?;
+    if !md {
+        writeln!(s.w)?;
+    }
+    for c in super::CAUTIONS {
+        s.text(&format!("! {c}"))?;
+    }
+    Ok(())
+}

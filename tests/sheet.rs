@@ -1,0 +1,134 @@
+//! The calculation sheet: every number on it equals the same number of
+//! `check --json` (in both systems), and the sheet and the capacity table
+//! match their golden files.
+
+use std::process::Command;
+
+fn run(args: &[&str]) -> String {
+    let out = Command::new(env!("CARGO_BIN_EXE_plankwise"))
+        .args(args)
+        .current_dir(env!("CARGO_MANIFEST_DIR"))
+        .output()
+        .unwrap();
+    assert!(
+        out.status.code().is_some_and(|c| c <= 1),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    String::from_utf8(out.stdout).unwrap()
+}
+
+const ENTRY: [&str; 11] = [
+    "check",
+    "--section",
+    "tee-24in-10ft",
+    "--pattern",
+    "8-depressed",
+    "--span",
+    "44 ft",
+    "--use",
+    "roof",
+    "--snow",
+    "30 psf",
+];
+
+/// The value at a dotted path of the JSON ("checks.flexure" finds the check by id).
+fn at<'a>(v: &'a serde_json::Value, path: &str) -> &'a serde_json::Value {
+    let mut cur = v;
+    let mut parts = path.split('.').peekable();
+    while let Some(p) = parts.next() {
+        cur = if p == "checks" {
+            let id = parts.next().unwrap();
+            cur["checks"]
+                .as_array()
+                .unwrap()
+                .iter()
+                .find(|c| c["id"] == id)
+                .unwrap_or_else(|| panic!("{id}"))
+        } else {
+            cur.get(p).unwrap_or_else(|| panic!("no {p} in {path}"))
+        };
+    }
+    cur
+}
+
+/// The numbers of a line before its "[key]", as written.
+fn numbers(text: &str) -> Vec<(f64, usize)> {
+    text.split_whitespace()
+        .filter_map(|t| {
+            let t = t.trim_end_matches(',');
+            t.parse::<f64>().ok().map(|v| (v, t.split_once('.').map_or(0, |(_, d)| d.len())))
+        })
+        .collect()
+}
+
+fn agree(shown: (f64, usize), want: f64, what: &str) {
+    let tol = 0.5 * 10f64.powi(-(shown.1 as i32)) + 1e-9 * want.abs();
+    assert!(
+        (shown.0 - want).abs() <= tol,
+        "{what}: the sheet says {} where the JSON has {want}",
+        shown.0
+    );
+}
+
+fn sheet_against_json(units: &str) -> usize {
+    let mut args = ENTRY.to_vec();
+    args.extend(["--units", units]);
+    let mut j = args.clone();
+    j.push("--json");
+    let json: serde_json::Value = serde_json::from_str(&run(&j)).unwrap();
+    let mut s = args.clone();
+    s.push("--sheet");
+    let sheet = run(&s);
+    let mut n = 0;
+    for line in sheet.lines() {
+        let Some((body, key)) = line.rsplit_once("   [") else { continue };
+        let key = key.trim_end_matches(']');
+        if let Some(id) = key.strip_prefix("checks.") {
+            // "title  demand / capacity unit  ratio r ok"
+            let c = at(&json, &format!("checks.{id}"));
+            let nums = numbers(&body.replace('/', " "));
+            let k = nums.len();
+            assert!(k >= 3, "{line}");
+            agree(nums[k - 3], c["demand"].as_f64().unwrap(), &format!("{id} demand"));
+            agree(nums[k - 2], c["capacity"].as_f64().unwrap(), &format!("{id} capacity"));
+            agree(nums[k - 1], c["ratio"].as_f64().unwrap(), &format!("{id} ratio"));
+            n += 3;
+        } else {
+            let want = at(&json, key).as_f64().unwrap_or_else(|| panic!("{key} is a number"));
+            let nums = numbers(body.split_once(" ").map_or(body, |_| body).rsplit("  ").next().unwrap());
+            let last = *nums.last().unwrap_or_else(|| panic!("a number in {line}"));
+            agree(last, want, key);
+            n += 1;
+        }
+    }
+    n
+}
+
+#[test]
+fn every_number_on_the_sheet_is_the_json_number() {
+    let us = sheet_against_json("us");
+    let si = sheet_against_json("si");
+    assert!(us > 90 && us == si, "{us} {si}");
+}
+
+fn golden(name: &str, got: &str) {
+    let path = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("tests/golden").join(name);
+    if std::env::var_os("PLANKWISE_BLESS").is_some() {
+        std::fs::write(&path, got).unwrap();
+    }
+    let want = std::fs::read_to_string(&path).unwrap_or_else(|_| panic!("{} missing: run with PLANKWISE_BLESS=1", path.display()));
+    assert_eq!(got, want, "{name} differs from its golden file (PLANKWISE_BLESS=1 to accept)");
+}
+
+#[test]
+fn the_sheet_and_the_capacity_table_match_their_golden_files() {
+    let mut s = ENTRY.to_vec();
+    s.push("--sheet");
+    golden("sheet.txt", &run(&s));
+    let cap = ["capacity", "--families", "hollow-core", "--sdl", "20 psf", "--fire", "1 h"];
+    golden("capacity.txt", &run(&cap));
+    let mut c = cap.to_vec();
+    c.extend(["--format", "csv"]);
+    golden("capacity.csv", &run(&c));
+}
