@@ -200,3 +200,18 @@ fn key_to_frame_demo_compare_view(b: divan::Bencher) {
     let mut up = true;
     b.bench_local(|| key_to_frame(&mut app, &mut term, &mut state, &mut up));
 }
+
+/// Target: the capacity table of the demo catalog (every entry, five load
+/// levels, spans 10–60 ft at 0.5 ft) in under 1 s.
+#[divan::bench(sample_count = 5)]
+fn capacity_table_demo_10_to_60_ft(b: divan::Bencher) {
+    let (cat, _) = demo();
+    let mut bay = plankwise::bay::Bay::new("capacity", plankwise::units::Length::from_unit(10.0, "ft"));
+    bay.case.sdl = plankwise::units::AreaLoad::from_unit(20.0, "psf");
+    let req = plankwise::select::capacity::Request {
+        spans_ft: (0..=100).map(|k| 10.0 + 0.5 * k as f64).collect(),
+        loads_psf: vec![40.0, 60.0, 80.0, 100.0, 150.0],
+        depth_in: None,
+    };
+    b.bench(|| plankwise::select::capacity::table(&cat, divan::black_box(&bay), &req).len());
+}

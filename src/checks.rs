@@ -1172,12 +1172,11 @@ fn complete<'a>(
                     service: w[0].service,
                 };
             }
-            if let Some((b, (z0, z1))) = borrow {
-                if w[1].x_in < z0 || w[0].x_in > z1 {
-                    if let Ok(k) = b.mids.binary_search_by(|m| m.x_in.total_cmp(&x)) {
-                        return b.mids[k];
-                    }
-                }
+            if let Some((b, (z0, z1))) = borrow
+                && (w[1].x_in < z0 || w[0].x_in > z1)
+                && let Ok(k) = b.mids.binary_search_by(|m| m.x_in.total_cmp(&x))
+            {
+                return b.mids[k];
             }
             Mid::at(&member, x)
         })

@@ -290,11 +290,35 @@ fn demo(catalog: Option<&PathBuf>, units: UnitsFlag) -> Result<i32, Failure> {
     writeln!(out)?;
     report::write_cautions(&mut out)?;
     writeln!(out)?;
+    let me = how_to_run();
     writeln!(
         out,
-        "In a terminal plankwise opens its UI here. Try: plankwise rank --job demo   ·   plankwise shortlist --job demo -o list.txt   ·   plankwise --help"
+        "In a terminal plankwise opens its UI here. Try: {me} rank --job demo   ·   {me} shortlist --job demo -o list.txt   ·   {me} --help"
     )?;
+    if me != "plankwise" {
+        writeln!(
+            out,
+            "(plankwise is not installed: `cargo install --path .` puts it on your PATH; until then the commands above run it from this folder)"
+        )?;
+    }
     Ok(OK)
+}
+
+/// How the user can run this program again, as typed at a shell: the
+/// bare name when it is installed on the PATH, else the `cargo run` form
+/// (the program was started from a build folder).
+fn how_to_run() -> String {
+    let exe = std::env::current_exe().ok();
+    let built = exe.as_ref().is_some_and(|p| {
+        let s = p.to_string_lossy();
+        s.contains("/target/release/") || s.contains("/target/debug/")
+    });
+    let on_path = std::env::var_os("PATH").is_some_and(|paths| std::env::split_paths(&paths).any(|d| d.join("plankwise").is_file()));
+    if built && !on_path {
+        "cargo run --release --".to_string()
+    } else {
+        "plankwise".to_string()
+    }
 }
 
 fn validate(file: &PathBuf) -> Result<i32, Failure> {

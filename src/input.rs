@@ -89,15 +89,15 @@ impl Ctx<'_> {
     /// A price, which may not be negative (absent: none given).
     pub(crate) fn price(&mut self, s: &Option<S>, path: &str) -> Option<Option<crate::units::PricePerArea>> {
         let v = self.opt_q::<crate::units::PriceK>(s, path, "price")?;
-        if let (Some(p), Some(s)) = (v, s) {
-            if p.get() < 0.0 {
-                self.rep.error(
-                    span(s),
-                    &join(path, "price"),
-                    format!("'{}' is negative; a price is 0 or more", s.get_ref()),
-                );
-                return None;
-            }
+        if let (Some(p), Some(s)) = (v, s)
+            && p.get() < 0.0
+        {
+            self.rep.error(
+                span(s),
+                &join(path, "price"),
+                format!("'{}' is negative; a price is 0 or more", s.get_ref()),
+            );
+            return None;
         }
         Some(v)
     }

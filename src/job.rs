@@ -456,10 +456,10 @@ impl Job {
     }
 
     fn read(text: &str, file: &str) -> Result<Job, Problems> {
-        if text.len() >= BLOCKS_ABOVE {
-            if let Some(r) = Job::from_blocks(text, file) {
-                return r;
-            }
+        if text.len() >= BLOCKS_ABOVE
+            && let Some(r) = Job::from_blocks(text, file)
+        {
+            return r;
         }
         let (mut cx, root) = crate::input::parse(text, file)?;
         let start = root.span().start;
@@ -736,10 +736,10 @@ impl Job {
             })
             .unwrap_or_default();
         if let Some(job) = doc.get_mut("job").and_then(|j| j.as_table_mut()) {
-            if self.units != was.units {
-                if let Some(u) = self.units {
-                    put(job, "units", u.name().into());
-                }
+            if self.units != was.units
+                && let Some(u) = self.units
+            {
+                put(job, "units", u.name().into());
             }
             // the UI's view of the job: kept only while it differs from none
             if self.search != was.search {

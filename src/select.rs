@@ -105,16 +105,16 @@ pub fn default_topping_mix() -> Mix {
 pub fn cross_check(cat: &Catalog, bays: &[Bay]) -> Vec<String> {
     let mut out = Vec::new();
     for b in bays {
-        if let Some(id) = &b.topping_mix {
-            if !cat.mixes.iter().any(|m| &m.id == id) {
-                let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
-                out.push(format!(
-                    "bay '{}': topping_mix '{id}' is not a mix of the catalog{}; it has: {}",
-                    b.name,
-                    crate::input::diag::suggestion(id, ids.iter().copied()),
-                    ids.join(", ")
-                ));
-            }
+        if let Some(id) = &b.topping_mix
+            && !cat.mixes.iter().any(|m| &m.id == id)
+        {
+            let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
+            out.push(format!(
+                "bay '{}': topping_mix '{id}' is not a mix of the catalog{}; it has: {}",
+                b.name,
+                crate::input::diag::suggestion(id, ids.iter().copied()),
+                ids.join(", ")
+            ));
         }
         if !cat.sections.iter().any(|s| b.families.is_empty() || b.families.contains(&s.family)) {
             let fams: Vec<&str> = b.families.iter().map(|f| f.name()).collect();

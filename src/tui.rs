@@ -463,11 +463,11 @@ impl App {
         let keep = self.selected_row().map(|r| r.label.clone());
         self.rows = rows;
         self.refilter();
-        if let Some(label) = keep {
-            if let Some(i) = self.visible.iter().position(|(i, _)| self.rows[*i].label == label) {
-                self.selected = i;
-                self.refresh_detail();
-            }
+        if let Some(label) = keep
+            && let Some(i) = self.visible.iter().position(|(i, _)| self.rows[*i].label == label)
+        {
+            self.selected = i;
+            self.refresh_detail();
         }
     }
 

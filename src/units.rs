@@ -384,10 +384,11 @@ fn normalise(t: &str) -> String {
     let mut t = t.to_string();
     if let Some((ft, rest)) = t.split_once('\'') {
         let rest = rest.trim();
-        if let Some(inch) = rest.strip_prefix('-').and_then(|r| r.trim().strip_suffix('"')) {
-            if !ft.trim().is_empty() && !ft.contains(' ') {
-                t = format!("{} ft {} in", ft.trim(), inch.trim());
-            }
+        if let Some(inch) = rest.strip_prefix('-').and_then(|r| r.trim().strip_suffix('"'))
+            && !ft.trim().is_empty()
+            && !ft.contains(' ')
+        {
+            t = format!("{} ft {} in", ft.trim(), inch.trim());
         }
     }
     // "6 1/2" → "6-1/2": a whole number followed by a bare fraction

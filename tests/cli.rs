@@ -181,3 +181,22 @@ fn web_widths_follow_the_cores() {
     assert!((w[0][1].as_f64().unwrap() - 48.0).abs() < 1e-9);
     assert!((w[10][1].as_f64().unwrap() - 13.75).abs() < 1e-9);
 }
+
+/// Completions offer the values of every option with a fixed set.
+#[test]
+fn completions_offer_the_values_of_fixed_sets() {
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_plankwise"))
+        .args(["completions", "bash"])
+        .output()
+        .unwrap();
+    let text = String::from_utf8_lossy(&out.stdout);
+    for values in [
+        "lightest shallowest least-steel cheapest most-reserve",
+        "U T C",
+        "us si",
+        "text md csv",
+        "two-point four-point",
+    ] {
+        assert!(text.contains(values), "'{values}' not offered:\n{}", &text[..text.len().min(2000)]);
+    }
+}

@@ -19,6 +19,15 @@ fn have_tmux() -> bool {
     if !ok && std::env::var_os("CI").is_some() {
         panic!("tmux is needed for the terminal tests under CI");
     }
+    if !ok {
+        // straight to the standard error, past the test harness's capture,
+        // so a skipped terminal test is seen in the output of `cargo test`
+        use std::io::Write;
+        let _ = writeln!(
+            std::io::stderr(),
+            "\n*** tmux not found: this terminal test is SKIPPED — install tmux to run tests/tui_e2e.rs ***\n"
+        );
+    }
     ok
 }
 
@@ -94,7 +103,6 @@ fn command_with(dir: &std::path::Path, env: &str) -> String {
 #[test]
 fn typing_reranks_searches_writes_and_quits_cleanly() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = std::env::temp_dir().join(format!("plankwise-e2e-{}", std::process::id()));
@@ -132,7 +140,6 @@ fn typing_reranks_searches_writes_and_quits_cleanly() {
 
 fn signal_leaves_terminal_sane(sig: &str) {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = std::env::temp_dir();
@@ -172,7 +179,6 @@ fn sigquit_restores_the_terminal() {
 #[test]
 fn a_panic_restores_the_terminal() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let s = Session::start("panic", &command_with(&std::env::temp_dir(), "PLANKWISE_TEST_PANIC_KEY=P"));
@@ -192,7 +198,6 @@ fn a_panic_restores_the_terminal() {
 #[test]
 fn a_vanished_terminal_ends_the_ui() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let s = Session::start("gone", &command(&std::env::temp_dir()));
@@ -204,10 +209,10 @@ fn a_vanished_terminal_ends_the_ui() {
     tmux(&["-L", &s.socket, "kill-session", "-t", &s.name]);
     let start = Instant::now();
     while std::path::Path::new(&format!("/proc/{pid}")).exists() {
-        if let Ok(st) = std::fs::read_to_string(format!("/proc/{pid}/stat")) {
-            if st.split_whitespace().nth(2) == Some("Z") {
-                break;
-            }
+        if let Ok(st) = std::fs::read_to_string(format!("/proc/{pid}/stat"))
+            && st.split_whitespace().nth(2) == Some("Z")
+        {
+            break;
         }
         if start.elapsed() > Duration::from_secs(5) {
             let _ = Command::new("kill").args(["-9", &pid]).status();
@@ -220,7 +225,6 @@ fn a_vanished_terminal_ends_the_ui() {
 #[test]
 fn a_large_catalog_reranks_off_the_ui_thread() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     // 2500 entries: above the size ranked at once, so the frame after the
@@ -259,7 +263,6 @@ fn a_large_catalog_reranks_off_the_ui_thread() {
 #[test]
 fn the_shortlist_is_never_written_over_the_open_catalog() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = std::env::temp_dir().join(format!("plankwise-e2e-inputs-{}", std::process::id()));
@@ -300,7 +303,6 @@ fn scratch(tag: &str) -> std::path::PathBuf {
 #[test]
 fn esc_after_a_search_never_quits() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = scratch("esc");
@@ -324,7 +326,6 @@ fn esc_after_a_search_never_quits() {
 #[test]
 fn the_detail_pane_scrolls_and_the_compare_view_opens() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = scratch("scroll");
@@ -355,7 +356,6 @@ fn the_detail_pane_scrolls_and_the_compare_view_opens() {
 #[test]
 fn an_si_session_end_to_end() {
     if !have_tmux() {
-        eprintln!("tmux not found: terminal test skipped");
         return;
     }
     let dir = scratch("si");
@@ -403,7 +403,10 @@ fn an_si_session_end_to_end() {
     s.keys(&["C-u", "c", "a", "l", "c", ".", "m", "d", "Enter"]);
     s.wait_for("wrote calc.md");
     let sheet = std::fs::read_to_string(dir.join("calc.md")).unwrap();
-    assert!(sheet.starts_with("# Calculation sheet") && sheet.contains("kN·m") && sheet.contains("[fse_mpa]"), "{sheet}");
+    assert!(
+        sheet.starts_with("# Calculation sheet") && sheet.contains("kN·m") && sheet.contains("[fse_mpa]"),
+        "{sheet}"
+    );
     s.keys(&["q"]);
     s.wait_for("quit anyway? y / n");
     s.keys(&["y"]);

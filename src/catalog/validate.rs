@@ -174,12 +174,13 @@ fn section_starts(text: &str) -> Vec<usize> {
     let (mut basic, mut literal) = (false, false);
     let mut pos = 0;
     for line in text.split_inclusive('\n') {
-        if !basic && !literal {
-            if let Some(rest) = line.trim_start().strip_prefix("[[section]]") {
-                let rest = rest.trim();
-                if pos > 0 && (rest.is_empty() || rest.starts_with('#')) {
-                    starts.push(pos);
-                }
+        if !basic
+            && !literal
+            && let Some(rest) = line.trim_start().strip_prefix("[[section]]")
+        {
+            let rest = rest.trim();
+            if pos > 0 && (rest.is_empty() || rest.starts_with('#')) {
+                starts.push(pos);
             }
         }
         if !literal && line.matches("\"\"\"").count() % 2 == 1 {
@@ -250,14 +251,14 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
                     }
                     g.meta.name = cx.text(&Some(m.name), "catalog", "name");
                     g.meta.producer = cx.text(&m.producer, "catalog", "producer");
-                    if let Some(code) = &m.code {
-                        if code.get_ref() != "ACI 318-19" {
-                            cx.rep.error(
-                                span(code),
-                                "catalog / code",
-                                format!("'{}' is not supported; plankwise checks to 'ACI 318-19'", code.get_ref()),
-                            );
-                        }
+                    if let Some(code) = &m.code
+                        && code.get_ref() != "ACI 318-19"
+                    {
+                        cx.rep.error(
+                            span(code),
+                            "catalog / code",
+                            format!("'{}' is not supported; plankwise checks to 'ACI 318-19'", code.get_ref()),
+                        );
                     }
                     g.meta.notes = m
                         .notes
@@ -558,18 +559,18 @@ fn section(
                 .max_length
                 .or(max_length.flatten())
                 .map_or(limits::LENGTH_FT.1 * 12.0, |m| m.get());
-            if let Some(d) = pat.rows.iter().filter_map(|r| r.debond).map(|d| d.get()).reduce(f64::max) {
-                if d >= longest / 2.0 {
-                    cx.rep.error(
-                        Some(p.span()),
-                        &join(&ppath, "debond"),
-                        format!(
-                            "a debonded length of {} ft reaches half the longest member ({} ft): that strand would be bonded nowhere",
-                            fmt(d / 12.0),
-                            fmt(longest / 12.0)
-                        ),
-                    );
-                }
+            if let Some(d) = pat.rows.iter().filter_map(|r| r.debond).map(|d| d.get()).reduce(f64::max)
+                && d >= longest / 2.0
+            {
+                cx.rep.error(
+                    Some(p.span()),
+                    &join(&ppath, "debond"),
+                    format!(
+                        "a debonded length of {} ft reaches half the longest member ({} ft): that strand would be bonded nowhere",
+                        fmt(d / 12.0),
+                        fmt(longest / 12.0)
+                    ),
+                );
             }
             if patterns.iter().any(|x| x.id == pat.id) {
                 cx.rep.error(

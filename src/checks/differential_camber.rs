@@ -72,9 +72,9 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
 /// it decides the verdict).
 pub fn across_units(ev: &mut Evaluation) {
     let (lo, hi) = ev.camber_range;
-    if let Some(c) = ev.checks.iter_mut().find(|c| c.info.id == INFO.id) {
-        if hi - lo > c.demand + 1e-12 {
-            *c = result(lo, hi, c.capacity, "the units analysed and the bay's erection ages");
-        }
+    if let Some(c) = ev.checks.iter_mut().find(|c| c.info.id == INFO.id)
+        && hi - lo > c.demand + 1e-12
+    {
+        *c = result(lo, hi, c.capacity, "the units analysed and the bay's erection ages");
     }
 }

@@ -195,15 +195,15 @@ impl BayFlags {
             all.push(v);
             k.store(&mut bay.case, all);
         }
-        if let Some(id) = &bay.topping_mix {
-            if !cat.mixes.iter().any(|m| &m.id == id) {
-                let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
-                return Err(msg(format!(
-                    "--topping-mix: no mix '{id}' in the catalog{}; it has: {}",
-                    suggestion(id, ids.iter().copied()),
-                    ids.join(", ")
-                )));
-            }
+        if let Some(id) = &bay.topping_mix
+            && !cat.mixes.iter().any(|m| &m.id == id)
+        {
+            let ids: Vec<&str> = cat.mixes.iter().map(|m| m.id.as_str()).collect();
+            return Err(msg(format!(
+                "--topping-mix: no mix '{id}' in the catalog{}; it has: {}",
+                suggestion(id, ids.iter().copied()),
+                ids.join(", ")
+            )));
         }
         Ok(bay)
     }

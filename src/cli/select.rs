@@ -280,7 +280,7 @@ pub struct ShortlistArgs {
     #[arg(short = 'o', long = "output")]
     output: PathBuf,
     /// text, md or csv (default: from the extension of -o — .md, .csv — else text).
-    #[arg(long)]
+    #[arg(long, value_parser = ["text", "md", "csv"])]
     format: Option<String>,
     /// Members listed per bay (1 or more).
     #[arg(long, default_value_t = 5, value_parser = clap::value_parser!(u32).range(1..))]

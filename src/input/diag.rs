@@ -99,7 +99,7 @@ pub fn localize_message(text: &str, sys: crate::units::System) -> String {
         return text.to_string();
     }
     let parts: Vec<&str> = text.split('\'').collect();
-    if parts.len() % 2 == 0 {
+    if parts.len().is_multiple_of(2) {
         // an odd number of quotes: a feet-inch length or an apostrophe
         return localize(text, sys);
     }

@@ -275,10 +275,10 @@ impl Keymap {
                 km.bindings[idx].keys = keys;
             }
         }
-        if let Some(q) = km.bindings.iter_mut().find(|b| b.action == Action::Quit) {
-            if !q.keys.contains(&Key::Ctrl('c')) {
-                q.keys.push(Key::Ctrl('c'));
-            }
+        if let Some(q) = km.bindings.iter_mut().find(|b| b.action == Action::Quit)
+            && !q.keys.contains(&Key::Ctrl('c'))
+        {
+            q.keys.push(Key::Ctrl('c'));
         }
         (km, problems)
     }

@@ -140,17 +140,16 @@ pub fn localize(text: &str, sys: System) -> String {
     let mut i = 0;
     while i < text.len() {
         // a unit named alone in brackets: "(psi)"
-        if b[i] == b'(' {
-            if let Some(r) = TABLE
+        if b[i] == b'('
+            && let Some(r) = TABLE
                 .iter()
                 .find(|r| text[i + 1..].starts_with(r.us) && text[i + 1 + r.us.len()..].starts_with(')'))
-            {
-                out.push('(');
-                out.push_str(r.si);
-                out.push(')');
-                i += r.us.len() + 2;
-                continue;
-            }
+        {
+            out.push('(');
+            out.push_str(r.si);
+            out.push(')');
+            i += r.us.len() + 2;
+            continue;
         }
         let starts_number = b[i].is_ascii_digit() && !after_word(b, i);
         if starts_number {
@@ -204,10 +203,10 @@ fn number(s: &str) -> Option<(f64, usize, usize)> {
     if let Some((f, used)) = frac(s) {
         return Some((f, 3, used));
     }
-    if let Some(rest) = s[k..].strip_prefix(' ') {
-        if let Some((f, used)) = frac(rest).filter(|(f, _)| *f < 1.0) {
-            return Some((v + f, 3, k + 1 + used));
-        }
+    if let Some(rest) = s[k..].strip_prefix(' ')
+        && let Some((f, used)) = frac(rest).filter(|(f, _)| *f < 1.0)
+    {
+        return Some((v + f, 3, k + 1 + used));
     }
     Some((v, digits, k))
 }

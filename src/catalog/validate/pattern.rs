@@ -74,7 +74,7 @@ pub(super) fn row_positions(
         }
         FamilySpec::DoubleTee(t) => {
             let stems = t.stem_centres();
-            if n % stems.len() != 0 {
+            if !n.is_multiple_of(stems.len()) {
                 cx.rep.error(
                     Some(row.span()),
                     path,
@@ -194,15 +194,15 @@ pub(super) fn pattern(
             (height, "height", Some(&rr.height)),
             (end_height.flatten(), "end_height", rr.end_height.as_ref()),
         ] {
-            if let (Some(h), Some(s)) = (h, s) {
-                if h.get() >= depth {
-                    cx.rep.error(
-                        span(s),
-                        &join(&rpath, key),
-                        format!("'{}' is not below the top of the {} in section", s.get_ref(), fmt(depth)),
-                    );
-                    ok = false;
-                }
+            if let (Some(h), Some(s)) = (h, s)
+                && h.get() >= depth
+            {
+                cx.rep.error(
+                    span(s),
+                    &join(&rpath, key),
+                    format!("'{}' is not below the top of the {} in section", s.get_ref(), fmt(depth)),
+                );
+                ok = false;
             }
         }
         if end_height.is_some() && !family.allows_depressed() {
@@ -336,14 +336,15 @@ pub(super) fn pattern(
         }
     }
     let depressed = rows.iter().any(|r| r.end_height.is_some());
-    if let Ok(Some(h)) = hold_down.ok_or(()) {
-        if !depressed && rows_ok {
-            cx.rep.warn(
-                r.hold_down.as_ref().map(|h| h.span()),
-                &join(path, "hold_down"),
-                format!("hold_down {h} is given but no row has an end_height; the strands are straight"),
-            );
-        }
+    if let Ok(Some(h)) = hold_down.ok_or(())
+        && !depressed
+        && rows_ok
+    {
+        cx.rep.warn(
+            r.hold_down.as_ref().map(|h| h.span()),
+            &join(path, "hold_down"),
+            format!("hold_down {h} is given but no row has an end_height; the strands are straight"),
+        );
     }
     if depressed && matches!(hold_down, Some(None)) {
         cx.rep.error(
@@ -361,15 +362,15 @@ pub(super) fn pattern(
         let area = cx.ranged::<crate::units::AreaK>(&rb.area, &bpath, "area", limits::BAR_A_IN2, "in2");
         let fy = cx.ranged::<crate::units::StressK>(&rb.fy, &bpath, "fy", limits::FY_KSI, "ksi");
         let height = cx.positive_len(&rb.height, &bpath, "height");
-        if let Some(h) = height {
-            if h.get() >= depth {
-                cx.rep.error(
-                    span(&rb.height),
-                    &join(&bpath, "height"),
-                    format!("'{}' is not below the top of the {} in section", rb.height.get_ref(), fmt(depth)),
-                );
-                rows_ok = false;
-            }
+        if let Some(h) = height
+            && h.get() >= depth
+        {
+            cx.rep.error(
+                span(&rb.height),
+                &join(&bpath, "height"),
+                format!("'{}' is not below the top of the {} in section", rb.height.get_ref(), fmt(depth)),
+            );
+            rows_ok = false;
         }
         match (count, area, fy, height) {
             (Some(count), Some(area), Some(fy), Some(height)) => bars.push(Bar { count, area, fy, height }),
