@@ -1005,6 +1005,35 @@ pub fn check_text(s: &str) -> Result<(), String> {
     }
 }
 
+/// A refusal's allowed range in the display system: "… outside the
+/// allowed range 2 to 200 ft" reads "… 0.61 to 61 m" in SI. Other words
+/// are kept (the user's own text is quoted as typed).
+pub fn range_in(message: &str, sys: System) -> String {
+    const AT: &str = "allowed range ";
+    let Some(i) = message.find(AT) else { return message.to_string() };
+    if sys == System::Us {
+        return message.to_string();
+    }
+    let rest = &message[i + AT.len()..];
+    let mut words = rest.splitn(4, ' ');
+    let (Some(lo), Some("to"), Some(hi), Some(unit)) = (words.next(), words.next(), words.next(), words.next()) else {
+        return message.to_string();
+    };
+    let (Ok(lo), Ok(hi)) = (lo.parse::<f64>(), hi.parse::<f64>()) else {
+        return message.to_string();
+    };
+    match crate::units::display::find(unit.trim()) {
+        Some(r) => format!(
+            "{}{AT}{} to {} {}",
+            &message[..i],
+            significant3(lo * r.factor),
+            significant3(hi * r.factor),
+            r.si
+        ),
+        None => message.to_string(),
+    }
+}
+
 pub(crate) fn range_error(text: &str, r: &Range) -> String {
     format!(
         "{} is outside the allowed range {} to {} {}",

@@ -828,7 +828,10 @@ impl App {
                         };
                         self.say(format!("{}: {t}{more}", c.label), false);
                     }
-                    Err(e) => self.say(format!("{}: {e}", c.label), true),
+                    Err(e) => {
+                        let e = crate::criteria::range_in(&e, self.units);
+                        self.say(format!("{}: {e}", c.label), true)
+                    }
                 }
             }
             PaneRow::Item(..) if text.trim().is_empty() => self.remove_item(self.field),

@@ -286,3 +286,15 @@ fn a_metric_file_is_told_its_problems_in_metric_units() {
     let e = Catalog::from_str(&us, "us.toml").unwrap_err().to_string();
     assert!(e.contains(" in ") && !e.contains(" mm"), "{e}");
 }
+
+#[test]
+fn a_refused_flag_says_its_range_in_the_units_of_the_run() {
+    let (code, _, err) = run(&["rank", "--span", "100 m", "--units", "si"]);
+    assert_eq!(code, 2);
+    assert!(err.contains("--span: '100 m' is outside the allowed range 0.61 to 61 m"), "{err}");
+    let (_, _, err) = run(&["rank", "--span", "100 m"]);
+    assert!(err.contains("allowed range 2 to 200 ft"), "{err}");
+    // the SI demo catalog names SI: its runs say SI without the flag
+    let (_, _, err) = run(&["rank", "catalog/demo-si.toml", "--live", "9000 kPa", "--span", "8 m"]);
+    assert!(err.contains("kPa") && !err.contains("psf"), "{err}");
+}

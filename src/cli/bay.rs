@@ -25,6 +25,9 @@ pub struct BayFlags {
     pub line_live: Vec<String>,
     /// Items by kind key, as typed: "p=4 kip, at=12 ft".
     pub items: Vec<(&'static str, String)>,
+    /// The display system the command's `--units` names, for the words of
+    /// a refused value.
+    pub units: Option<plankwise::units::System>,
 }
 
 /// The values a choice may take, offered to shell completion and help;
@@ -120,6 +123,11 @@ impl FromArgMatches for BayFlags {
                 }
             }
         }
+        // the command's own --units (UnitsFlag), when it has one
+        f.units = m.try_get_one::<super::UnitsArg>("units").ok().flatten().map(|u| match u {
+            super::UnitsArg::Us => plankwise::units::System::Us,
+            super::UnitsArg::Si => plankwise::units::System::Si,
+        });
         f.line_dead = m.get_many::<String>("line_dead").map(|v| v.cloned().collect()).unwrap_or_default();
         f.line_live = m.get_many::<String>("line_live").map(|v| v.cloned().collect()).unwrap_or_default();
         for k in plankwise::items::ITEMS {
@@ -166,7 +174,10 @@ impl BayFlags {
         for c in CRITERIA {
             let flag = c.flag.unwrap_or(c.key);
             match self.given.iter().find(|(k, _)| *k == c.key) {
-                Some((_, text)) => c.apply(&mut bay, text).map_err(|e| msg(format!("--{flag}: {e}")))?,
+                Some((_, text)) => c.apply(&mut bay, text).map_err(|e| {
+                    let sys = plankwise::units::display::choose(self.units, None, cat.meta.units);
+                    msg(format!("--{flag}: {}", plankwise::criteria::range_in(&e, sys)))
+                })?,
                 None if c.required && c.flag.is_some() => {
                     return Err(msg(format!("--{flag} is needed (or --job with a job file)")));
                 }
