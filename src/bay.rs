@@ -75,6 +75,9 @@ pub struct Bay {
     pub pieces: Option<u32>,
     /// The members marked for the shortlist (entry labels), kept with the job.
     pub marked: Vec<String>,
+    /// The bay whose units sit beside this bay's along a shared line (its
+    /// name): the shortlist compares their cambers at erection.
+    pub beside: Option<String>,
 }
 
 impl Bay {
@@ -90,6 +93,7 @@ impl Bay {
             area: None,
             pieces: None,
             marked: Vec::new(),
+            beside: None,
         }
     }
 }

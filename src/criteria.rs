@@ -955,6 +955,24 @@ pub const CRITERIA: &[Criterion] = &[
         },
     },
     Criterion {
+        key: "beside",
+        label: "Beside bay",
+        flag: None,
+        help: "the bay whose units sit beside this bay's along a shared line: the shortlist compares the cambers at erection of the two bays' first members",
+        form: Form::Text,
+        default: "",
+        required: false,
+        inherit: false,
+        units: ("", ""),
+        get: |b| Value::Text(b.beside.clone()),
+        set: |b, v| {
+            b.beside = match v {
+                Value::Text(Some(t)) if !t.trim().is_empty() => Some(t),
+                _ => None,
+            }
+        },
+    },
+    Criterion {
         key: "name",
         label: "Name",
         flag: None,

@@ -116,6 +116,17 @@ pub fn cross_check(cat: &Catalog, bays: &[Bay]) -> Vec<String> {
                 ids.join(", ")
             ));
         }
+        if let Some(other) = &b.beside
+            && (other == &b.name || !bays.iter().any(|x| &x.name == other))
+        {
+            let names: Vec<&str> = bays.iter().map(|x| x.name.as_str()).filter(|n| *n != b.name).collect();
+            out.push(format!(
+                "bay '{}': beside '{other}' is not another bay of the job{}; it has: {}",
+                b.name,
+                crate::input::diag::suggestion(other, names.iter().copied()),
+                names.join(", ")
+            ));
+        }
         if !cat.sections.iter().any(|s| b.families.is_empty() || b.families.contains(&s.family)) {
             let fams: Vec<&str> = b.families.iter().map(|f| f.name()).collect();
             out.push(format!(

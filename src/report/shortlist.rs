@@ -193,17 +193,21 @@ pub fn write_each<'c>(
     match format {
         Format::Text => {
             wrap_into(w, |b| text_head(b, job, cat, sys))?;
+            let mut seen = Vec::new();
             for (i, bay) in job.bays.iter().enumerate() {
                 let r = rank(i, bay);
-                wrap_into(w, |b| text_bay(b, cat, i, bay, &r, top, sys))?;
+                let beside = beside_line(cat, job, bay, &r, &mut seen, sys);
+                wrap_into(w, |b| text_bay(b, cat, i, bay, &r, top, sys, beside.as_deref()))?;
             }
             wrap_into(w, |b| text_tail(b, job))
         }
         Format::Markdown => {
             md_head(w, job, cat, sys)?;
+            let mut seen = Vec::new();
             for (i, bay) in job.bays.iter().enumerate() {
                 let r = rank(i, bay);
-                md_bay(w, cat, i, bay, &r, top, sys)?;
+                let beside = beside_line(cat, job, bay, &r, &mut seen, sys);
+                md_bay(w, cat, i, bay, &r, top, sys, beside.as_deref())?;
             }
             md_tail(w, job)
         }
@@ -217,6 +221,40 @@ pub fn write_each<'c>(
         }
     }
 }
+/// The first listed member of each bay written so far: (bay, member, its
+/// camber at erection by the age-adjusted method, in).
+type Seen = Vec<(String, String, f64)>;
+
+/// Differential camber across a shared line: when this bay and one written
+/// before it name each other as `beside`, their first members' cambers at
+/// erection compared against this bay's `camber_limit` (common practice,
+/// no source).
+fn beside_line(cat: &Catalog, job: &Job, bay: &Bay, r: &BayRanking, seen: &mut Seen, sys: System) -> Option<String> {
+    let first = r.viable.first()?;
+    let e = evaluation(cat, bay, &first.entry);
+    let mine = e.aged.erection_in;
+    let label = first.entry.label();
+    let pair = |other: &Bay| bay.beside.as_deref() == Some(other.name.as_str()) || other.beside.as_deref() == Some(bay.name.as_str());
+    let line = seen
+        .iter()
+        .filter(|(name, _, _)| job.bays.iter().any(|b| &b.name == name && pair(b)))
+        .map(|(name, other, theirs)| {
+            let d = (mine - theirs).abs();
+            let limit = bay.case.camber_limit.get();
+            format!(
+                "beside bay '{name}' along a shared line: camber at erection {} here ({label}) against {} there ({other}), {} apart — {} the {} limit (common practice, no source)",
+                display::with_unit(mine, "in", 2, sys),
+                display::with_unit(*theirs, "in", 2, sys),
+                display::with_unit(d, "in", 2, sys),
+                if d <= limit + 1e-9 { "within" } else { "BEYOND" },
+                display::with_unit(limit, "in", 2, sys)
+            )
+        })
+        .next();
+    seen.push((bay.name.clone(), label, mine));
+    line
+}
+
 fn header_lines(job: &Job, cat: &Catalog, sys: System) -> Vec<String> {
     vec![
         format!("Project   {}", job.project),
@@ -275,7 +313,17 @@ fn text_head(w: &mut impl Write, job: &Job, cat: &Catalog, sys: System) -> io::R
     Ok(())
 }
 
-fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize, sys: System) -> io::Result<()> {
+#[allow(clippy::too_many_arguments)]
+fn text_bay(
+    w: &mut impl Write,
+    cat: &Catalog,
+    i: usize,
+    bay: &Bay,
+    ranking: &BayRanking,
+    top: usize,
+    sys: System,
+    beside: Option<&str>,
+) -> io::Result<()> {
     if i > 0 {
         write!(w, "\x0c")?;
     }
@@ -284,6 +332,9 @@ fn text_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &Ba
     writeln!(w, "{}", "-".repeat(78))?;
     for c in criteria(bay, sys) {
         writeln!(w, "  {c}")?;
+    }
+    if let Some(l) = beside {
+        writeln!(w, "  {l}")?;
     }
     writeln!(w)?;
     if ranking.viable.is_empty() {
@@ -362,7 +413,17 @@ fn md_head(w: &mut impl Write, job: &Job, cat: &Catalog, sys: System) -> io::Res
     Ok(())
 }
 
-fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayRanking, top: usize, sys: System) -> io::Result<()> {
+#[allow(clippy::too_many_arguments)]
+fn md_bay(
+    w: &mut impl Write,
+    cat: &Catalog,
+    i: usize,
+    bay: &Bay,
+    ranking: &BayRanking,
+    top: usize,
+    sys: System,
+    beside: Option<&str>,
+) -> io::Result<()> {
     let b = BayList { bay, ranking };
     {
         writeln!(w)?;
@@ -370,6 +431,9 @@ fn md_bay(w: &mut impl Write, cat: &Catalog, i: usize, bay: &Bay, ranking: &BayR
         writeln!(w)?;
         for c in criteria(b.bay, sys) {
             writeln!(w, "- {c}")?;
+        }
+        if let Some(l) = beside {
+            writeln!(w, "- {l}")?;
         }
         writeln!(w)?;
         if b.ranking.viable.is_empty() {
