@@ -107,6 +107,8 @@ enum Command {
     Spanmap(Box<select::SpanmapArgs>),
     /// Write the shortlist for the supplier (text, Markdown or CSV).
     Shortlist(Box<select::ShortlistArgs>),
+    /// Print the manual page (roff; read it with `plankwise manual | man -l -`).
+    Manual,
     /// Print a shell completion script (bash, zsh, fish, elvish, powershell).
     Completions {
         /// The shell.
@@ -177,6 +179,7 @@ pub fn run() -> i32 {
         Some(Command::Spanmap(a)) => select::spanmap(&a),
         Some(Command::Capacity(a)) => select::capacity(&a),
         Some(Command::Shortlist(a)) => select::shortlist(&a),
+        Some(Command::Manual) => manual().map_err(Failure::Io),
         Some(Command::Completions { shell }) => {
             use clap::CommandFactory;
             clap_complete::generate(shell, &mut Args::command(), "plankwise", &mut io::stdout());
@@ -301,6 +304,46 @@ fn demo(catalog: Option<&PathBuf>, units: UnitsFlag) -> Result<i32, Failure> {
             "(plankwise is not installed: `cargo install --path .` puts it on your PATH; until then the commands above run it from this folder)"
         )?;
     }
+    Ok(OK)
+}
+
+/// The manual page, made from the clap definitions (`clap_mangen`): the
+/// program, every command with its synopsis and options, then the exit
+/// codes, the files and the cautions.
+fn manual() -> io::Result<i32> {
+    use clap::CommandFactory;
+    let cmd = Args::command();
+    let man = clap_mangen::Man::new(cmd.clone());
+    let mut out: Vec<u8> = Vec::new();
+    man.render_title(&mut out)?;
+    man.render_name_section(&mut out)?;
+    man.render_synopsis_section(&mut out)?;
+    man.render_description_section(&mut out)?;
+    man.render_options_section(&mut out)?;
+    man.render_subcommands_section(&mut out)?;
+    out.extend_from_slice(b".SH COMMANDS\n");
+    for sub in cmd.get_subcommands().filter(|c| c.get_name() != "help") {
+        let name = sub.get_name().to_string();
+        let page = clap_mangen::Man::new(sub.clone().name(format!("plankwise {name}")));
+        let mut part: Vec<u8> = Vec::new();
+        page.render_synopsis_section(&mut part)?;
+        page.render_description_section(&mut part)?;
+        page.render_options_section(&mut part)?;
+        let part = String::from_utf8_lossy(&part)
+            .replace(".SH SYNOPSIS", &format!(".SS \"{name}\"\n.PP\nSynopsis:"))
+            .replace(".SH DESCRIPTION", ".PP\nDescription:")
+            .replace(".SH OPTIONS", ".PP\nOptions:");
+        out.extend_from_slice(part.as_bytes());
+    }
+    let tail = format!(
+        ".SH EXIT STATUS\n.TP\n0\nsuccess\n.TP\n1\nworked, but no member is viable for some bay\n.TP\n2\nbad input (every problem listed with file, line, column, field, what was found and what is allowed) or a failure; nothing is written\n\
+.SH FILES\n.TP\ncatalog (TOML)\nthe producer's mixes, strands, sections and strand patterns, every value a string with its unit (\\(dq8 in\\(dq, \\(dq41.4 MPa\\(dq); see catalog/README.md\n.TP\njob (TOML)\nthe project and its bays: [job], [defaults] and [[bay]] with the criteria, loads and openings; saved by the UI with its edits in place and a .bak backup\n.TP\n~/.config/plankwise/keys.toml\nkey bindings: action = [\\(dqkey\\(dq, ...]\n\
+.SH UNITS\nEvery number follows one display system per run: --units us|si, else the job's units, else the catalog's, else US.\n\
+.SH CAUTIONS\n{}\n",
+        report::CAUTIONS.join("\n.br\n")
+    );
+    out.extend_from_slice(tail.as_bytes());
+    io::stdout().lock().write_all(&out)?;
     Ok(OK)
 }
 

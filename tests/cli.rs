@@ -200,3 +200,44 @@ fn completions_offer_the_values_of_fixed_sets() {
         assert!(text.contains(values), "'{values}' not offered:\n{}", &text[..text.len().min(2000)]);
     }
 }
+
+/// The manual page: every command, its options, the exit codes, the files and the cautions.
+#[test]
+fn the_manual_covers_every_command_exit_code_and_caution() {
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_plankwise"))
+        .arg("manual")
+        .output()
+        .unwrap();
+    assert!(out.status.success());
+    let page = String::from_utf8_lossy(&out.stdout);
+    assert!(page.contains(".TH plankwise 1"), "{page}");
+    for cmd in [
+        "validate",
+        "sections",
+        "check",
+        "handling",
+        "rank",
+        "envelope",
+        "capacity",
+        "spanmap",
+        "shortlist",
+        "manual",
+        "completions",
+    ] {
+        assert!(page.contains(&format!(".SS \"{cmd}\"")), "{cmd} has its section");
+    }
+    for want in [
+        ".SH EXIT STATUS",
+        "no member is viable",
+        ".SH FILES",
+        "keys.toml",
+        ".SH CAUTIONS",
+        "\\-\\-sheet",
+        "\\-\\-units",
+    ] {
+        assert!(page.contains(want), "{want}");
+    }
+    for c in plankwise::report::CAUTIONS {
+        assert!(page.contains(&c.replace('-', "\\-")) || page.contains(c), "{c}");
+    }
+}
