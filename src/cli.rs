@@ -109,6 +109,8 @@ enum Command {
     Shortlist(Box<select::ShortlistArgs>),
     /// Print the manual page (roff; read it with `plankwise manual | man -l -`).
     Manual,
+    /// Print the JSON Schema of the job file (for TOML-aware editors).
+    JobSchema,
     /// Print a shell completion script (bash, zsh, fish, elvish, powershell).
     Completions {
         /// The shell.
@@ -180,6 +182,7 @@ pub fn run() -> i32 {
         Some(Command::Capacity(a)) => select::capacity(&a),
         Some(Command::Shortlist(a)) => select::shortlist(&a),
         Some(Command::Manual) => manual().map_err(Failure::Io),
+        Some(Command::JobSchema) => job_schema().map_err(Failure::Io),
         Some(Command::Completions { shell }) => {
             use clap::CommandFactory;
             clap_complete::generate(shell, &mut Args::command(), "plankwise", &mut io::stdout());
@@ -344,6 +347,14 @@ fn manual() -> io::Result<i32> {
     );
     out.extend_from_slice(tail.as_bytes());
     io::stdout().lock().write_all(&out)?;
+    Ok(OK)
+}
+
+/// `plankwise job-schema`: the job file's JSON Schema.
+fn job_schema() -> io::Result<i32> {
+    let mut out = io::stdout().lock();
+    serde_json::to_writer_pretty(&mut out, &plankwise::schema::job()).map_err(io::Error::from)?;
+    writeln!(out)?;
     Ok(OK)
 }
 

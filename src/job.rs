@@ -79,6 +79,23 @@ struct RawJobMeta {
     hide_failing: Option<Spanned<bool>>,
 }
 
+/// The keys of `[job]`: (key, kind, meaning) — the schema's source; a test
+/// proves the reader takes exactly these.
+pub const JOB_KEYS: &[(&str, &str, &str)] = &[
+    ("project", "text", "project name, printed on the shortlist (required)"),
+    ("engineer", "text", "engineer"),
+    ("date", "text", "date as you want it printed"),
+    ("code", "text", "code basis (default \"ACI 318-19\")"),
+    ("notes", "list", "printed under Notes on the shortlist"),
+    ("units", "units", "display units of every output: us or si (--units comes first)"),
+    ("search", "text", "the UI's search when the job was last saved from it"),
+    (
+        "hide_failing",
+        "boolean",
+        "the UI hid the non-viable candidates when the job was last saved from it",
+    ),
+];
+
 const TOP_KEYS: &[&str] = &["job", "defaults", "bay"];
 /// Bay keys that are not criteria: the items ([`crate::items::ITEMS`]:
 /// line, point, strip and patch loads, openings) and the shortlist marks.

@@ -32,6 +32,7 @@ pub mod material;
 pub mod member;
 pub mod prestress;
 pub mod report;
+pub mod schema;
 pub mod section;
 pub mod select;
 pub mod strength;

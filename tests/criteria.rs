@@ -347,3 +347,44 @@ fn saving_edits_only_the_item_that_changed() {
     let back = Job::from_str(&saved, "j.toml").unwrap();
     assert_eq!(k.list(&back.bays[0].case).len(), 2);
 }
+
+/// The job file's schema: the committed copy is the generated one, every
+/// `[job]` key of the schema is read and no other, and every bay criterion
+/// and kind of load is in it with its description.
+#[test]
+fn the_job_schema_is_generated_from_the_definitions() {
+    let generated = serde_json::to_string_pretty(&plankwise::schema::job()).unwrap() + "\n";
+    let path = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("catalog/job.schema.json");
+    if std::env::var_os("PLANKWISE_BLESS").is_some() {
+        std::fs::write(&path, &generated).unwrap();
+    }
+    assert_eq!(
+        std::fs::read_to_string(&path).unwrap(),
+        generated,
+        "regenerate: plankwise job-schema > catalog/job.schema.json"
+    );
+    let schema = plankwise::schema::job();
+    let bay = &schema["properties"]["bay"]["items"]["properties"];
+    for c in plankwise::criteria::CRITERIA {
+        assert!(bay[c.key]["description"].as_str().is_some_and(|d| d.contains(c.help)), "{}", c.key);
+    }
+    for k in plankwise::items::ITEMS {
+        assert!(bay[k.key]["items"]["properties"].is_object(), "{}", k.key);
+    }
+    // the reader takes every [job] key of the schema, and refuses another
+    let mut text = String::from("[job]\n");
+    for (key, kind, _) in plankwise::job::JOB_KEYS {
+        text.push_str(&match *kind {
+            "list" => format!("{key} = [\"a\"]\n"),
+            "boolean" => format!("{key} = true\n"),
+            "units" => format!("{key} = \"si\"\n"),
+            _ => format!("{key} = \"x\"\n"),
+        });
+    }
+    text.push_str("[[bay]]\nname = \"b\"\nspan = \"20 ft\"\n");
+    Job::from_str(&text, "all.toml").unwrap_or_else(|e| panic!("{e}"));
+    let e = Job::from_str(&text.replace("[job]\n", "[job]\nmystery = 1\n"), "x.toml")
+        .unwrap_err()
+        .to_string();
+    assert!(e.contains("mystery"), "{e}");
+}
