@@ -559,13 +559,7 @@ fn handling(a: &CheckArgs) -> Result<i32, Failure> {
     let bay = a.bay.to_bay(&cat)?;
     let case = plankwise::select::case_for(&bay, bay.toppings[0], &plankwise::select::topping_mix(&cat, &bay));
     let m = plankwise::member::Member::new(section, pattern, section.mix(&cat), &case);
-    let setup = plankwise::handling::Setup {
-        rigging: case.rigging,
-        lift_at: case.lift_at.map(|l| l.get()),
-        bunk_at: case.bunk_at.map(|l| l.get()),
-        erection_age: case.erection_age,
-    };
-    let stages = plankwise::handling::stages(&m, &setup);
+    let stages = plankwise::handling::stages(&m, &plankwise::handling::Setup::of(&case));
     let sys = a.units.system(None, &cat);
     let mut out = io::stdout().lock();
     if a.json {

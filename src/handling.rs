@@ -167,6 +167,18 @@ pub struct Setup {
 /// the prestress (next-capabilities §3.4, common practice, no source).
 pub const LIFT_TRIALS: [f64; 9] = [0.04, 0.06, 0.08, 0.10, 0.12, 0.14, 0.16, 0.18, TWO_POINT];
 
+impl Setup {
+    /// The handling choices a bay's case makes.
+    pub fn of(c: &crate::case::DesignCase) -> Setup {
+        Setup {
+            rigging: c.rigging,
+            lift_at: c.lift_at.map(|l| l.get()),
+            bunk_at: c.bunk_at.map(|l| l.get()),
+            erection_age: c.erection_age,
+        }
+    }
+}
+
 /// Every stage of a member. With two-point rigging and no lift points
 /// given, the lifts (and the dunnage under them) go where the stripping
 /// stage — the most prestress on the weakest concrete — fares best among

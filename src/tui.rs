@@ -509,6 +509,12 @@ impl App {
         self.selected_row().map(|r| self.entry_of(r))
     }
 
+    /// The design case of a row: the current bay with the row's topping.
+    pub fn case_of(&self, r: &Row) -> crate::case::DesignCase {
+        let bay = self.current_bay();
+        case_for(bay, r.topping, &topping_mix(&self.catalog, bay))
+    }
+
     fn entry_of(&self, r: &Row) -> Entry<'_> {
         let s = &self.catalog.sections[r.section];
         Entry {
@@ -527,9 +533,8 @@ impl App {
             self.chart.clear();
             return;
         };
-        let bay = self.current_bay().clone();
         let e = self.entry_of(&r);
-        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        let case = self.case_of(&r);
         self.detail = Some(crate::checks::evaluate(&e.candidate(), &case));
         self.chart.clear();
         self.camber.clear();
@@ -551,9 +556,8 @@ impl App {
             self.camber.clear();
             return;
         };
-        let bay = self.current_bay().clone();
         let e = self.entry_of(&r);
-        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        let case = self.case_of(&r);
         let m = crate::member::Member::new(e.section, e.pattern, e.mix, &case);
         self.camber = crate::camber::profile(&m, &ev.camber, App::CAMBER_POINTS);
     }
@@ -564,9 +568,8 @@ impl App {
             self.camber_age.clear();
             return;
         };
-        let bay = self.current_bay().clone();
         let e = self.entry_of(&r);
-        let case = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+        let case = self.case_of(&r);
         let m = crate::member::Member::new(e.section, e.pattern, e.mix, &case);
         let x = crate::camber::aged_inputs(&m, &ev.camber);
         let cond = crate::checks::aging_conditions(&m);
@@ -586,9 +589,8 @@ impl App {
 
     /// Evaluate the bay's marked candidates (at most four) for the compare view.
     pub fn refresh_compare(&mut self) {
-        let bay = self.current_bay().clone();
-        let tm = topping_mix(&self.catalog, &bay);
-        let rows: Vec<Row> = bay
+        let rows: Vec<Row> = self
+            .current_bay()
             .marked
             .iter()
             .filter_map(|m| self.rows.iter().find(|r| &r.label == m))
@@ -599,7 +601,7 @@ impl App {
             .iter()
             .map(|r| {
                 let e = self.entry_of(r);
-                let case = case_for(&bay, r.topping, &tm);
+                let case = self.case_of(r);
                 (r.label.clone(), r.metrics, crate::checks::evaluate(&e.candidate(), &case))
             })
             .collect();
@@ -623,7 +625,7 @@ impl App {
             .iter()
             .map(|r| {
                 let e = self.entry_of(r);
-                let base = case_for(&bay, r.topping, &topping_mix(&self.catalog, &bay));
+                let base = self.case_of(r);
                 let lims = spans
                     .iter()
                     .map(|&s| {

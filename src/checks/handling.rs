@@ -28,23 +28,12 @@ pub const INFO: CheckInfo = CheckInfo {
     load_driven: false,
 };
 
-/// The bay's handling choices for a member.
-pub fn setup(an: &Analysis) -> crate::handling::Setup {
-    let c = an.member.case;
-    crate::handling::Setup {
-        rigging: c.rigging,
-        lift_at: c.lift_at.map(|l| l.get()),
-        bunk_at: c.bunk_at.map(|l| l.get()),
-        erection_age: c.erection_age,
-    }
-}
-
 /// Run the check: the worst stage.
 pub fn run(an: &Analysis) -> Option<CheckResult> {
     if !an.member.case.handling {
         return None;
     }
-    let stages = crate::handling::stages(&an.member, &setup(an));
+    let stages = crate::handling::stages(&an.member, &crate::handling::Setup::of(an.member.case));
     let worst = stages.iter().max_by(|a, b| a.ratio().total_cmp(&b.ratio()))?;
     let t = (-worst.tension_psi).max(0.0) / worst.tension_limit_psi;
     let c = worst.compression_psi.max(0.0) / worst.compression_limit_psi;

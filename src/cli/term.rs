@@ -53,13 +53,20 @@ struct Inputs {
     catalog: Option<PathBuf>,
 }
 
-fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::Format, force: bool) -> Result<String, String> {
+/// The open files a write must not land on, once `path` is known to be a
+/// place the UI may write ("exists" when it holds a file and `force` is off:
+/// the UI then asks).
+fn writable<'a>(app: &'a App, inputs: &'a Inputs, path: &Path, force: bool) -> Result<Vec<&'a Path>, String> {
     let open: Vec<&Path> = inputs.catalog.iter().chain(app.job_path.iter()).map(|p| p.as_path()).collect();
     match plankwise::files::writable(path, &open, force) {
-        Err(plankwise::files::Refusal::Exists) => return Err("exists".into()),
-        Err(e) => return Err(format!("'{}' {e}", path.display())),
-        Ok(_) => {}
+        Err(plankwise::files::Refusal::Exists) => Err("exists".into()),
+        Err(e) => Err(format!("'{}' {e}", path.display())),
+        Ok(_) => Ok(open),
     }
+}
+
+fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::Format, force: bool) -> Result<String, String> {
+    let open = writable(app, inputs, path, force)?;
     let mut buf = Vec::new();
     shortlist::write_each(&mut buf, format, &app.job, &app.catalog, 3, app.units, &mut |i, bay| {
         let mut r = rank_bay(&app.catalog, bay, None);
@@ -75,17 +82,12 @@ fn write_shortlist(app: &App, inputs: &Inputs, path: &Path, format: shortlist::F
 }
 
 fn write_sheet(app: &App, inputs: &Inputs, path: &Path, force: bool) -> Result<String, String> {
-    let open: Vec<&Path> = inputs.catalog.iter().chain(app.job_path.iter()).map(|p| p.as_path()).collect();
-    match plankwise::files::writable(path, &open, force) {
-        Err(plankwise::files::Refusal::Exists) => return Err("exists".into()),
-        Err(e) => return Err(format!("'{}' {e}", path.display())),
-        Ok(_) => {}
-    }
+    let open = writable(app, inputs, path, force)?;
     let (Some(row), Some(entry), Some(ev)) = (app.selected_row(), app.selected_entry(), app.detail.as_ref()) else {
         return Err("select a candidate first".into());
     };
     let bay = app.current_bay();
-    let case = plankwise::select::case_for(bay, row.topping, &plankwise::select::topping_mix(&app.catalog, bay));
+    let case = app.case_of(row);
     let j = plankwise::report::check::to_json(&entry.candidate(), &case, ev);
     let title = format!("{} — {} (bay '{}')", entry.section.designation, entry.pattern.designation, bay.name);
     let md = path.extension().is_some_and(|e| e.eq_ignore_ascii_case("md"));

@@ -320,11 +320,7 @@ fn detail(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     ];
     // which units the bay's openings cut, for this member's width
     if let Some(e) = app.selected_entry() {
-        let case = crate::select::case_for(
-            app.current_bay(),
-            r.topping,
-            &crate::select::topping_mix(&app.catalog, app.current_bay()),
-        );
+        let case = app.case_of(r);
         for o in crate::checks::describe_openings_as(&e.candidate(), &case, true) {
             lines.push(Line::from(crate::input::escape_controls(&display::localize(&o, sys))).style(t.muted));
         }
