@@ -7,6 +7,7 @@
 //! is allowed; see [`crate::input::diag::Problem`]. The key reference is
 //! `catalog/README.md`.
 
+pub mod keys;
 pub mod raw;
 pub mod validate;
 

@@ -111,6 +111,8 @@ enum Command {
     Manual,
     /// Print the JSON Schema of the job file (for TOML-aware editors).
     JobSchema,
+    /// Print the JSON Schema of the catalog file (for TOML-aware editors).
+    CatalogSchema,
     /// Print a shell completion script (bash, zsh, fish, elvish, powershell).
     Completions {
         /// The shell.
@@ -182,7 +184,8 @@ pub fn run() -> i32 {
         Some(Command::Capacity(a)) => select::capacity(&a),
         Some(Command::Shortlist(a)) => select::shortlist(&a),
         Some(Command::Manual) => manual().map_err(Failure::Io),
-        Some(Command::JobSchema) => job_schema().map_err(Failure::Io),
+        Some(Command::JobSchema) => schema(plankwise::schema::job()).map_err(Failure::Io),
+        Some(Command::CatalogSchema) => schema(plankwise::schema::catalog()).map_err(Failure::Io),
         Some(Command::Completions { shell }) => {
             use clap::CommandFactory;
             clap_complete::generate(shell, &mut Args::command(), "plankwise", &mut io::stdout());
@@ -350,10 +353,10 @@ fn manual() -> io::Result<i32> {
     Ok(OK)
 }
 
-/// `plankwise job-schema`: the job file's JSON Schema.
-fn job_schema() -> io::Result<i32> {
+/// `plankwise job-schema` and `plankwise catalog-schema`: a file's JSON Schema.
+fn schema(v: serde_json::Value) -> io::Result<i32> {
     let mut out = io::stdout().lock();
-    serde_json::to_writer_pretty(&mut out, &plankwise::schema::job()).map_err(io::Error::from)?;
+    serde_json::to_writer_pretty(&mut out, &v).map_err(io::Error::from)?;
     writeln!(out)?;
     Ok(OK)
 }

@@ -72,6 +72,20 @@ impl Ctx<'_> {
     }
 
     /// A quantity that must lie in [lo, hi] (in `unit`).
+    /// A catalog key's quantity, checked against its plausible range
+    /// ([`crate::catalog::keys`] defines both).
+    pub(crate) fn key_q<K: Kind>(&mut self, s: &S, path: &str, key: &crate::catalog::keys::Key) -> Option<Q<K>> {
+        match key.range() {
+            Some(r) => self.ranged::<K>(s, path, key.name, (r.lo, r.hi), r.unit),
+            None => self.q::<K>(s, path, key.name),
+        }
+    }
+
+    /// A catalog key's count, checked against its range.
+    pub(crate) fn key_count(&mut self, c: &Spanned<i64>, path: &str, key: &crate::catalog::keys::Key) -> Option<u32> {
+        self.count(c, path, key.name, key.counts())
+    }
+
     pub(crate) fn ranged<K: Kind>(&mut self, s: &S, path: &str, field: &str, (lo, hi): (f64, f64), unit: &str) -> Option<Q<K>> {
         let v = self.q::<K>(s, path, field)?;
         let x = v.in_unit(unit);

@@ -388,3 +388,78 @@ fn the_job_schema_is_generated_from_the_definitions() {
         .to_string();
     assert!(e.contains("mystery"), "{e}");
 }
+
+/// The catalog file's schema: the committed copy is the generated one, and
+/// every key of the key table is in it with its description, unit kind,
+/// default and range.
+#[test]
+fn the_catalog_schema_is_generated_from_the_key_table() {
+    use plankwise::catalog::keys::{self, Value};
+    let generated = serde_json::to_string_pretty(&plankwise::schema::catalog()).unwrap() + "\n";
+    let path = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("catalog/catalog.schema.json");
+    if std::env::var_os("PLANKWISE_BLESS").is_some() {
+        std::fs::write(&path, &generated).unwrap();
+    }
+    assert_eq!(
+        std::fs::read_to_string(&path).unwrap(),
+        generated,
+        "regenerate: plankwise catalog-schema > catalog/catalog.schema.json"
+    );
+    // walk the schema along the tables' paths
+    let schema = plankwise::schema::catalog();
+    let mut seen = 0;
+    for t in keys::tables() {
+        let mut node = &schema;
+        for part in t.path.split('.').filter(|p| !p.is_empty()) {
+            node = &node["properties"][part];
+            if node["type"] == "array" {
+                node = &node["items"];
+            }
+        }
+        assert_eq!(node["additionalProperties"], false, "[{}]", t.path);
+        for k in t.keys {
+            let s = &node["properties"][k.name];
+            let d = s["description"]
+                .as_str()
+                .unwrap_or_else(|| panic!("{}.{} has no description", t.path, k.name));
+            assert!(d.starts_with(k.help), "{}.{}", t.path, k.name);
+            if !k.default.is_empty() {
+                assert!(d.contains(&format!("default {}", k.default)), "{}.{}: {d}", t.path, k.name);
+            }
+            if let Value::Quantity { kind, .. } = k.value {
+                assert_eq!(s["x-unit-kind"], kind, "{}.{}", t.path, k.name);
+            }
+            match (k.value, k.range()) {
+                (Value::Number(r), _) => {
+                    assert_eq!(
+                        (s["minimum"].as_f64(), s["maximum"].as_f64()),
+                        (Some(r.lo), Some(r.hi)),
+                        "{}.{}",
+                        t.path,
+                        k.name
+                    )
+                }
+                (_, Some(r)) => assert_eq!(s["x-range"], serde_json::json!([r.lo, r.hi, r.unit]), "{}.{}", t.path, k.name),
+                _ => {}
+            }
+            if let Value::Count(lo, hi) = k.value {
+                assert_eq!(
+                    (s["minimum"].as_i64(), s["maximum"].as_i64()),
+                    (Some(lo), Some(hi)),
+                    "{}.{}",
+                    t.path,
+                    k.name
+                );
+            }
+            assert_eq!(
+                node["required"].as_array().unwrap().iter().any(|r| r == k.name),
+                k.required,
+                "{}.{}",
+                t.path,
+                k.name
+            );
+            seen += 1;
+        }
+    }
+    assert!(seen > 60, "{seen} keys");
+}

@@ -1,6 +1,8 @@
 //! The raw mirror of a catalog file: only parses, keeps every span.
 //!
 //! Quantities stay strings here; [`super::validate`] reads their units.
+//! The keys, their meaning, units, defaults and ranges are defined in
+//! [`super::keys`]; a test proves these structures have exactly those keys.
 //! Unknown keys are refused (`deny_unknown_fields`). The top level and the
 //! `[[section]]` / `[[section.pattern]]` arrays are split by hand so that
 //! one bad entry does not hide the problems of the others.
@@ -12,9 +14,6 @@ use toml::Spanned;
 pub use crate::input::S;
 /// A point given as two quantity strings, [x, y].
 pub type Point = Spanned<Vec<S>>;
-
-/// Top-level keys of a catalog.
-pub const TOP_KEYS: &[&str] = &["catalog", "mix", "strand", "section"];
 
 /// `[catalog]`: what this catalog is.
 #[derive(Debug, Deserialize)]
@@ -95,21 +94,6 @@ pub struct RawSection {
     /// Remarks.
     pub remarks: Option<S>,
 }
-
-/// Keys of `[[section]]`, patterns included.
-pub const SECTION_KEYS: &[&str] = &[
-    "id",
-    "designation",
-    "mix",
-    "hollow_core",
-    "double_tee",
-    "generic",
-    "published",
-    "price",
-    "max_length",
-    "remarks",
-    "pattern",
-];
 
 /// `[section.hollow_core]`.
 #[derive(Debug, Deserialize)]

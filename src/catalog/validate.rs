@@ -3,6 +3,7 @@
 use toml::Spanned;
 use toml::de::{DeTable, DeValue};
 
+use super::keys;
 use super::raw::{self, Point, RawPattern, RawSection};
 use crate::input::diag::{Reporter, suggestion};
 pub(crate) use crate::input::{Ctx, de, join, key_str, parse, span, tables};
@@ -18,53 +19,6 @@ use super::{Catalog, FamilySpec, Meta, Pattern, Problems, Section, content_hash}
 use crate::material::{Mix, StrandKind, builtin_strand};
 use crate::section::Family;
 use crate::section::family::fmt;
-
-/// Plausible ranges; values outside are typing mistakes far more often than
-/// real members (common practice, no source).
-pub mod limits {
-    /// f′c, psi.
-    pub const FC_PSI: (f64, f64) = (2500.0, 15000.0);
-    /// f′ci, psi.
-    pub const FCI_PSI: (f64, f64) = (2000.0, 15000.0);
-    /// Unit weight, pcf (the range of ACI 318-19 §19.2.2.1(a)).
-    pub const WC_PCF: (f64, f64) = (90.0, 160.0);
-    /// Given Ec, ksi.
-    pub const EC_KSI: (f64, f64) = (1000.0, 10000.0);
-    /// Strand diameter, in.
-    pub const STRAND_D_IN: (f64, f64) = (0.2, 0.75);
-    /// Strand area, in².
-    pub const STRAND_A_IN2: (f64, f64) = (0.02, 0.35);
-    /// fpu, ksi.
-    pub const FPU_KSI: (f64, f64) = (200.0, 300.0);
-    /// Eps, ksi.
-    pub const EPS_KSI: (f64, f64) = (25000.0, 30000.0);
-    /// Member depth, in.
-    pub const DEPTH_IN: (f64, f64) = (2.0, 60.0);
-    /// Member width, in.
-    pub const WIDTH_IN: (f64, f64) = (12.0, 240.0);
-    /// Strands in one pattern.
-    pub const STRANDS: (i64, i64) = (1, 100);
-    /// Cores in one unit.
-    pub const CORES: (i64, i64) = (1, 30);
-    /// Stems of a tee.
-    pub const STEMS: (i64, i64) = (1, 6);
-    /// Jacking stress ÷ fpu.
-    pub const JACKING: (f64, f64) = (0.5, 0.85);
-    /// Hold-down position ÷ member length.
-    pub const HOLD_DOWN: (f64, f64) = (0.05, 0.5);
-    /// Bars in one group.
-    pub const BARS: (i64, i64) = (1, 40);
-    /// Bar area, in².
-    pub const BAR_A_IN2: (f64, f64) = (0.05, 2.5);
-    /// fy, ksi.
-    pub const FY_KSI: (f64, f64) = (40.0, 100.0);
-    /// Area of the shear legs in one stem per spacing, in².
-    pub const WEB_A_IN2: (f64, f64) = (0.005, 2.0);
-    /// Spacing of shear reinforcement, in.
-    pub const WEB_S_IN: (f64, f64) = (1.0, 48.0);
-    /// Production length, ft.
-    pub const LENGTH_FT: (f64, f64) = (5.0, 200.0);
-}
 
 /// Published figures further than this from ours draw a warning.
 pub const PUBLISHED_TOLERANCE: f64 = 0.02;
@@ -355,8 +309,8 @@ fn gather(cx: &mut Ctx, root: &DeTable, base: usize, g: &mut Gathered) {
                     "",
                     format!(
                         "unknown top-level key '{other}'{}; allowed: {}",
-                        suggestion(other, raw::TOP_KEYS.iter().copied()),
-                        raw::TOP_KEYS.join(", ")
+                        suggestion(other, keys::names(&keys::FILE)),
+                        keys::names(&keys::FILE).join(", ")
                     ),
                 );
             }
@@ -523,9 +477,7 @@ fn section(
     let price = cx.price(&r.price, path);
     let max_length = match &r.max_length {
         None => Some(None),
-        Some(m) => cx
-            .ranged::<crate::units::LengthK>(m, path, "max_length", limits::LENGTH_FT, "ft")
-            .map(Some),
+        Some(m) => cx.key_q::<crate::units::LengthK>(m, path, &keys::MAX_LENGTH).map(Some),
     };
     if pats.is_empty() && pattern_failures == 0 {
         cx.rep
@@ -558,7 +510,7 @@ fn section(
             let longest = pat
                 .max_length
                 .or(max_length.flatten())
-                .map_or(limits::LENGTH_FT.1 * 12.0, |m| m.get());
+                .map_or(keys::MAX_LENGTH.range().map_or(f64::INFINITY, |r| r.hi * 12.0), |m| m.get());
             if let Some(d) = pat.rows.iter().filter_map(|r| r.debond).map(|d| d.get()).reduce(f64::max)
                 && d >= longest / 2.0
             {

@@ -2,7 +2,7 @@
 
 use toml::Spanned;
 
-use super::{Ctx, join, limits, span};
+use super::{Ctx, join, keys, span};
 use crate::catalog::raw::{self, S};
 use crate::input::diag::suggestion;
 use crate::section::family::fmt;
@@ -11,11 +11,11 @@ use crate::units::Length;
 
 pub(super) fn hollow_core(cx: &mut Ctx, h: &Spanned<raw::RawHollowCore>, path: &str) -> Option<HollowCore> {
     let r = h.get_ref();
-    let width = cx.ranged::<crate::units::LengthK>(&r.width, path, "width", limits::WIDTH_IN, "in");
-    let depth = cx.ranged::<crate::units::LengthK>(&r.depth, path, "depth", limits::DEPTH_IN, "in");
+    let width = cx.key_q::<crate::units::LengthK>(&r.width, path, &keys::WIDTH);
+    let depth = cx.key_q::<crate::units::LengthK>(&r.depth, path, &keys::DEPTH);
     let c = r.cores.get_ref();
     let cpath = join(path, "cores");
-    let count = cx.count(&c.count, &cpath, "count", limits::CORES);
+    let count = cx.key_count(&c.count, &cpath, &keys::CORE_COUNT);
     let spacing = cx.positive_len(&c.spacing, &cpath, "spacing");
     let center = c.center_height.as_ref().map(|s| cx.positive_len(s, &cpath, "center_height"));
     let need = |cx: &mut Ctx, v: &Option<S>, key: &str, why: &str| -> Option<Length> {
@@ -172,12 +172,12 @@ pub(super) fn keyway(cx: &mut Ctx, k: &Spanned<raw::RawKeyway>, path: &str, wd: 
 
 pub(super) fn double_tee(cx: &mut Ctx, t: &Spanned<raw::RawDoubleTee>, path: &str) -> Option<DoubleTee> {
     let r = t.get_ref();
-    let fw = cx.ranged::<crate::units::LengthK>(&r.flange_width, path, "flange_width", limits::WIDTH_IN, "in");
+    let fw = cx.key_q::<crate::units::LengthK>(&r.flange_width, path, &keys::FLANGE_WIDTH);
     let ft = cx.positive_len(&r.flange_thickness, path, "flange_thickness");
-    let d = cx.ranged::<crate::units::LengthK>(&r.depth, path, "depth", limits::DEPTH_IN, "in");
+    let d = cx.key_q::<crate::units::LengthK>(&r.depth, path, &keys::DEPTH);
     let stems = match &r.stems {
         None => Some(2),
-        Some(s) => cx.count(s, path, "stems", limits::STEMS),
+        Some(s) => cx.key_count(s, path, &keys::STEMS),
     };
     let sp = cx.positive_len(&r.stem_spacing, path, "stem_spacing");
     let wt = cx.positive_len(&r.stem_width_top, path, "stem_width_top");
@@ -247,21 +247,16 @@ pub(super) fn generic(cx: &mut Ctx, g: &Spanned<raw::RawGeneric>, path: &str) ->
     let mut problems = spec.shape_problems();
     if problems.is_empty() {
         let p = geo.properties();
-        if !(limits::DEPTH_IN.0..=limits::DEPTH_IN.1).contains(&p.depth_in) {
-            problems.push(format!(
-                "depth {} in is outside the plausible range {} to {} in",
-                fmt(p.depth_in),
-                limits::DEPTH_IN.0,
-                limits::DEPTH_IN.1
-            ));
-        }
-        if !(limits::WIDTH_IN.0..=limits::WIDTH_IN.1).contains(&p.width_in) {
-            problems.push(format!(
-                "width {} in is outside the plausible range {} to {} in",
-                fmt(p.width_in),
-                limits::WIDTH_IN.0,
-                limits::WIDTH_IN.1
-            ));
+        for (what, v, k) in [("depth", p.depth_in, &keys::DEPTH), ("width", p.width_in, &keys::WIDTH)] {
+            let r = k.range().expect("a range");
+            if !(r.lo..=r.hi).contains(&v) {
+                problems.push(format!(
+                    "{what} {} in is outside the plausible range {} to {} in",
+                    fmt(v),
+                    fmt(r.lo),
+                    fmt(r.hi)
+                ));
+            }
         }
         if p.area_in2 <= 0.0 {
             problems.push("the net area is not positive".into());

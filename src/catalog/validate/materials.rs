@@ -1,6 +1,6 @@
 //! Mixes and strand kinds.
 
-use super::{Ctx, join, limits, span};
+use super::{Ctx, join, keys, span};
 use crate::catalog::raw;
 use crate::input::diag::suggestion;
 use crate::material::{Aggregate, Mix, Modulus, Relaxation, StrandKind};
@@ -9,9 +9,9 @@ use crate::units::Stress;
 
 pub(super) fn mix(cx: &mut Ctx, m: &raw::RawMix, path: &str) -> Option<Mix> {
     let id = cx.id(&m.id, path);
-    let fc = cx.ranged::<crate::units::StressK>(&m.fc, path, "fc", limits::FC_PSI, "psi");
-    let fci = cx.ranged::<crate::units::StressK>(&m.fci, path, "fci", limits::FCI_PSI, "psi");
-    let wc = cx.ranged::<crate::units::UnitWeightK>(&m.unit_weight, path, "unit_weight", limits::WC_PCF, "pcf");
+    let fc = cx.key_q::<crate::units::StressK>(&m.fc, path, &keys::FC);
+    let fci = cx.key_q::<crate::units::StressK>(&m.fci, path, &keys::FCI);
+    let wc = cx.key_q::<crate::units::UnitWeightK>(&m.unit_weight, path, &keys::UNIT_WEIGHT);
     let agg = Aggregate::from_name(m.aggregate.get_ref());
     if agg.is_none() {
         cx.rep.error(
@@ -29,9 +29,7 @@ pub(super) fn mix(cx: &mut Ctx, m: &raw::RawMix, path: &str) -> Option<Mix> {
         None | Some((_, "unit-weight")) => Some(Modulus::UnitWeight),
         Some((_, "normalweight")) => Some(Modulus::Normalweight),
         Some((s, _)) => match Stress::parse(s.get_ref()) {
-            Ok(_) => cx
-                .ranged::<crate::units::StressK>(s, path, "modulus", limits::EC_KSI, "ksi")
-                .map(Modulus::Given),
+            Ok(_) => cx.key_q::<crate::units::StressK>(s, path, &keys::EC).map(Modulus::Given),
             Err(_) => {
                 cx.rep.error(
                     span(s),
@@ -82,9 +80,9 @@ pub(super) fn mix(cx: &mut Ctx, m: &raw::RawMix, path: &str) -> Option<Mix> {
 
 pub(super) fn strand(cx: &mut Ctx, s: &raw::RawStrand, path: &str) -> Option<StrandKind> {
     let id = cx.id(&s.id, path);
-    let d = cx.ranged::<crate::units::LengthK>(&s.diameter, path, "diameter", limits::STRAND_D_IN, "in");
-    let a = cx.ranged::<crate::units::AreaK>(&s.area, path, "area", limits::STRAND_A_IN2, "in2");
-    let fpu = cx.ranged::<crate::units::StressK>(&s.fpu, path, "fpu", limits::FPU_KSI, "ksi");
+    let d = cx.key_q::<crate::units::LengthK>(&s.diameter, path, &keys::STRAND_DIAMETER);
+    let a = cx.key_q::<crate::units::AreaK>(&s.area, path, &keys::STRAND_AREA);
+    let fpu = cx.key_q::<crate::units::StressK>(&s.fpu, path, &keys::FPU);
     let relaxation = match s.relaxation.as_ref().map(|r| r.get_ref().as_str()) {
         None | Some("low") => Some(Relaxation::Low),
         Some("stress-relieved") => Some(Relaxation::StressRelieved),
@@ -102,7 +100,7 @@ pub(super) fn strand(cx: &mut Ctx, s: &raw::RawStrand, path: &str) -> Option<Str
     };
     let eps = match &s.modulus {
         None => Some(Stress::from_unit(28_500.0, "ksi")),
-        Some(m) => cx.ranged::<crate::units::StressK>(m, path, "modulus", limits::EPS_KSI, "ksi"),
+        Some(m) => cx.key_q::<crate::units::StressK>(m, path, &keys::EPS),
     };
     let fpy = cx.opt_q::<crate::units::StressK>(&s.fpy, path, "fpy");
     let (d, a, fpu, relaxation, eps, fpy) = (d?, a?, fpu?, relaxation?, eps?, fpy?);

@@ -2,7 +2,7 @@
 
 use toml::Spanned;
 
-use super::{Ctx, PUBLISHED_TOLERANCE, Refs, join, limits, span};
+use super::{Ctx, PUBLISHED_TOLERANCE, Refs, join, keys, span};
 use crate::catalog::raw::{self, RawPattern, S};
 use crate::catalog::{Bar, FamilySpec, Pattern, Published, Row, Section, WebSteel};
 use crate::input::diag::suggestion;
@@ -134,7 +134,7 @@ pub(super) fn pattern(
         None => Some(0.75),
         Some(j) => {
             let v = *j.get_ref();
-            let (lo, hi) = limits::JACKING;
+            let keys::Range { lo, hi, .. } = keys::JACKING.range().expect("a range");
             if (lo..=hi).contains(&v) {
                 Some(v)
             } else {
@@ -151,7 +151,7 @@ pub(super) fn pattern(
         None => Some(None),
         Some(h) => {
             let v = *h.get_ref();
-            let (lo, hi) = limits::HOLD_DOWN;
+            let keys::Range { lo, hi, .. } = keys::HOLD_DOWN.range().expect("a range");
             if (lo..=hi).contains(&v) {
                 Some(Some(v))
             } else {
@@ -167,9 +167,7 @@ pub(super) fn pattern(
     let price = cx.price(&r.price, path);
     let max_length = match &r.max_length {
         None => Some(None),
-        Some(m) => cx
-            .ranged::<crate::units::LengthK>(m, path, "max_length", limits::LENGTH_FT, "ft")
-            .map(Some),
+        Some(m) => cx.key_q::<crate::units::LengthK>(m, path, &keys::MAX_LENGTH).map(Some),
     };
     let rows_raw = r.row.as_deref().unwrap_or(&[]);
     if rows_raw.is_empty() {
@@ -185,7 +183,7 @@ pub(super) fn pattern(
         let rpath = join(path, &format!("row {}", i + 1));
         let rr = row.get_ref();
         total += *rr.count.get_ref();
-        let count = cx.count(&rr.count, &rpath, "count", limits::STRANDS);
+        let count = cx.key_count(&rr.count, &rpath, &keys::STRANDS);
         let height = cx.positive_len(&rr.height, &rpath, "height");
         let end_height = rr.end_height.as_ref().map(|e| cx.positive_len(e, &rpath, "end_height"));
         let debond = rr.debond.as_ref().map(|d| cx.positive_len(d, &rpath, "debond"));
@@ -287,11 +285,11 @@ pub(super) fn pattern(
             _ => rows_ok = false,
         }
     }
-    if total > limits::STRANDS.1 {
+    if total > keys::STRANDS.counts().1 {
         cx.rep.error(
             Some(p.span()),
             path,
-            format!("has {total} strands; at most {} allowed in one pattern", limits::STRANDS.1),
+            format!("has {total} strands; at most {} allowed in one pattern", keys::STRANDS.counts().1),
         );
         rows_ok = false;
     }
@@ -358,9 +356,9 @@ pub(super) fn pattern(
     for (i, b) in r.bar.iter().flatten().enumerate() {
         let bpath = join(path, &format!("bar {}", i + 1));
         let rb = b.get_ref();
-        let count = cx.count(&rb.count, &bpath, "count", limits::BARS);
-        let area = cx.ranged::<crate::units::AreaK>(&rb.area, &bpath, "area", limits::BAR_A_IN2, "in2");
-        let fy = cx.ranged::<crate::units::StressK>(&rb.fy, &bpath, "fy", limits::FY_KSI, "ksi");
+        let count = cx.key_count(&rb.count, &bpath, &keys::BARS);
+        let area = cx.key_q::<crate::units::AreaK>(&rb.area, &bpath, &keys::BAR_AREA);
+        let fy = cx.key_q::<crate::units::StressK>(&rb.fy, &bpath, &keys::FY);
         let height = cx.positive_len(&rb.height, &bpath, "height");
         if let Some(h) = height
             && h.get() >= depth
@@ -392,9 +390,9 @@ pub(super) fn pattern(
                 );
             }
             let rw = w.get_ref();
-            let area = cx.ranged::<crate::units::AreaK>(&rw.area, &wpath, "area", limits::WEB_A_IN2, "in2");
-            let spacing = cx.ranged::<crate::units::LengthK>(&rw.spacing, &wpath, "spacing", limits::WEB_S_IN, "in");
-            let fy = cx.ranged::<crate::units::StressK>(&rw.fy, &wpath, "fy", limits::FY_KSI, "ksi");
+            let area = cx.key_q::<crate::units::AreaK>(&rw.area, &wpath, &keys::WEB_AREA);
+            let spacing = cx.key_q::<crate::units::LengthK>(&rw.spacing, &wpath, &keys::WEB_SPACING);
+            let fy = cx.key_q::<crate::units::StressK>(&rw.fy, &wpath, &keys::FY);
             match (area, spacing, fy) {
                 (Some(area), Some(spacing), Some(fy)) if family == Family::DoubleTee => Some(Some(WebSteel { area, spacing, fy })),
                 _ => None,
