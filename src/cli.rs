@@ -137,9 +137,16 @@ struct CheckArgs {
     #[arg(long, conflicts_with = "sheet")]
     json: bool,
     /// Print the calculation sheet instead: every number the checks use,
-    /// in order, each with its key in the JSON (`text` or `md`).
-    #[arg(long, value_name = "FORMAT", num_args = 0..=1, default_missing_value = "text", value_parser = ["text", "md"])]
+    /// in order, each with its key in the JSON (`text`, `md` or `pdf`; with
+    /// `-o`, a .md or .pdf file names its format).
+    #[arg(long, value_name = "FORMAT", num_args = 0..=1, default_missing_value = "text", value_parser = ["text", "md", "pdf"])]
     sheet: Option<String>,
+    /// Write to this file instead of the standard output (a PDF needs one).
+    #[arg(short = 'o', long = "output")]
+    output: Option<PathBuf>,
+    /// Replace an existing output file.
+    #[arg(long, requires = "output")]
+    force: bool,
     #[command(flatten)]
     units: UnitsFlag,
 }
@@ -536,14 +543,39 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
     };
     let ev = evaluate(&cand, &case);
     let sys = a.units.system(None, &cat);
-    let mut out = io::stdout().lock();
+    // refused before any work: an input, not a regular file, or there already
+    let target = match &a.output {
+        None => None,
+        Some(o) => {
+            let inputs: Vec<&std::path::Path> = a.catalog.iter().map(|p| p.as_path()).collect();
+            Some(plankwise::files::writable(o, &inputs, a.force).map_err(|e| Failure::Message(format!("-o: '{}' {e}", o.display())))?)
+        }
+    };
+    let ext = a
+        .output
+        .as_ref()
+        .and_then(|o| o.extension())
+        .map(|e| e.to_string_lossy().to_ascii_lowercase());
+    let sheet = a.sheet.as_deref().map(|f| match (f, ext.as_deref()) {
+        ("text", Some("pdf")) => "pdf",
+        ("text", Some("md")) => "md",
+        (f, _) => f,
+    });
+    let mut out: Vec<u8> = Vec::new();
     if a.json {
         let j = report::check::to_json(&cand, &case, &ev);
         write_json(&mut out, &j, sys)?;
-    } else if let Some(f) = &a.sheet {
+    } else if let Some(f) = sheet {
         let j = report::check::to_json(&cand, &case, &ev);
         let title = format!("{} — {}", section.designation, pattern.designation);
-        report::sheet::write(&mut out, &title, &j, sys, f == "md")?;
+        if f == "pdf" {
+            if target.is_none() {
+                return Err(Failure::Message("--sheet pdf: a PDF goes to a file; give -o FILE.pdf".into()));
+            }
+            out = report::sheet::pdf(&title, &j, sys).map_err(|e| Failure::Message(format!("the PDF could not be made: {e}")))?;
+        } else {
+            report::sheet::write(&mut out, &title, &j, sys, f == "md")?;
+        }
     } else {
         let title = format!(
             "{} — {} ({} / {})",
@@ -551,11 +583,24 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
         );
         report::check::write_table(&mut out, &title, &case, &ev, sys)?;
     }
+    match target {
+        None => io::stdout().lock().write_all(&out)?,
+        Some(real) => {
+            let shown = a.output.as_ref().map_or(String::new(), |o| o.display().to_string());
+            plankwise::files::write_atomic(&real, &out).map_err(|e| Failure::Message(format!("-o: '{shown}' cannot be written: {e}")))?;
+            eprintln!("plankwise: wrote {shown}");
+        }
+    }
     Ok(OK)
 }
 
 /// `plankwise handling`: the stages of one entry before service.
 fn handling(a: &CheckArgs) -> Result<i32, Failure> {
+    if a.output.is_some() || a.sheet.is_some() {
+        return Err(Failure::Message(
+            "handling prints to the standard output (text or --json); -o and --sheet belong to check".into(),
+        ));
+    }
     let (cat, _) = load(a.catalog.as_ref())?;
     print_warnings(&cat);
     let (section, pattern) = find_entry(&cat, &a.section, &a.pattern)?;

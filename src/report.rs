@@ -2,6 +2,7 @@
 
 pub mod capacity;
 pub mod check;
+pub mod pdf;
 pub mod sheet;
 pub mod shortlist;
 

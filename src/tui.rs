@@ -121,7 +121,7 @@ pub enum Effect {
         force: bool,
     },
     /// Write the calculation sheet of the selected candidate (Markdown
-    /// for a .md path, else text).
+    /// for a .md path, PDF for a .pdf path, else text).
     WriteSheet {
         /// Where.
         path: PathBuf,
@@ -178,7 +178,7 @@ pub enum Question {
 /// What a prompt asks for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum PromptKind {
-    /// Shortlist path (format from the extension: .md, .csv, else text).
+    /// Shortlist path (format from the extension: .md, .csv, .pdf, else text).
     Shortlist,
     /// Path to save the job to.
     SaveJob,
@@ -892,6 +892,8 @@ fn format_for(path: &str) -> Format {
         Format::Markdown
     } else if path.ends_with(".csv") {
         Format::Csv
+    } else if path.to_ascii_lowercase().ends_with(".pdf") {
+        Format::Pdf
     } else {
         Format::Text
     }

@@ -129,6 +129,19 @@ fn typing_reranks_searches_writes_and_quits_cleanly() {
     s.wait_for("wrote mine.md");
     let text = std::fs::read_to_string(dir.join("mine.md")).unwrap();
     assert!(text.starts_with("# Precast member shortlist"));
+    // the same as a PDF, and the selected member's calculation sheet too
+    s.keys(&["w"]);
+    s.wait_for("shortlist file");
+    s.keys(&["C-u"]);
+    s.keys(&["m", "i", "n", "e", ".", "p", "d", "f", "Enter"]);
+    s.wait_for("wrote mine.pdf");
+    assert!(std::fs::read(dir.join("mine.pdf")).unwrap().starts_with(b"%PDF-"));
+    s.keys(&["e"]);
+    s.wait_for("calculation sheet file");
+    s.keys(&["C-u"]);
+    s.keys(&["c", ".", "p", "d", "f", "Enter"]);
+    s.wait_for("wrote c.pdf");
+    assert!(std::fs::read(dir.join("c.pdf")).unwrap().starts_with(b"%PDF-"));
     // quitting with edits asks first, then leaves a sane terminal
     s.keys(&["q"]);
     s.wait_for("quit anyway? y / n");

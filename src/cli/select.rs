@@ -118,7 +118,7 @@ pub struct CapacityArgs {
     depth: Option<String>,
     #[command(flatten)]
     bay: BayFlags,
-    /// text, md, csv or json (default: from the extension of -o, else text).
+    /// text, md, csv, json or pdf (default: from the extension of -o, else text).
     #[arg(long, value_enum)]
     format: Option<OutFormat>,
     /// Write to this file instead of the standard output.
@@ -142,6 +142,8 @@ pub enum OutFormat {
     Csv,
     /// JSON.
     Json,
+    /// PDF.
+    Pdf,
 }
 
 impl OutFormat {
@@ -152,6 +154,7 @@ impl OutFormat {
             "md" | "markdown" => Some(OutFormat::Md),
             "csv" => Some(OutFormat::Csv),
             "json" => Some(OutFormat::Json),
+            "pdf" => Some(OutFormat::Pdf),
             _ => None,
         }
     }
@@ -254,6 +257,7 @@ pub fn capacity(a: &CapacityArgs) -> Result<i32, Failure> {
                 serde_json::to_writer_pretty(&mut w, &display::json(v, sys)).map_err(io::Error::from)?;
                 writeln!(w)
             }
+            OutFormat::Pdf => w.write_all(&plankwise::report::capacity::pdf(&heading, &rows, sys).map_err(io::Error::other)?),
         }
     };
     match target {
@@ -279,8 +283,8 @@ pub struct ShortlistArgs {
     /// Output file.
     #[arg(short = 'o', long = "output")]
     output: PathBuf,
-    /// text, md or csv (default: from the extension of -o — .md, .csv — else text).
-    #[arg(long, value_parser = ["text", "md", "csv"])]
+    /// text, md, csv or pdf (default: from the extension of -o — .md, .csv, .pdf — else text).
+    #[arg(long, value_parser = ["text", "md", "csv", "pdf"])]
     format: Option<String>,
     /// Members listed per bay (1 or more).
     #[arg(long, default_value_t = 5, value_parser = clap::value_parser!(u32).range(1..))]
@@ -713,15 +717,17 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let named = a.format.clone().unwrap_or_else(|| match OutFormat::of_path(&a.output) {
         Some(OutFormat::Md) => "md".into(),
         Some(OutFormat::Csv) => "csv".into(),
+        Some(OutFormat::Pdf) => "pdf".into(),
         _ => "text".into(),
     });
     let format = match named.as_str() {
         "text" | "txt" => Format::Text,
         "md" | "markdown" => Format::Markdown,
         "csv" => Format::Csv,
+        "pdf" => Format::Pdf,
         other => {
             return Err(Failure::Message(format!(
-                "--format: '{other}' is not a format; use text, md or csv"
+                "--format: '{other}' is not a format; use text, md, csv or pdf"
             )));
         }
     };
@@ -738,16 +744,17 @@ pub fn shortlist(a: &ShortlistArgs) -> Result<i32, Failure> {
     let mut none: Vec<String> = Vec::new();
     let real = plankwise::files::writable(&a.output, &inputs, a.force)
         .map_err(|e| Failure::Message(format!("-o: '{}' {e}", a.output.display())))?;
-    plankwise::files::write_atomic_with(&real, |mut w| {
-        shortlist::write_each(&mut w, format, &job, &cat, a.top as usize, sys, &mut |_, bay| {
-            let r = rank_bay(&cat, bay, None);
-            if r.viable.is_empty() {
-                none.push(bay.name.clone());
-            }
-            r
-        })
-    })
-    .map_err(|e| Failure::Message(format!("-o: '{}' cannot be written: {e}", a.output.display())))?;
+    let mut rank = |_: usize, bay: &plankwise::bay::Bay| {
+        let r = rank_bay(&cat, bay, None);
+        if r.viable.is_empty() {
+            none.push(bay.name.clone());
+        }
+        r
+    };
+    let written = plankwise::files::write_atomic_with(&real, |mut w| {
+        shortlist::write_each(&mut w, format, &job, &cat, a.top as usize, sys, &mut rank)
+    });
+    written.map_err(|e| Failure::Message(format!("-o: '{}' cannot be written: {e}", a.output.display())))?;
     eprintln!("plankwise: wrote {} ({} bays)", a.output.display(), job.bays.len());
     if !none.is_empty() {
         eprintln!("plankwise: no viable member for: {}", none.join(", "));

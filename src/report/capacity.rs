@@ -140,3 +140,65 @@ pub fn csv(w: &mut impl Write, rows: &[CapacityRow], sys: System) -> io::Result<
     }
     Ok(())
 }
+
+/// The table as a PDF: for each entry its depth and weight, and at each
+/// load level the longest span and the check that ends it, one line each
+/// (a portrait page has no room for the load levels side by side); then
+/// each entry's largest load against span as a chart.
+pub fn pdf(h: &Heading, rows: &[CapacityRow], sys: System) -> Result<Vec<u8>, String> {
+    use super::pdf::{Block, Chart, Doc, Paper};
+    let mut lines = vec![
+        format!("Catalog   {} (content hash {})", h.catalog, h.hash),
+        format!("Basis     ACI 318-19; longest span at each {} load; {} held", h.varied, h.held),
+        String::new(),
+    ];
+    for r in rows {
+        lines.push(format!(
+            "{} — h {}, {}",
+            display::localize(&r.entry, sys),
+            display::with_unit(r.depth_in, "in", 1, sys),
+            display::with_unit(r.weight_psf, "psf", 1, sys)
+        ));
+        for x in &r.reach {
+            lines.push(format!("    at {:>9}: {}", load_head(x.load_psf, sys), cell(x, sys)));
+        }
+    }
+    lines.push(String::new());
+    lines.push(
+        "Each line: the longest span (to 0.01 ft) at which every check passes with that load; the check named fails just beyond it. The span range and the catalog's production limit end an entry's reach."
+            .into(),
+    );
+    let (x_unit, y_unit) = (display::unit("ft", sys), display::unit("psf", sys));
+    let charts: Vec<Chart> = rows
+        .iter()
+        .filter(|r| !r.limits.is_empty())
+        .map(|r| Chart {
+            title: display::localize(&r.entry, sys),
+            x_label: format!("span, {x_unit}"),
+            y_label: format!("largest {} load, {y_unit}", h.varied),
+            curve: r
+                .limits
+                .iter()
+                .map(|l| {
+                    (
+                        display::convert(l.span_ft, "ft", sys).0,
+                        l.live_psf.map(|q| display::convert(q, "psf", sys).0),
+                    )
+                })
+                .collect(),
+            point: None,
+        })
+        .collect();
+    let mut blocks = vec![Block::Heading(format!("CAPACITY OF '{}'", h.catalog)), Block::Lines(lines)];
+    if !charts.is_empty() {
+        blocks.push(Block::Break);
+        blocks.push(Block::Heading("Largest load against span, each entry".into()));
+        blocks.push(Block::Charts(charts));
+    }
+    super::pdf::render(&Doc {
+        title: "plankwise — capacity table (preliminary)".into(),
+        head_right: h.catalog.to_string(),
+        paper: Paper::of(sys),
+        blocks,
+    })
+}

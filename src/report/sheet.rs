@@ -240,3 +240,45 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     }
     Ok(())
 }
+
+/// The sheet as a PDF: the text sheet set on pages with the running head,
+/// the cautions and page numbers, section titles as headings.
+pub fn pdf(title: &str, j: &CheckJson, sys: System) -> Result<Vec<u8>, String> {
+    use super::pdf::{Block, Doc, Paper};
+    let mut buf = Vec::new();
+    write(&mut buf, title, j, sys, false).map_err(|e| e.to_string())?;
+    let text = String::from_utf8_lossy(&buf);
+    let mut blocks = Vec::new();
+    let mut lines: Vec<String> = Vec::new();
+    let mut after_heading = false;
+    for l in text.lines() {
+        // the text's underline of a title: the heading is bold instead
+        if after_heading && !l.is_empty() && l.chars().all(|c| c == '-' || c == '=') {
+            after_heading = false;
+            continue;
+        }
+        after_heading = false;
+        if l.starts_with("CALCULATION SHEET") {
+            blocks.push(Block::Heading(l.to_string()));
+            after_heading = true;
+            continue;
+        }
+        // a numbered section title ("3. Losses …") starts a heading
+        let heading = l.chars().next().is_some_and(|c| c.is_ascii_digit()) && l.contains(". ");
+        if heading {
+            blocks.push(Block::Lines(std::mem::take(&mut lines)));
+            blocks.push(Block::Heading(l.to_string()));
+            after_heading = true;
+        } else {
+            lines.push(l.to_string());
+        }
+    }
+    blocks.push(Block::Lines(lines));
+    blocks.push(Block::Signatures(vec!["Prepared by".into(), "Checked by".into()]));
+    super::pdf::render(&Doc {
+        title: "plankwise — calculation sheet (preliminary)".into(),
+        head_right: title.to_string(),
+        paper: Paper::of(sys),
+        blocks,
+    })
+}

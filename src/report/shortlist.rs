@@ -19,6 +19,8 @@ pub enum Format {
     Markdown,
     /// Comma-separated values, one row per member.
     Csv,
+    /// A printable PDF ([`pdf`]).
+    Pdf,
 }
 
 /// One bay of the shortlist: the bay and its ranking.
@@ -210,6 +212,10 @@ pub fn write_each<'c>(
                 md_bay(w, cat, i, bay, &r, top, sys, beside.as_deref())?;
             }
             md_tail(w, job)
+        }
+        Format::Pdf => {
+            let bytes = pdf(job, cat, top, sys, rank).map_err(io::Error::other)?;
+            w.write_all(&bytes)
         }
         Format::Csv => {
             csv_head(w, sys)?;
@@ -576,4 +582,108 @@ fn csv_bay(w: &mut impl Write, job: &Job, cat: &Catalog, bay: &Bay, ranking: &Ba
         }
     }
     Ok(())
+}
+
+/// Spans of a listed member's capacity chart: 60 % to 140 % of the bay's
+/// span, ft (the range an engineer moving a support line would look at).
+pub fn chart_spans(span_ft: f64) -> Vec<f64> {
+    (0..=32).map(|k| span_ft * (0.6 + 0.8 * k as f64 / 32.0)).collect()
+}
+
+/// A listed member's capacity chart: the largest variable load the bay's
+/// use names (floor live, or on a roof the larger of Lr and S) against
+/// span, and the bay's design point.
+fn chart(k: usize, r: &Ranked, bay: &Bay, curve: &[crate::select::envelope::LoadLimit], sys: System) -> super::pdf::Chart {
+    let (x_unit, y_unit) = (display::unit("ft", sys), display::unit("psf", sys));
+    let load = match bay.case.member_use {
+        crate::case::Use::Floor => "live load",
+        crate::case::Use::Roof => "roof load (larger of Lr, S)",
+    };
+    super::pdf::Chart {
+        title: format!("{}. {}", k + 1, r.entry.label()),
+        x_label: format!("span, {x_unit}"),
+        y_label: format!("largest {load}, {y_unit}"),
+        curve: curve
+            .iter()
+            .map(|l| {
+                (
+                    display::convert(l.span_ft, "ft", sys).0,
+                    l.live_psf.map(|q| display::convert(q, "psf", sys).0),
+                )
+            })
+            .collect(),
+        point: Some((
+            display::convert(bay.case.span.in_unit("ft"), "ft", sys).0,
+            display::convert(bay.case.varied().in_unit("psf"), "psf", sys).0,
+            "design point".into(),
+        )),
+    }
+}
+
+/// The shortlist as a PDF: the text shortlist's header, and for each bay
+/// (a new page each) its criteria and members, a capacity chart for each
+/// listed member with the bay's design point, then the notes and a
+/// signature block; the cautions and page numbers on every page. `rank`
+/// ranks a bay as the writer comes to it.
+pub fn pdf<'c>(
+    job: &Job,
+    cat: &'c Catalog,
+    top: usize,
+    sys: System,
+    rank: &mut dyn FnMut(usize, &Bay) -> BayRanking<'c>,
+) -> Result<Vec<u8>, String> {
+    use super::pdf::{Block, Doc, Paper};
+    let text_of = |part: &dyn Fn(&mut Vec<u8>) -> io::Result<()>| -> Result<Vec<String>, String> {
+        let mut buf = Vec::new();
+        part(&mut buf).map_err(|e| e.to_string())?;
+        Ok(String::from_utf8_lossy(&buf)
+            .replace('\x0c', "")
+            .lines()
+            .map(str::to_string)
+            .collect())
+    };
+    let mut blocks = Vec::new();
+    let head = text_of(&|b| text_head(b, job, cat, sys))?;
+    blocks.push(Block::Heading(head[0].clone()));
+    blocks.push(Block::Lines(head[1..].to_vec()));
+    let mut seen = Vec::new();
+    for (i, bay) in job.bays.iter().enumerate() {
+        let r = rank(i, bay);
+        let beside = beside_line(cat, job, bay, &r, &mut seen, sys);
+        let lines = text_of(&|b| text_bay(b, cat, i, bay, &r, top, sys, beside.as_deref()))?;
+        if i > 0 {
+            blocks.push(Block::Break);
+        }
+        // the bay's title line as a heading, the rest as written
+        let first = lines.iter().position(|l| !l.trim().is_empty()).unwrap_or(0);
+        blocks.push(Block::Heading(lines.get(first).cloned().unwrap_or_default()));
+        blocks.push(Block::Lines(lines.iter().skip(first + 1).cloned().collect()));
+        let spans = chart_spans(bay.case.span.in_unit("ft"));
+        let charts: Vec<_> = r
+            .viable
+            .iter()
+            .take(top)
+            .enumerate()
+            .map(|(k, m)| chart(k, m, bay, &crate::select::envelope::bay_envelope(cat, bay, &m.entry, &spans), sys))
+            .collect();
+        if !charts.is_empty() {
+            blocks.push(Block::Lines(vec![
+                String::new(),
+                "  Capacity of each listed member against span (the bay's other loads held), with the bay's design point:".into(),
+            ]));
+            blocks.push(Block::Charts(charts));
+        }
+    }
+    blocks.push(Block::Lines(text_of(&|b| text_tail(b, job))?));
+    blocks.push(Block::Signatures(vec![
+        "Prepared by".into(),
+        "Reviewed by (supplier's engineer)".into(),
+        "Engineer of record".into(),
+    ]));
+    super::pdf::render(&Doc {
+        title: "plankwise — precast member shortlist (preliminary)".into(),
+        head_right: format!("{} · {}", job.project, job.date),
+        paper: Paper::of(sys),
+        blocks,
+    })
 }

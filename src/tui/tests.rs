@@ -257,6 +257,21 @@ fn marking_and_writing_the_shortlist_asks_before_overwriting() {
     );
     report(&mut a, Ok("wrote out.md".into()));
     assert_eq!(a.status.0, "wrote out.md");
+    // a .pdf path asks for the PDF, whatever its case
+    update(&mut a, Action::WriteShortlist);
+    for _ in 0..20 {
+        press(&mut a, &[Key::Backspace]);
+    }
+    press(&mut a, &"Out.PDF".chars().map(Key::Char).collect::<Vec<_>>());
+    let e = press(&mut a, &[Key::Enter]);
+    assert_eq!(
+        e,
+        vec![Effect::WriteShortlist {
+            path: "Out.PDF".into(),
+            format: Format::Pdf,
+            force: false
+        }]
+    );
 }
 
 #[test]

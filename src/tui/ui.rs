@@ -764,7 +764,7 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
     let (text, style) = match &app.mode {
         Mode::Prompt(PromptKind::Shortlist, p) => (
             format!(
-                "shortlist file (.txt, .md or .csv): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
+                "shortlist file (.txt, .md, .csv or .pdf): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
                 p.shown()
             ),
             t.status,
@@ -786,7 +786,7 @@ fn status_line(app: &App, area: Rect, buf: &mut Buffer, t: &Theme) {
         }
         Mode::Prompt(PromptKind::Sheet, p) => (
             format!(
-                "calculation sheet file (.txt or .md): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
+                "calculation sheet file (.txt, .md or .pdf): {}  type to replace, ctrl-u clears, enter to write, esc to cancel",
                 p.shown()
             ),
             t.status,
