@@ -496,6 +496,7 @@ fn zero_losses() -> Losses {
         total_psi: 0.0,
         c_factor: 1.0,
         c_clamped: false,
+        terms: Default::default(),
     }
 }
 

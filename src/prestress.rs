@@ -64,6 +64,40 @@ pub struct Losses {
     pub c_factor: f64,
     /// Whether fpi/fpu lay outside the C table and was clamped.
     pub c_clamped: bool,
+    /// The terms the estimate was made with, for the calculation sheet.
+    pub terms: LossTerms,
+}
+
+/// The terms of a Zia et al. (1979) estimate, as put into its equations
+/// (psi, in, lbf): what the calculation sheet shows substituted.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Default)]
+pub struct LossTerms {
+    /// Force at jacking Pi = fpj·Aps, lbf.
+    pub pi_lbf: f64,
+    /// Gross area, in².
+    pub area_in2: f64,
+    /// Gross second moment, in⁴.
+    pub inertia_in4: f64,
+    /// Strand eccentricity at the critical section, in.
+    pub e_in: f64,
+    /// Self-weight moment there, lbf·in.
+    pub mg_lbin: f64,
+    /// Strand modulus, psi.
+    pub eps_psi: f64,
+    /// Eci, psi.
+    pub eci_psi: f64,
+    /// Ec, psi.
+    pub ec_psi: f64,
+    /// Kcr (2.0, or 1.6 for lightweight concrete).
+    pub kcr: f64,
+    /// Volume-to-surface ratio, in.
+    pub vs_in: f64,
+    /// Relative humidity, %.
+    pub rh_pct: f64,
+    /// Kre, psi.
+    pub kre_psi: f64,
+    /// J.
+    pub j: f64,
 }
 
 /// Zia et al. (1979) Table: C against fpi/fpu, rows 0.80 down to 0.60,
@@ -161,6 +195,21 @@ pub fn zia(i: &ZiaInput) -> Losses {
         total_psi: es + cr + sh + re,
         c_factor: c,
         c_clamped: clamped,
+        terms: LossTerms {
+            pi_lbf: pi,
+            area_in2: i.area,
+            inertia_in4: i.inertia,
+            e_in: i.e,
+            mg_lbin: i.mg,
+            eps_psi: i.es,
+            eci_psi: i.eci,
+            ec_psi: i.ec,
+            kcr,
+            vs_in: i.vs,
+            rh_pct: i.rh,
+            kre_psi: kre,
+            j,
+        },
     }
 }
 

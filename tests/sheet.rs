@@ -132,3 +132,55 @@ fn the_sheet_and_the_capacity_table_match_their_golden_files() {
     c.extend(["--format", "csv"]);
     golden("capacity.csv", &run(&c));
 }
+
+/// The equations the sheet prints hold with the numbers it prints beside
+/// them (the terms from `check --json`): ACI 318-19 Eqs. 19.2.2.1(a) and
+/// 19.2.3.1, Table 22.2.2.4.3, the Zia et al. (1979) loss equations and
+/// the first term of Eq. 25.4.8.1, each recomputed here from its terms.
+#[test]
+fn the_sheets_equations_hold_with_its_terms() {
+    let v: serde_json::Value = serde_json::from_str(&run(&[&ENTRY[..], &["--json"]].concat())).unwrap();
+    let f = |p: &str| at(&v, p).as_f64().unwrap_or_else(|| panic!("{p}"));
+    let close = |a: f64, b: f64, what: &str| assert!((a - b).abs() <= 1e-9 * b.abs().max(1.0), "{what}: {a} vs {b}");
+    let fc = f("concrete.fc_psi");
+    close(33.0 * f("concrete.wc_pcf").powf(1.5) * fc.sqrt(), f("concrete.ec_psi"), "Ec");
+    close(7.5 * f("concrete.lambda") * fc.sqrt(), f("concrete.fr_psi"), "fr");
+    close((0.85 - 0.05 * (fc - 4000.0) / 1000.0).clamp(0.65, 0.85), f("concrete.beta1"), "β1");
+    let (pi, a, i, e, mg) = (
+        f("loss_terms.pi_kip") * 1000.0,
+        f("loss_terms.area_in2"),
+        f("loss_terms.ix_in4"),
+        f("loss_terms.e_in"),
+        f("loss_terms.mg_kipft") * 12000.0,
+    );
+    close(f("fpj_ksi") * f("loss_terms.aps_in2"), f("loss_terms.pi_kip"), "Pi");
+    let fcir = 0.9 * (pi / a + pi * e * e / i) - mg * e / i;
+    close(fcir, f("loss_terms.fcir_psi"), "fcir");
+    let eps = f("inputs.eps_ksi") * 1000.0;
+    let es = eps * fcir / f("loss_terms.eci_psi");
+    close(es, f("loss_es_ksi") * 1000.0, "ES");
+    let cr = f("loss_terms.kcr") * eps / f("loss_terms.ec_psi") * (fcir - f("loss_terms.fcds_psi"));
+    close(cr, f("loss_cr_ksi") * 1000.0, "CR");
+    let sh = 8.2e-6 * eps * (1.0 - 0.06 * f("loss_terms.vs_in")) * (100.0 - f("loss_terms.rh_pct"));
+    close(sh, f("loss_sh_ksi") * 1000.0, "SH");
+    let re = (f("loss_terms.kre_psi") - f("loss_terms.j") * (sh + cr + es)) * f("loss_terms.c");
+    close(re, f("loss_re_ksi") * 1000.0, "RE");
+    close(es + cr + sh + re, f("loss_total_ksi") * 1000.0, "total");
+    close(f("fpj_ksi") - f("loss_total_ksi"), f("fse_ksi"), "fse");
+    close(f("fpj_ksi") - f("loss_es_ksi"), f("fpo_ksi"), "fpo");
+    close(f("fse_ksi") * f("loss_terms.aps_in2"), f("pe_kip"), "Pe");
+    close(
+        f("fse_ksi") * 1000.0 / 3000.0 * f("inputs.strand_diameter_in"),
+        f("transfer_length_in"),
+        "ℓtr",
+    );
+    // and the sheet shows each with its values put in
+    let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
+    for eq in [
+        "Ec = 33 wc^1.5 √f′c = 33 × 150.0^1.5 × √6000 psi",
+        "fcir = 0.9 (Pi/A + Pi e²/I) − Mg e/I = 0.9 (",
+        "RE = [Kre − J (SH + CR + ES)] C = [5000 − 0.040 × (",
+    ] {
+        assert!(sheet.contains(eq), "{eq}");
+    }
+}

@@ -60,6 +60,50 @@ pub struct ConcreteJson {
     pub fr_psi: f64,
     /// β1.
     pub beta1: f64,
+    /// λ (ACI 318-19 Table 19.2.4.2).
+    pub lambda: f64,
+    /// Unit weight wc, pcf.
+    pub wc_pcf: f64,
+    /// How Ec is found: "unit-weight", "normalweight" or "given".
+    pub ec_from: &'static str,
+}
+
+/// The terms of the loss estimate as put into its equations (Zia et al.
+/// 1979, written in psi and in), for the calculation sheet.
+#[derive(Debug, Clone, Serialize)]
+pub struct LossTermsJson {
+    /// Pi = fpj·Aps, kip.
+    pub pi_kip: f64,
+    /// Aps, in².
+    pub aps_in2: f64,
+    /// Gross area, in².
+    pub area_in2: f64,
+    /// Gross second moment, in⁴.
+    pub ix_in4: f64,
+    /// Strand eccentricity at the critical section, in.
+    pub e_in: f64,
+    /// Self-weight moment there, kip-ft.
+    pub mg_kipft: f64,
+    /// fcir, psi.
+    pub fcir_psi: f64,
+    /// fcds, psi.
+    pub fcds_psi: f64,
+    /// Eci, psi.
+    pub eci_psi: f64,
+    /// Ec, psi.
+    pub ec_psi: f64,
+    /// Kcr.
+    pub kcr: f64,
+    /// Volume-to-surface ratio, in.
+    pub vs_in: f64,
+    /// Relative humidity, %.
+    pub rh_pct: f64,
+    /// Kre, psi.
+    pub kre_psi: f64,
+    /// J.
+    pub j: f64,
+    /// C.
+    pub c: f64,
 }
 
 /// The bay's inputs the checks read, as numbers.
@@ -195,6 +239,8 @@ pub struct CheckJson {
     pub strands: Vec<StrandJson>,
     /// Precast concrete: f′c, Ec, fr (psi) and β1.
     pub concrete: ConcreteJson,
+    /// The loss estimate's terms (zero with a lump-sum total).
+    pub loss_terms: LossTermsJson,
     /// Sign convention.
     pub sign_convention: &'static str,
     /// The bay's placed loads and openings (US; an SI run converts them).
@@ -313,6 +359,34 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             ec_psi: cand.mix.ec().get(),
             fr_psi: cand.mix.fr().get(),
             beta1: cand.mix.beta1(),
+            lambda: cand.mix.aggregate.lambda(),
+            wc_pcf: cand.mix.unit_weight.in_unit("pcf"),
+            ec_from: match cand.mix.modulus {
+                crate::material::Modulus::UnitWeight => "unit-weight",
+                crate::material::Modulus::Normalweight => "normalweight",
+                crate::material::Modulus::Given(_) => "given",
+            },
+        },
+        loss_terms: {
+            let (l, t) = (&h.losses, &h.losses.terms);
+            LossTermsJson {
+                pi_kip: t.pi_lbf / 1000.0,
+                aps_in2: h.pj_lbf / h.fpj_psi.max(1e-9),
+                area_in2: t.area_in2,
+                ix_in4: t.inertia_in4,
+                e_in: t.e_in,
+                mg_kipft: t.mg_lbin / 12000.0,
+                fcir_psi: l.fcir_psi,
+                fcds_psi: l.fcds_psi,
+                eci_psi: t.eci_psi,
+                ec_psi: t.ec_psi,
+                kcr: t.kcr,
+                vs_in: t.vs_in,
+                rh_pct: t.rh_pct,
+                kre_psi: t.kre_psi,
+                j: t.j,
+                c: l.c_factor,
+            }
         },
         sign_convention: SIGN_CONVENTION,
         items: items_text(case, System::Us),

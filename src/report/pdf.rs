@@ -12,7 +12,7 @@ use std::sync::OnceLock;
 
 use krilla::Document;
 use krilla::color::rgb;
-use krilla::geom::{PathBuilder, Point, Rect};
+use krilla::geom::{PathBuilder, Point, Rect, Transform};
 use krilla::metadata::Metadata;
 use krilla::num::NormalizedF32;
 use krilla::page::PageSettings;
@@ -227,6 +227,8 @@ struct Fonts {
     sans: Font,
     /// Which characters the monospaced face has.
     face: ttf_parser::Face<'static>,
+    /// The fallback face, for its advances.
+    sans_face: ttf_parser::Face<'static>,
 }
 
 fn fonts() -> &'static Fonts {
@@ -236,6 +238,7 @@ fn fonts() -> &'static Fonts {
         bold: Font::new(MONO_BOLD.into(), 0).expect("the embedded bold font"),
         sans: Font::new(SANS.into(), 0).expect("the embedded fallback font"),
         face: ttf_parser::Face::parse(MONO, 0).expect("the embedded monospaced font"),
+        sans_face: ttf_parser::Face::parse(SANS, 0).expect("the embedded fallback font"),
     })
 }
 
@@ -293,15 +296,25 @@ fn text(s: &mut Surface, x: f32, y: f32, t: &str, size: f32, bold: bool) {
             run.push(c);
         } else {
             flush(s, &mut run, run_at);
+            // squeezed or stretched to the cell, so the grid (and a reader's
+            // idea of where words end) is kept
+            let adv = f
+                .sans_face
+                .glyph_index(c)
+                .and_then(|g| f.sans_face.glyph_hor_advance(g))
+                .map_or(ADVANCE_EM, |a| a as f32 / f.sans_face.units_per_em() as f32);
+            let sx = ADVANCE_EM / adv.max(0.1);
+            s.push_transform(&Transform::from_row(sx, 0.0, 0.0, 1.0, x + i as f32 * cell, y));
             s.set_fill(Some(fill(black())));
             s.draw_text(
-                Point::from_xy(x + i as f32 * cell, y),
+                Point::from_xy(0.0, 0.0),
                 f.sans.clone(),
                 size,
                 &c.to_string(),
                 false,
                 TextDirection::LeftToRight,
             );
+            s.pop();
         }
     }
     flush(s, &mut run, run_at);

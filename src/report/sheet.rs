@@ -42,6 +42,16 @@ impl<W: Write> Sheet<'_, W> {
         }
     }
 
+    /// The line under a number: its equation with the values put into it
+    /// (in the psi-inch form the clause writes it) and the clause.
+    fn eq(&mut self, with_values: &str, clause: &str) -> io::Result<()> {
+        if self.md {
+            writeln!(self.w, "  - {with_values} — {clause}")
+        } else {
+            writeln!(self.w, "      {with_values} — {clause}")
+        }
+    }
+
     fn text(&mut self, line: &str) -> io::Result<()> {
         let line = display::localize(line, self.sys);
         if self.md {
@@ -50,6 +60,12 @@ impl<W: Write> Sheet<'_, W> {
             writeln!(self.w, "  {line}")
         }
     }
+}
+
+/// A value put into an equation, as written: `places` decimals, trailing
+/// zeros kept so the reader can see the precision carried.
+fn g(v: f64, places: usize) -> String {
+    format!("{v:.places$}")
 }
 
 /// Write the sheet (`md`: Markdown, else text) in the display system.
@@ -62,8 +78,10 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         writeln!(s.w, "{}", "=".repeat(78))?;
     }
     s.text(&format!(
-        "ACI 318-19; entry {} / {}; numbers as `plankwise check --json` gives them, its key in brackets",
-        j.section, j.pattern
+        "ACI 318-19; entry {} / {}; numbers as `plankwise check --json` gives them, its key in brackets; under a computed number its equation with the values put into it, in the psi-inch form the clause writes it{}",
+        j.section,
+        j.pattern,
+        if sys == System::Si { " (the result in SI)" } else { "" }
     ))?;
 
     s.head("1. Inputs")?;
@@ -82,9 +100,32 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     }
     s.num("f′c", j.concrete.fc_psi, "psi", 0, "concrete.fc_psi")?;
     s.num("f′ci", j.inputs.fci_psi, "psi", 0, "inputs.fci_psi")?;
-    s.num("Ec (ACI 318-19 19.2.2)", j.concrete.ec_psi, "psi", 0, "concrete.ec_psi")?;
-    s.num("fr = 7.5λ√f′c (19.2.3)", j.concrete.fr_psi, "psi", 0, "concrete.fr_psi")?;
-    s.num("β1 (22.2.2.4.3)", j.concrete.beta1, "", 3, "concrete.beta1")?;
+    let c = &j.concrete;
+    s.num("Ec", c.ec_psi, "psi", 0, "concrete.ec_psi")?;
+    match c.ec_from {
+        "unit-weight" => s.eq(
+            &format!("Ec = 33 wc^1.5 √f′c = 33 × {}^1.5 × √{} psi", g(c.wc_pcf, 1), g(c.fc_psi, 0)),
+            "ACI 318-19 19.2.2.1(a)",
+        )?,
+        "normalweight" => s.eq(
+            &format!("Ec = 57000 √f′c = 57000 × √{} psi", g(c.fc_psi, 0)),
+            "ACI 318-19 19.2.2.1(b)",
+        )?,
+        _ => s.eq("Ec given by the producer (the catalog's mix)", "ACI 318-19 19.2.2.1")?,
+    }
+    s.num("modulus of rupture fr", c.fr_psi, "psi", 0, "concrete.fr_psi")?;
+    s.eq(
+        &format!("fr = 7.5 λ √f′c = 7.5 × {} × √{} psi", g(c.lambda, 2), g(c.fc_psi, 0)),
+        "ACI 318-19 19.2.3.1; λ Table 19.2.4.2",
+    )?;
+    s.num("β1", c.beta1, "", 3, "concrete.beta1")?;
+    s.eq(
+        &format!(
+            "β1 = 0.85 − 0.05 (f′c − 4000)/1000 = 0.85 − 0.05 × ({} − 4000)/1000, within 0.65 to 0.85",
+            g(c.fc_psi, 0)
+        ),
+        "ACI 318-19 Table 22.2.2.4.3",
+    )?;
     s.num("strand diameter", j.inputs.strand_diameter_in, "in", 3, "inputs.strand_diameter_in")?;
     s.num("strands", j.inputs.strand_count as f64, "", 0, "inputs.strand_count")?;
     s.num("fpu", j.inputs.fpu_ksi, "ksi", 0, "inputs.fpu_ksi")?;
@@ -96,8 +137,16 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     s.num("centroid above soffit yb", p.yb_in, "in", 3, "section_props.yb_in")?;
     s.num("centroid to top yt", p.yt_in, "in", 3, "section_props.yt_in")?;
     s.num("second moment I", p.ix_in4, "in⁴", 0, "section_props.ix_in4")?;
-    s.num("Sb = I/yb", p.sb_in3, "in³", 1, "section_props.sb_in3")?;
-    s.num("St = I/yt", p.st_in3, "in³", 1, "section_props.st_in3")?;
+    s.num("Sb", p.sb_in3, "in³", 1, "section_props.sb_in3")?;
+    s.eq(
+        &format!("Sb = I/yb = {} / {} in³", g(p.ix_in4, 0), g(p.yb_in, 3)),
+        "section modulus, bottom fibre",
+    )?;
+    s.num("St", p.st_in3, "in³", 1, "section_props.st_in3")?;
+    s.eq(
+        &format!("St = I/yt = {} / {} in³", g(p.ix_in4, 0), g(p.yt_in, 3)),
+        "section modulus, top fibre",
+    )?;
     s.num(
         "least summed web width bw",
         p.web_width_min_in,
@@ -108,22 +157,155 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     s.num("volume-to-surface ratio", p.vs_ratio_in, "in", 3, "section_props.vs_ratio_in")?;
 
     s.head("3. Prestress and losses (Zia et al. 1979)")?;
+    let t = &j.loss_terms;
+    let zia = t.pi_kip > 0.0 && !j.loss_method.to_ascii_lowercase().contains("lump");
     s.num("jacking stress fpj", j.fpj_ksi, "ksi", 2, "fpj_ksi")?;
+    s.eq(
+        &format!(
+            "fpj = {} fpu = {} × {} ksi",
+            g(j.fpj_ksi / j.inputs.fpu_ksi, 3),
+            g(j.fpj_ksi / j.inputs.fpu_ksi, 3),
+            g(j.inputs.fpu_ksi, 0)
+        ),
+        "the pattern's jacking ratio; limit ACI 318-19 Table 20.3.2.5.1",
+    )?;
+    if zia {
+        s.num("force at jacking Pi", t.pi_kip, "kip", 2, "loss_terms.pi_kip")?;
+        s.eq(
+            &format!("Pi = fpj Aps = {} ksi × {} in²", g(j.fpj_ksi, 2), g(t.aps_in2, 3)),
+            "Zia et al. 1979",
+        )?;
+        s.num(
+            "concrete stress at the strand, transfer fcir",
+            t.fcir_psi,
+            "psi",
+            1,
+            "loss_terms.fcir_psi",
+        )?;
+        s.eq(
+            &format!(
+                "fcir = 0.9 (Pi/A + Pi e²/I) − Mg e/I = 0.9 ({} / {} + {} × {}² / {}) − {} × {} / {} psi (lbf, in)",
+                g(t.pi_kip * 1000.0, 0),
+                g(t.area_in2, 1),
+                g(t.pi_kip * 1000.0, 0),
+                g(t.e_in, 3),
+                g(t.ix_in4, 0),
+                g(t.mg_kipft * 12000.0, 0),
+                g(t.e_in, 3),
+                g(t.ix_in4, 0)
+            ),
+            "Zia et al. 1979 (Kcir 0.9, pretensioned)",
+        )?;
+        s.num("... from superimposed dead load fcds", t.fcds_psi, "psi", 1, "loss_terms.fcds_psi")?;
+    }
     s.num("elastic shortening ES", j.loss_es_ksi, "ksi", 2, "loss_es_ksi")?;
+    if zia {
+        s.eq(
+            &format!(
+                "ES = Kes Eps fcir/Eci = 1.0 × {} × {} / {} psi",
+                g(j.inputs.eps_ksi * 1000.0, 0),
+                g(t.fcir_psi, 1),
+                g(t.eci_psi, 0)
+            ),
+            "Zia et al. 1979",
+        )?;
+    }
     s.num("after transfer fpo", j.fpo_ksi, "ksi", 2, "fpo_ksi")?;
+    s.eq(
+        &format!("fpo = fpj − ES = {} − {} ksi", g(j.fpj_ksi, 2), g(j.loss_es_ksi, 2)),
+        "strand stress after transfer",
+    )?;
     s.num("creep CR", j.loss_cr_ksi, "ksi", 2, "loss_cr_ksi")?;
+    if zia {
+        s.eq(
+            &format!(
+                "CR = Kcr (Eps/Ec)(fcir − fcds) = {} × ({} / {}) × ({} − {}) psi",
+                g(t.kcr, 1),
+                g(j.inputs.eps_ksi * 1000.0, 0),
+                g(t.ec_psi, 0),
+                g(t.fcir_psi, 1),
+                g(t.fcds_psi, 1)
+            ),
+            "Zia et al. 1979 (Kcr 2.0; 1.6 lightweight)",
+        )?;
+    }
     s.num("shrinkage SH", j.loss_sh_ksi, "ksi", 2, "loss_sh_ksi")?;
+    if zia {
+        s.eq(
+            &format!(
+                "SH = 8.2×10⁻⁶ Ksh Eps (1 − 0.06 V/S)(100 − RH) = 8.2×10⁻⁶ × 1.0 × {} × (1 − 0.06 × {}) × (100 − {}) psi",
+                g(j.inputs.eps_ksi * 1000.0, 0),
+                g(t.vs_in, 3),
+                g(t.rh_pct, 0)
+            ),
+            "Zia et al. 1979 (Ksh 1.0, pretensioned; V/S in in)",
+        )?;
+    }
     s.num("relaxation RE", j.loss_re_ksi, "ksi", 2, "loss_re_ksi")?;
+    if zia {
+        s.eq(
+            &format!(
+                "RE = [Kre − J (SH + CR + ES)] C = [{} − {} × ({} + {} + {})] × {} psi",
+                g(t.kre_psi, 0),
+                g(t.j, 3),
+                g(j.loss_sh_ksi * 1000.0, 0),
+                g(j.loss_cr_ksi * 1000.0, 0),
+                g(j.loss_es_ksi * 1000.0, 0),
+                g(t.c, 3)
+            ),
+            "Zia et al. 1979 (Kre, J by strand class; C from fpi/fpu, table from memory)",
+        )?;
+    }
     s.num("total loss", j.loss_total_ksi, "ksi", 2, "loss_total_ksi")?;
+    if zia {
+        s.eq(
+            &format!(
+                "total = ES + CR + SH + RE = {} + {} + {} + {} ksi",
+                g(j.loss_es_ksi, 2),
+                g(j.loss_cr_ksi, 2),
+                g(j.loss_sh_ksi, 2),
+                g(j.loss_re_ksi, 2)
+            ),
+            "Zia et al. 1979",
+        )?;
+    }
     s.num("effective fse", j.fse_ksi, "ksi", 2, "fse_ksi")?;
+    s.eq(
+        &format!("fse = fpj − total = {} − {} ksi", g(j.fpj_ksi, 2), g(j.loss_total_ksi, 2)),
+        "effective prestress",
+    )?;
     s.num("effective force Pe", j.pe_kip, "kip", 2, "pe_kip")?;
-    s.num("transfer length (fse/3000) db", j.transfer_length_in, "in", 2, "transfer_length_in")?;
+    s.eq(
+        &format!(
+            "Pe = fse Aps = {} ksi × {} in²",
+            g(j.fse_ksi, 2),
+            g(t.aps_in2.max(j.pe_kip / j.fse_ksi.max(1e-9)), 3)
+        ),
+        "effective force",
+    )?;
+    s.num("transfer length ℓtr", j.transfer_length_in, "in", 2, "transfer_length_in")?;
+    s.eq(
+        &format!(
+            "ℓtr = (fse/3000) db = ({} / 3000) × {} in",
+            g(j.fse_ksi * 1000.0, 0),
+            g(j.inputs.strand_diameter_in, 3)
+        ),
+        "ACI 318-19 25.4.8.1 (first term); 21.2.3",
+    )?;
     s.text(&format!("loss method: {}", j.loss_method))?;
 
     s.head("4. At the section of the greatest factored moment")?;
     s.num("factored moment Mu", j.mu_kipft, "kip-ft", 2, "mu_kipft")?;
     s.num("nominal strength Mn (strain compatibility)", j.mn_kipft, "kip-ft", 2, "mn_kipft")?;
     s.num("design strength φMn", j.phi_mn_kipft, "kip-ft", 2, "phi_mn_kipft")?;
+    s.eq(
+        &format!(
+            "φMn = φ Mn = {} × {} kip-ft",
+            g(j.phi_mn_kipft / j.mn_kipft.max(1e-9), 3),
+            g(j.mn_kipft, 2)
+        ),
+        "ACI 318-19 21.2.2 (φ by εt), 21.2.3 (within ℓd)",
+    )?;
     s.num("cracking moment Mcr", j.mcr_kipft, "kip-ft", 2, "mcr_kipft")?;
     s.num(
         "service moment (total)",
