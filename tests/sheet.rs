@@ -136,7 +136,8 @@ fn the_sheet_and_the_capacity_table_match_their_golden_files() {
 /// The equations the sheet prints hold with the numbers it prints beside
 /// them (the terms from `check --json`): ACI 318-19 Eqs. 19.2.2.1(a) and
 /// 19.2.3.1, Table 22.2.2.4.3, the Zia et al. (1979) loss equations and
-/// the first term of Eq. 25.4.8.1, each recomputed here from its terms.
+/// the first term of Eq. 25.4.8.1, Mcr by §24.2.3.5 and the fibre stresses
+/// at service, each recomputed here from its terms.
 #[test]
 fn the_sheets_equations_hold_with_its_terms() {
     let v: serde_json::Value = serde_json::from_str(&run(&[&ENTRY[..], &["--json"]].concat())).unwrap();
@@ -174,6 +175,17 @@ fn the_sheets_equations_hold_with_its_terms() {
         f("transfer_length_in"),
         "ℓtr",
     );
+    // at the section of the greatest factored moment (a member without topping)
+    let (pe, e) = (f("at_mu.pe_kip") * 1000.0, f("at_mu.e_in"));
+    let (sb, st) = (f("section_props.sb_in3"), f("section_props.st_in3"));
+    let m = f("m_service_total_kipft") * 12000.0;
+    close(
+        sb * (f("concrete.fr_psi") + pe / a + pe * e / sb) / 12000.0,
+        f("mcr_kipft"),
+        "Mcr (24.2.3.5)",
+    );
+    close(pe / a + pe * e / sb - m / sb, f("f_bottom_service_psi"), "fb");
+    close(pe / a - pe * e / st + m / st, f("f_top_service_psi"), "ft");
     // and the sheet shows each with its values put in
     let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
     for eq in [

@@ -68,6 +68,20 @@ pub struct ConcreteJson {
     pub ec_from: &'static str,
 }
 
+/// The prestress at the section of the greatest factored moment, for the
+/// calculation sheet's stress and cracking-moment equations.
+#[derive(Debug, Clone, Serialize)]
+pub struct AtMuJson {
+    /// Where, from the left bearing centre, ft.
+    pub x_ft: f64,
+    /// Effective prestress force there (after transfer length), kip.
+    pub pe_kip: f64,
+    /// Its eccentricity below the precast centroid, in.
+    pub e_in: f64,
+    /// Moment on the precast section alone (self-weight and topping), kip-ft.
+    pub m_precast_kipft: f64,
+}
+
 /// The terms of the loss estimate as put into its equations (Zia et al.
 /// 1979, written in psi and in), for the calculation sheet.
 #[derive(Debug, Clone, Serialize)]
@@ -241,6 +255,8 @@ pub struct CheckJson {
     pub concrete: ConcreteJson,
     /// The loss estimate's terms (zero with a lump-sum total).
     pub loss_terms: LossTermsJson,
+    /// The prestress at the section of the greatest factored moment.
+    pub at_mu: AtMuJson,
     /// Sign convention.
     pub sign_convention: &'static str,
     /// The bay's placed loads and openings (US; an SI run converts them).
@@ -366,6 +382,12 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
                 crate::material::Modulus::Normalweight => "normalweight",
                 crate::material::Modulus::Given(_) => "given",
             },
+        },
+        at_mu: AtMuJson {
+            x_ft: mid.x_in / 12.0,
+            pe_kip: mid.prestress.pe / 1000.0,
+            e_in: cand.section.props.yb_in - mid.prestress.y,
+            m_precast_kipft: kipft(mid.effects.m_self + mid.effects.m_topping),
         },
         loss_terms: {
             let (l, t) = (&h.losses, &h.losses.terms);
