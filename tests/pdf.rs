@@ -75,16 +75,35 @@ fn renders(pdf: &Path, pages: usize) {
     }
 }
 
-/// The text of each page, whitespace runs made single.
-fn pages_text(pdf: &Path) -> Vec<String> {
+/// The text of each page as pdftotext lays it out.
+fn raw_pages(pdf: &Path) -> Vec<String> {
     let out = Command::new("pdftotext").arg("-layout").arg(pdf).arg("-").output().unwrap();
     assert!(out.status.success());
     let text = String::from_utf8_lossy(&out.stdout).into_owned();
-    let mut pages: Vec<String> = text.split('\x0c').map(squash).collect();
-    if pages.last().is_some_and(|p| p.is_empty()) {
+    let mut pages: Vec<String> = text.split('\x0c').map(str::to_string).collect();
+    if pages.last().is_some_and(|p| p.trim().is_empty()) {
         pages.pop();
     }
     pages
+}
+
+/// The text of each page, whitespace runs made single.
+fn pages_text(pdf: &Path) -> Vec<String> {
+    raw_pages(pdf).iter().map(|p| squash(p)).collect()
+}
+
+/// The body of every page run together (running head, cautions and page
+/// number left out), so a line wrapped over a page break reads whole.
+fn body_text(pdf: &Path) -> String {
+    let bodies: Vec<String> = raw_pages(pdf)
+        .iter()
+        .map(|p| {
+            let lines: Vec<&str> = p.lines().filter(|l| !l.trim().is_empty()).collect();
+            let end = lines.len().saturating_sub(3);
+            squash(&lines[1.min(end)..end].join("\n"))
+        })
+        .collect();
+    bodies.join(" ")
 }
 
 fn squash(s: &str) -> String {
@@ -119,7 +138,7 @@ fn the_shortlist_pdf_carries_the_text_shortlists_values_on_numbered_pages() {
     let pages = pages_text(&pdf);
     assert_eq!(pages.len(), n);
     every_page_has_cautions_and_number(&pages);
-    let all = pages.join(" ");
+    let all = body_text(&pdf);
     let text = std::fs::read_to_string(&txt).unwrap();
     // the header block, the bays, every listed member and its figures as the text has them
     for l in text.lines() {
@@ -193,7 +212,7 @@ fn the_capacity_pdf_has_every_cell_of_the_text_table() {
     renders(&pdf, n);
     let pages = pages_text(&pdf);
     every_page_has_cautions_and_number(&pages);
-    let all = pages.join(" ");
+    let all = body_text(&pdf);
     let mut cells = 0;
     // every entry and load level: the longest span (as the text table
     // prints it) and the check that ends it
@@ -237,7 +256,7 @@ fn the_calculation_sheet_pdf_has_every_number_of_the_text_sheet() {
     renders(&pdf, n);
     let pages = pages_text(&pdf);
     every_page_has_cautions_and_number(&pages);
-    let all = pages.join(" ");
+    let all = body_text(&pdf);
     let mut keyed = 0;
     // every line of the text sheet that carries a JSON key, value and key alike
     for l in text.lines().filter(|l| l.trim_end().ends_with(']') && l.contains(" [")) {

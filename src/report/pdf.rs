@@ -461,13 +461,19 @@ pub fn render(doc: &Doc) -> Result<Vec<u8>, String> {
         let mut s = page.surface();
         // running head
         text(&mut s, MARGIN, HEAD - 22.0, &doc.title, 8.0, true);
-        let right = &doc.head_right;
+        // the right side of the head, shortened to the room the title leaves
         let cw = 7.0 * ADVANCE_EM;
+        let room = ((w - 2.0 * MARGIN - doc.title.chars().count() as f32 * 8.0 * ADVANCE_EM - 14.0) / cw).max(8.0) as usize;
+        let right: String = if doc.head_right.chars().count() > room {
+            doc.head_right.chars().take(room - 1).chain(std::iter::once('…')).collect()
+        } else {
+            doc.head_right.clone()
+        };
         text(
             &mut s,
             w - MARGIN - right.chars().count() as f32 * cw,
             HEAD - 22.0,
-            right,
+            &right,
             7.0,
             false,
         );
