@@ -654,6 +654,9 @@ pub struct Evaluation {
     /// What each opening does to the units of this member (not kept by a
     /// brief evaluation).
     pub openings: Vec<String>,
+    /// The terms of the stresses at release where the release compression
+    /// check finds its worst point (not kept by a brief evaluation).
+    pub release_at: Option<release::Terms>,
 }
 
 impl Evaluation {
@@ -1543,6 +1546,15 @@ fn results(an: &Analysis) -> Evaluation {
         stations: Vec::new(),
         units: if an.brief { Vec::new() } else { vec![UnitReport::of(an)] },
         openings: Vec::new(),
+        release_at: if an.brief {
+            None
+        } else {
+            checks
+                .iter()
+                .find(|c| c.info.id == "release_compression")
+                .and_then(|c| c.station_ft)
+                .map(|x| release::terms(&an.member, x * 12.0))
+        },
         checks,
     }
 }

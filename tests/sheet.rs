@@ -186,6 +186,20 @@ fn the_sheets_equations_hold_with_its_terms() {
     );
     close(pe / a + pe * e / sb - m / sb, f("f_bottom_service_psi"), "fb");
     close(pe / a - pe * e / st + m / st, f("f_top_service_psi"), "ft");
+    // at release, where the compression check finds its worst point: the
+    // fibre stresses from their terms, and the check's demand is the larger
+    let (po, er, mg) = (
+        f("at_release.po_kip") * 1000.0,
+        f("at_release.e_in"),
+        f("at_release.mg_kipft") * 12000.0,
+    );
+    let (ar, sbr, str_) = (f("at_release.area_in2"), f("at_release.sb_in3"), f("at_release.st_in3"));
+    let fb = po / ar + po * er / sbr - mg / sbr;
+    let ft = po / ar - po * er / str_ + mg / str_;
+    close(fb, f("at_release.f_bottom_psi"), "fb at release");
+    close(ft, f("at_release.f_top_psi"), "ft at release");
+    close(fb.max(ft), f("checks.release_compression.demand"), "release compression demand");
+    close(f("at_release.x_ft"), f("checks.release_compression.station_ft"), "where");
     // and the sheet shows each with its values put in
     let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
     for eq in [

@@ -20,6 +20,8 @@
 //! Does not cover: bonded reinforcement that resists the tension force
 //! (§24.5.3.2.1), which would allow the tension limit to be exceeded.
 
+use serde::Serialize;
+
 use super::{Analysis, CheckInfo, CheckResult, Group, Peak, Reads, peak};
 use crate::member::Member;
 
@@ -54,6 +56,49 @@ pub fn at(m: &Member, x: f64) -> (f64, f64) {
     let mg = m.release_moment(x);
     let a = b.area_in2;
     (p / a - p * e / b.st_in3 + mg / b.st_in3, p / a + p * e / b.sb_in3 - mg / b.sb_in3)
+}
+
+/// The terms of the fibre stresses at release at one point, as put into
+/// f = P/A ∓ P e/S ± Mg/S (psi, in, lbf; compression positive), for the
+/// calculation sheet.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Terms {
+    /// Where, from the left bearing centre, in.
+    pub x_in: f64,
+    /// Prestress force there just after transfer (within the transfer length, in part), lbf.
+    pub p_lbf: f64,
+    /// Its eccentricity below the centroid, in.
+    pub e_in: f64,
+    /// Self-weight moment at release (the member on its ends), lbf·in.
+    pub mg_lbin: f64,
+    /// Area, in².
+    pub area_in2: f64,
+    /// Section moduli, bottom and top, in³.
+    pub sb_in3: f64,
+    /// Top.
+    pub st_in3: f64,
+    /// The fibre stresses, psi.
+    pub top_psi: f64,
+    /// Bottom.
+    pub bottom_psi: f64,
+}
+
+/// The terms of [`at`] at `x`.
+pub fn terms(m: &Member, x: f64) -> Terms {
+    let (p, y) = m.force_at(x, m.history.fpo_psi, m.ltr);
+    let b = m.props_at(x).0;
+    let (top, bottom) = at(m, x);
+    Terms {
+        x_in: x,
+        p_lbf: p,
+        e_in: b.yb_in - y,
+        mg_lbin: m.release_moment(x),
+        area_in2: b.area_in2,
+        sb_in3: b.sb_in3,
+        st_in3: b.st_in3,
+        top_psi: top,
+        bottom_psi: bottom,
+    }
 }
 
 /// Whether `d` lies in the end region (within ℓtr of the member end). A

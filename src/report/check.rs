@@ -82,6 +82,30 @@ pub struct AtMuJson {
     pub m_precast_kipft: f64,
 }
 
+/// The stresses at release at one point, with the terms of
+/// f = P/A ∓ P e/S ± Mg/S.
+#[derive(Debug, Clone, Serialize)]
+pub struct AtReleaseJson {
+    /// Where, from the left bearing centre, ft.
+    pub x_ft: f64,
+    /// Prestress force there just after transfer, kip.
+    pub po_kip: f64,
+    /// Its eccentricity, in.
+    pub e_in: f64,
+    /// Self-weight moment at release, kip-ft.
+    pub mg_kipft: f64,
+    /// Area, in².
+    pub area_in2: f64,
+    /// Sb, in³.
+    pub sb_in3: f64,
+    /// St, in³.
+    pub st_in3: f64,
+    /// Top fibre, psi (compression positive).
+    pub f_top_psi: f64,
+    /// Bottom fibre, psi.
+    pub f_bottom_psi: f64,
+}
+
 /// The terms of the loss estimate as put into its equations (Zia et al.
 /// 1979, written in psi and in), for the calculation sheet.
 #[derive(Debug, Clone, Serialize)]
@@ -257,6 +281,9 @@ pub struct CheckJson {
     pub loss_terms: LossTermsJson,
     /// The prestress at the section of the greatest factored moment.
     pub at_mu: AtMuJson,
+    /// The stresses at release where the release compression check finds
+    /// its worst point, with their terms.
+    pub at_release: Option<AtReleaseJson>,
     /// Sign convention.
     pub sign_convention: &'static str,
     /// The bay's placed loads and openings (US; an SI run converts them).
@@ -383,6 +410,17 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
                 crate::material::Modulus::Given(_) => "given",
             },
         },
+        at_release: ev.release_at.map(|t| AtReleaseJson {
+            x_ft: t.x_in / 12.0,
+            po_kip: t.p_lbf / 1000.0,
+            e_in: t.e_in,
+            mg_kipft: kipft(t.mg_lbin),
+            area_in2: t.area_in2,
+            sb_in3: t.sb_in3,
+            st_in3: t.st_in3,
+            f_top_psi: t.top_psi,
+            f_bottom_psi: t.bottom_psi,
+        }),
         at_mu: AtMuJson {
             x_ft: mid.x_in / 12.0,
             pe_kip: mid.prestress.pe / 1000.0,

@@ -294,7 +294,42 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     )?;
     s.text(&format!("loss method: {}", j.loss_method))?;
 
-    s.head("4. At the section of the greatest factored moment")?;
+    if let Some(r) = &j.at_release {
+        s.head("4. Stresses at release, where compression is worst")?;
+        s.num("where, from the left bearing centre", r.x_ft, "ft", 3, "at_release.x_ft")?;
+        s.num("force just after transfer there Po", r.po_kip, "kip", 2, "at_release.po_kip")?;
+        s.num("its eccentricity e", r.e_in, "in", 3, "at_release.e_in")?;
+        s.num(
+            "self-weight moment, member on its ends Mg",
+            r.mg_kipft,
+            "kip-ft",
+            2,
+            "at_release.mg_kipft",
+        )?;
+        let (po, e, mg) = (g(r.po_kip * 1000.0, 0), g(r.e_in, 3), g(r.mg_kipft * 12000.0, 0));
+        s.num("bottom fibre", r.f_bottom_psi, "psi", 0, "at_release.f_bottom_psi")?;
+        s.eq(
+            &format!(
+                "fb = Po/A + Po e/Sb − Mg/Sb = {po} / {} + {po} × {e} / {} − {mg} / {} psi (compression +)",
+                g(r.area_in2, 1),
+                g(r.sb_in3, 1),
+                g(r.sb_in3, 1)
+            ),
+            "ACI 318-19 24.5.3 (gross section, 24.5.1.2)",
+        )?;
+        s.num("top fibre", r.f_top_psi, "psi", 0, "at_release.f_top_psi")?;
+        s.eq(
+            &format!(
+                "ft = Po/A − Po e/St + Mg/St = {po} / {} − {po} × {e} / {} + {mg} / {} psi (compression +)",
+                g(r.area_in2, 1),
+                g(r.st_in3, 1),
+                g(r.st_in3, 1)
+            ),
+            "ACI 318-19 24.5.3 (gross section, 24.5.1.2)",
+        )?;
+        s.text("limits: 0.60 f′ci, 0.70 f′ci within ℓtr of an end (the release checks of section 8)")?;
+    }
+    s.head("5. At the section of the greatest factored moment")?;
     s.num("factored moment Mu", j.mu_kipft, "kip-ft", 2, "mu_kipft")?;
     s.num("nominal strength Mn (strain compatibility)", j.mn_kipft, "kip-ft", 2, "mn_kipft")?;
     s.num("design strength φMn", j.phi_mn_kipft, "kip-ft", 2, "phi_mn_kipft")?;
@@ -371,7 +406,7 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     s.num("factored shear Vu at the shear station", j.vu_kip, "kip", 2, "vu_kip")?;
     s.num("φVn there", j.phi_vn_kip, "kip", 2, "phi_vn_kip")?;
 
-    s.head("5. Camber and deflection (upward positive)")?;
+    s.head("6. Camber and deflection (upward positive)")?;
     s.num(
         "prestress camber at release",
         j.camber_prestress_release_in,
@@ -415,7 +450,7 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     )?;
     s.num("natural frequency, Hz", j.frequency_hz, "", 2, "frequency_hz")?;
 
-    s.head("6. Fire (IBC 2021 722.2)")?;
+    s.head("7. Fire (IBC 2021 722.2)")?;
     if let Some(h) = j.fire_rating_h {
         s.num("rating reached, h", h, "", 1, "fire_rating_h")?;
     } else {
@@ -431,7 +466,7 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     s.num("equivalent thickness te", j.equiv_thickness_in, "in", 2, "equiv_thickness_in")?;
     s.num("cover used for the rating", j.fire_cover_in, "in", 2, "fire_cover_in")?;
 
-    s.head("7. Every check (demand against capacity)")?;
+    s.head("8. Every check (demand against capacity)")?;
     for c in &j.checks {
         let (d, u) = display::convert(c.demand, c.unit, sys);
         let (cap, _) = display::convert(c.capacity, c.unit, sys);
