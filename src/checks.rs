@@ -657,6 +657,10 @@ pub struct Evaluation {
     /// The terms of the stresses at release where the release compression
     /// check finds its worst point (not kept by a brief evaluation).
     pub release_at: Option<release::Terms>,
+    /// The terms of the shear strength where the shear check finds its
+    /// worst point (x, in), with the governing combination there and its
+    /// factored moment, lbf·in (not kept by a brief evaluation).
+    pub shear_at: Option<(f64, shear::Terms, shear::Combo, f64)>,
 }
 
 impl Evaluation {
@@ -1546,6 +1550,18 @@ fn results(an: &Analysis) -> Evaluation {
         stations: Vec::new(),
         units: if an.brief { Vec::new() } else { vec![UnitReport::of(an)] },
         openings: Vec::new(),
+        shear_at: if an.brief {
+            None
+        } else {
+            checks.iter().find(|c| c.info.id == "shear").and_then(|c| c.station_ft).map(|x| {
+                let (m, x) = (&an.member, x * 12.0);
+                let (pre, eff) = (m.effective_at(x), m.effects(x));
+                let gov = *shear::at(m, x, pre, &eff).gov();
+                // the factored moment of that combination there, lbf·in
+                let mu = crate::case::COMBINATIONS[gov.combo as usize].apply(&eff).0;
+                (x, shear::terms(m, x, pre, &eff), gov, mu)
+            })
+        },
         release_at: if an.brief {
             None
         } else {

@@ -200,6 +200,30 @@ fn the_sheets_equations_hold_with_its_terms() {
     close(ft, f("at_release.f_top_psi"), "ft at release");
     close(fb.max(ft), f("checks.release_compression.demand"), "release compression demand");
     close(f("at_release.x_ft"), f("checks.release_compression.station_ft"), "where");
+    // shear where Vu/φVn is greatest: Vcw (22.5.6.3.2), Mcre (22.5.6.3.1c),
+    // Vci (22.5.6.3.1a) and φVn from their terms, and the check's numbers
+    let (l, r, bw, dp) = (
+        f("at_shear.lambda"),
+        f("at_shear.sqrt_fc_psi"),
+        f("at_shear.bw_in"),
+        f("at_shear.dp_in"),
+    );
+    let vcw = (3.5 * l * r + 0.3 * f("at_shear.fpc_psi")) * bw * dp + f("at_shear.vp_kip") * 1000.0;
+    close(vcw / 1000.0, f("at_shear.vcw_kip"), "Vcw");
+    let mcre = (f("at_shear.s_in3") * (6.0 * l * r + f("at_shear.fpe_psi") - f("at_shear.fd_psi"))).max(0.0);
+    close(mcre / 12000.0, f("at_shear.mcre_kipft"), "Mcre");
+    let vci =
+        0.6 * l * r * bw * dp + f("at_shear.vd_kip") * 1000.0 + f("at_shear.vi_kip") * 1000.0 * mcre / (f("at_shear.mmax_kipft") * 12000.0);
+    close(vci / 1000.0, f("at_shear.vci_raw_kip"), "Vci");
+    close((1.7 * l * r * bw * dp / 1000.0).max(0.0), f("at_shear.vci_min_kip"), "Vci,min");
+    let vci = (vci / 1000.0).max(f("at_shear.vci_min_kip"));
+    close(
+        0.75 * (vci.min(f("at_shear.vcw_kip")) + f("at_shear.vs_kip")),
+        f("at_shear.phi_vn_kip"),
+        "φVn",
+    );
+    close(f("at_shear.phi_vn_kip"), f("checks.shear.capacity"), "the shear check's capacity");
+    close(f("at_shear.vu_kip"), f("checks.shear.demand"), "the shear check's demand");
     // and the sheet shows each with its values put in
     let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
     for eq in [

@@ -148,14 +148,50 @@ pub fn vs_provided(m: &Member, dp: f64) -> Option<f64> {
     Some(n * w.area.get() * w.fy.get().min(FYT_MAX_PSI) * dp / w.spacing.get())
 }
 
-/// Shear strength at `x`, from the station's unfactored effects: every
-/// combination of ASCE 7-16 §2.3.1. Where an opening cuts the unit, the net
-/// section and the webs left (over the opening and h/2 beyond). Where a
-/// combination's moment does not sag (over a support with an overhang),
-/// Eq. 22.5.6.3.1a, written for flexure-shear cracking from the soffit,
-/// does not apply and Vci is taken at its lower bound 1.7λ√f′c bw dp, with
-/// dp = 0.8h (conservative; common practice, no source).
-pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
+/// The terms of the concrete shear strengths at one point, as put into
+/// ACI 318-19 Eqs. 22.5.6.3.1a–c and 22.5.6.3.2 (lbf, in, psi): what
+/// [`at`] computes with, and what the calculation sheet shows.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Terms {
+    /// λ.
+    pub lambda: f64,
+    /// √f′c, psi (at most 100, §22.5.3.1).
+    pub sqrt_fc_psi: f64,
+    /// Web width bw (webs or stems summed; the webs left over an opening), in.
+    pub bw_in: f64,
+    /// dp, at least 0.8h, in.
+    pub dp_in: f64,
+    /// Compressive stress at the centroid from prestress (composite: the
+    /// stress where §22.5.6.3.2 reads it), psi.
+    pub fpc_psi: f64,
+    /// Vertical component of the prestress Vp, lbf.
+    pub vp_lbf: f64,
+    /// Web-shear strength Vcw, lbf.
+    pub vcw_lbf: f64,
+    /// Compressive stress at the extreme tension fibre from prestress fpe, psi.
+    pub fpe_psi: f64,
+    /// Stress there from the unfactored dead load fd, psi.
+    pub fd_psi: f64,
+    /// Section modulus to the extreme tension fibre (composite when topped), in³.
+    pub s_in3: f64,
+    /// Mcre = S (6λ√f′c + fpe − fd), before flooring at 0, lbf·in.
+    pub mcre_raw_lbin: f64,
+    /// Mcre floored at 0, lbf·in.
+    pub mcre_lbin: f64,
+    /// Unfactored dead-load shear Vd, lbf.
+    pub vd_lbf: f64,
+    /// Lower bound of Vci, 1.7λ√f′c bw dp, lbf.
+    pub vci_min_lbf: f64,
+    /// Vci where the moment hogs, 1.7λ√f′c bw 0.8h, lbf.
+    pub vci_hog_lbf: f64,
+    /// Shear reinforcement strength counted Vs, lbf.
+    pub vs_lbf: f64,
+    /// Unfactored dead-load moment Md, lbf·in.
+    pub md_lbin: f64,
+}
+
+/// The terms of [`at`] at `x`.
+pub fn terms(m: &Member, x: f64, pre: Effective, eff: &Effects) -> Terms {
     let lam = m.mix.aggregate.lambda();
     let rt = m.mix.fc.get().sqrt().min(100.0);
     let (b, comp) = m.props_at(x);
@@ -182,7 +218,8 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     let mcre_raw = s_ext * (6.0 * lam * rt + fpe - fd);
     let mcre = mcre_raw.max(0.0);
     let vd = eff.v_dead().abs();
-    let vcw = (3.5 * lam * rt + 0.3 * fpc) * bw * dp + m.vp_at(x);
+    let vp = m.vp_at(x);
+    let vcw = (3.5 * lam * rt + 0.3 * fpc) * bw * dp + vp;
     let vci_min = 1.7 * lam * rt * bw * dp;
     let vci_hog = 1.7 * lam * rt * bw * 0.8 * m.h_total;
     // §22.5.1.2: Vs counted at most 8√f′c bw d; stems whose reinforcement
@@ -195,6 +232,49 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     } else {
         0.0
     };
+    Terms {
+        lambda: lam,
+        sqrt_fc_psi: rt,
+        bw_in: bw,
+        dp_in: dp,
+        fpc_psi: fpc,
+        vp_lbf: vp,
+        vcw_lbf: vcw,
+        fpe_psi: fpe,
+        fd_psi: fd,
+        s_in3: s_ext,
+        mcre_raw_lbin: mcre_raw,
+        mcre_lbin: mcre,
+        vd_lbf: vd,
+        vci_min_lbf: vci_min,
+        vci_hog_lbf: vci_hog,
+        vs_lbf: vs,
+        md_lbin: eff.m_dead(),
+    }
+}
+
+/// Shear strength at `x`, from the station's unfactored effects: every
+/// combination of ASCE 7-16 §2.3.1. Where an opening cuts the unit, the net
+/// section and the webs left (over the opening and h/2 beyond). Where a
+/// combination's moment does not sag (over a support with an overhang),
+/// Eq. 22.5.6.3.1a, written for flexure-shear cracking from the soffit,
+/// does not apply and Vci is taken at its lower bound 1.7λ√f′c bw dp, with
+/// dp = 0.8h (conservative; common practice, no source).
+pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
+    let t = terms(m, x, pre, eff);
+    let (lam, rt, bw, dp, vd, vcw, vci_min, vci_hog, vs, mcre) = (
+        t.lambda,
+        t.sqrt_fc_psi,
+        t.bw_in,
+        t.dp_in,
+        t.vd_lbf,
+        t.vcw_lbf,
+        t.vci_min_lbf,
+        t.vci_hog_lbf,
+        t.vs_lbf,
+        t.mcre_lbin,
+    );
+    let mcre_raw = t.mcre_raw_lbin;
     let mut k = 0u8;
     let combos = crate::case::COMBINATIONS.map(|c| {
         let (mu, v) = c.apply(eff);

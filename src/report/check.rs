@@ -106,6 +106,56 @@ pub struct AtReleaseJson {
     pub f_bottom_psi: f64,
 }
 
+/// The shear strength at one point with the terms of ACI 318-19 Eqs.
+/// 22.5.6.3.1a–c (Vci) and 22.5.6.3.2 (Vcw).
+#[derive(Debug, Clone, Serialize)]
+pub struct AtShearJson {
+    /// Where, from the left bearing centre, ft.
+    pub x_ft: f64,
+    /// The governing combination there.
+    pub combination: &'static str,
+    /// λ.
+    pub lambda: f64,
+    /// √f′c used, psi.
+    pub sqrt_fc_psi: f64,
+    /// bw, in.
+    pub bw_in: f64,
+    /// dp, in.
+    pub dp_in: f64,
+    /// fpc, psi.
+    pub fpc_psi: f64,
+    /// Vp, kip.
+    pub vp_kip: f64,
+    /// Vcw, kip.
+    pub vcw_kip: f64,
+    /// fpe, psi.
+    pub fpe_psi: f64,
+    /// fd, psi.
+    pub fd_psi: f64,
+    /// Section modulus to the tension fibre, in³.
+    pub s_in3: f64,
+    /// Mcre (floored at 0), kip-ft.
+    pub mcre_kipft: f64,
+    /// Vd, kip.
+    pub vd_kip: f64,
+    /// Vi = Vu − Vd, kip.
+    pub vi_kip: f64,
+    /// Mmax = Mu − Md, kip-ft.
+    pub mmax_kipft: f64,
+    /// Vci by Eq. 22.5.6.3.1a, kip.
+    pub vci_raw_kip: f64,
+    /// Its lower bound 1.7λ√f′c bw dp, kip.
+    pub vci_min_kip: f64,
+    /// Vci, kip.
+    pub vci_kip: f64,
+    /// Vs counted, kip.
+    pub vs_kip: f64,
+    /// Vu, kip.
+    pub vu_kip: f64,
+    /// φVn, kip.
+    pub phi_vn_kip: f64,
+}
+
 /// The terms of the loss estimate as put into its equations (Zia et al.
 /// 1979, written in psi and in), for the calculation sheet.
 #[derive(Debug, Clone, Serialize)]
@@ -284,6 +334,9 @@ pub struct CheckJson {
     /// The stresses at release where the release compression check finds
     /// its worst point, with their terms.
     pub at_release: Option<AtReleaseJson>,
+    /// The shear strength where the shear check finds its worst point,
+    /// with its terms.
+    pub at_shear: Option<AtShearJson>,
     /// Sign convention.
     pub sign_convention: &'static str,
     /// The bay's placed loads and openings (US; an SI run converts them).
@@ -410,6 +463,30 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
                 crate::material::Modulus::Given(_) => "given",
             },
         },
+        at_shear: ev.shear_at.map(|(x, t, c, mu)| AtShearJson {
+            x_ft: x / 12.0,
+            combination: c.name(),
+            lambda: t.lambda,
+            sqrt_fc_psi: t.sqrt_fc_psi,
+            bw_in: t.bw_in,
+            dp_in: t.dp_in,
+            fpc_psi: t.fpc_psi,
+            vp_kip: t.vp_lbf / 1000.0,
+            vcw_kip: t.vcw_lbf / 1000.0,
+            fpe_psi: t.fpe_psi,
+            fd_psi: t.fd_psi,
+            s_in3: t.s_in3,
+            mcre_kipft: kipft(t.mcre_lbin),
+            vd_kip: t.vd_lbf / 1000.0,
+            vi_kip: (c.vu_lbf - t.vd_lbf).max(0.0) / 1000.0,
+            mmax_kipft: kipft(mu - t.md_lbin),
+            vci_raw_kip: c.vci_raw_lbf / 1000.0,
+            vci_min_kip: c.vci_min_lbf / 1000.0,
+            vci_kip: c.vci_lbf / 1000.0,
+            vs_kip: c.vs_lbf / 1000.0,
+            vu_kip: c.vu_lbf / 1000.0,
+            phi_vn_kip: c.phi_vn_lbf / 1000.0,
+        }),
         at_release: ev.release_at.map(|t| AtReleaseJson {
             x_ft: t.x_in / 12.0,
             po_kip: t.p_lbf / 1000.0,

@@ -405,6 +405,66 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     }
     s.num("factored shear Vu at the shear station", j.vu_kip, "kip", 2, "vu_kip")?;
     s.num("φVn there", j.phi_vn_kip, "kip", 2, "phi_vn_kip")?;
+    if let Some(v) = &j.at_shear {
+        s.head("5a. Shear where Vu/φVn is greatest")?;
+        s.num("where, from the left bearing centre", v.x_ft, "ft", 3, "at_shear.x_ft")?;
+        s.text(&format!("combination {} (at_shear.combination)", v.combination))?;
+        s.num("web width bw", v.bw_in, "in", 2, "at_shear.bw_in")?;
+        s.num("depth dp (at least 0.8h)", v.dp_in, "in", 2, "at_shear.dp_in")?;
+        s.num("prestress stress at the centroid fpc", v.fpc_psi, "psi", 1, "at_shear.fpc_psi")?;
+        s.num("web-shear strength Vcw", v.vcw_kip, "kip", 2, "at_shear.vcw_kip")?;
+        let (l, r, bw, dp) = (g(v.lambda, 2), g(v.sqrt_fc_psi, 2), g(v.bw_in, 2), g(v.dp_in, 2));
+        s.eq(
+            &format!(
+                "Vcw = (3.5λ√f′c + 0.3 fpc) bw dp + Vp = (3.5 × {l} × {r} + 0.3 × {}) × {bw} × {dp} + {} lbf",
+                g(v.fpc_psi, 1),
+                g(v.vp_kip * 1000.0, 0)
+            ),
+            "ACI 318-19 22.5.6.3.2",
+        )?;
+        s.num("cracking moment for shear Mcre", v.mcre_kipft, "kip-ft", 2, "at_shear.mcre_kipft")?;
+        s.eq(
+            &format!(
+                "Mcre = S (6λ√f′c + fpe − fd) = {} × (6 × {l} × {r} + {} − {}) lbf·in, not below 0",
+                g(v.s_in3, 1),
+                g(v.fpe_psi, 1),
+                g(v.fd_psi, 1)
+            ),
+            "ACI 318-19 22.5.6.3.1c",
+        )?;
+        s.num("Vci by Eq. 22.5.6.3.1a", v.vci_raw_kip, "kip", 2, "at_shear.vci_raw_kip")?;
+        if v.mmax_kipft > 0.0 {
+            s.eq(
+                &format!(
+                    "Vci = 0.6λ√f′c bw dp + Vd + Vi Mcre/Mmax = 0.6 × {l} × {r} × {bw} × {dp} + {} + {} × {} / {} lbf",
+                    g(v.vd_kip * 1000.0, 0),
+                    g(v.vi_kip * 1000.0, 0),
+                    g(v.mcre_kipft * 12000.0, 0),
+                    g(v.mmax_kipft * 12000.0, 0)
+                ),
+                "ACI 318-19 22.5.6.3.1a (Vi = Vu − Vd, Mmax = Mu − Md of the combination)",
+            )?;
+        } else {
+            s.eq(
+                "the moment does not sag here: Vci taken at 1.7λ√f′c bw (0.8h) (common practice, no source)",
+                "ACI 318-19 22.5.6.3.1",
+            )?;
+        }
+        s.num("lower bound 1.7λ√f′c bw dp", v.vci_min_kip, "kip", 2, "at_shear.vci_min_kip")?;
+        s.num("Vci", v.vci_kip, "kip", 2, "at_shear.vci_kip")?;
+        s.num("stem reinforcement counted Vs", v.vs_kip, "kip", 2, "at_shear.vs_kip")?;
+        s.num("φVn", v.phi_vn_kip, "kip", 2, "at_shear.phi_vn_kip")?;
+        s.eq(
+            &format!(
+                "φVn = φ (min(Vci, Vcw) + Vs) = 0.75 × (min({}, {}) + {}) kip",
+                g(v.vci_kip, 2),
+                g(v.vcw_kip, 2),
+                g(v.vs_kip, 2)
+            ),
+            "ACI 318-19 22.5.1.1, 22.5.6.3; φ Table 21.2.1",
+        )?;
+        s.num("Vu", v.vu_kip, "kip", 2, "at_shear.vu_kip")?;
+    }
 
     s.head("6. Camber and deflection (upward positive)")?;
     s.num(
