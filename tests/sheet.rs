@@ -224,6 +224,23 @@ fn the_sheets_equations_hold_with_its_terms() {
     );
     close(f("at_shear.phi_vn_kip"), f("checks.shear.capacity"), "the shear check's capacity");
     close(f("at_shear.vu_kip"), f("checks.shear.demand"), "the shear check's demand");
+    // camber by the multipliers (a member on its two supports)
+    let k = |n: &str| f(&format!("camber_terms.multipliers.{n}"));
+    let (dp_, dsw) = (f("camber_prestress_release_in"), f("defl_self_release_in"));
+    close(dp_ - dsw, f("camber_release_in"), "camber at release");
+    close(
+        k("erection_prestress") * dp_ - k("erection_self") * dsw,
+        f("camber_erection_in"),
+        "camber at erection",
+    );
+    close(
+        k("final_prestress") * dp_
+            - k("final_self") * dsw
+            - k("final_topping") * f("camber_terms.topping_in")
+            - k("final_sdl") * f("camber_terms.sdl_in"),
+        f("camber_final_in"),
+        "final camber",
+    );
     // and the sheet shows each with its values put in
     let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
     for eq in [

@@ -156,6 +156,17 @@ pub struct AtShearJson {
     pub phi_vn_kip: f64,
 }
 
+/// The camber multipliers and the deflections they scale, in.
+#[derive(Debug, Clone, Serialize)]
+pub struct CamberTermsJson {
+    /// Multipliers (PCI Design Handbook, after Martin 1977; values from memory).
+    pub multipliers: crate::camber::Multipliers,
+    /// Deflection from the composite topping, in.
+    pub topping_in: f64,
+    /// Deflection from the superimposed dead load, in.
+    pub sdl_in: f64,
+}
+
 /// The terms of the loss estimate as put into its equations (Zia et al.
 /// 1979, written in psi and in), for the calculation sheet.
 #[derive(Debug, Clone, Serialize)]
@@ -327,6 +338,10 @@ pub struct CheckJson {
     pub strands: Vec<StrandJson>,
     /// Precast concrete: f′c, Ec, fr (psi) and β1.
     pub concrete: ConcreteJson,
+    /// The terms of the camber by multipliers (at midspan between the
+    /// supports; none with an overhang, where the deflections are found on
+    /// the in-place supports).
+    pub camber_terms: Option<CamberTermsJson>,
     /// The loss estimate's terms (zero with a lump-sum total).
     pub loss_terms: LossTermsJson,
     /// The prestress at the section of the greatest factored moment.
@@ -497,6 +512,11 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             st_in3: t.st_in3,
             f_top_psi: t.top_psi,
             f_bottom_psi: t.bottom_psi,
+        }),
+        camber_terms: (ev.camber.tip_left.is_none() && ev.camber.tip_right.is_none()).then(|| CamberTermsJson {
+            multipliers: ev.camber.multipliers,
+            topping_in: ev.camber.topping_in,
+            sdl_in: ev.camber.sdl_in,
         }),
         at_mu: AtMuJson {
             x_ft: mid.x_in / 12.0,

@@ -482,6 +482,14 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         "defl_self_release_in",
     )?;
     s.num("camber at release", j.camber_release_in, "in", 3, "camber_release_in")?;
+    s.eq(
+        &format!(
+            "Δrel = Δp − Δsw = {} − {} in (curvature of Po·e/(Eci I) and of the self-weight integrated along the member on its ends)",
+            g(j.camber_prestress_release_in, 3),
+            g(j.defl_self_release_in, 3)
+        ),
+        "PCI Design Handbook method; Eci ACI 318-19 19.2.2.1",
+    )?;
     s.num(
         "camber at erection (multipliers)",
         j.camber_erection_in,
@@ -489,7 +497,46 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         3,
         "camber_erection_in",
     )?;
+    let ct = j.camber_terms.as_ref();
+    if let Some(t) = ct {
+        let k = &t.multipliers;
+        s.eq(
+            &format!(
+                "Δe = {} Δp − {} Δsw = {} × {} − {} × {} in",
+                g(k.erection_prestress, 2),
+                g(k.erection_self, 2),
+                g(k.erection_prestress, 2),
+                g(j.camber_prestress_release_in, 3),
+                g(k.erection_self, 2),
+                g(j.defl_self_release_in, 3)
+            ),
+            "PCI Design Handbook multipliers after Martin 1977 (values from memory)",
+        )?;
+    }
     s.num("final camber (multipliers)", j.camber_final_in, "in", 3, "camber_final_in")?;
+    if let Some(t) = ct {
+        let k = &t.multipliers;
+        s.num("deflection from topping Δtop", t.topping_in, "in", 3, "camber_terms.topping_in")?;
+        s.num("deflection from SDL Δsdl", t.sdl_in, "in", 3, "camber_terms.sdl_in")?;
+        s.eq(
+            &format!(
+                "Δf = {} Δp − {} Δsw − {} Δtop − {} Δsdl = {} × {} − {} × {} − {} × {} − {} × {} in",
+                g(k.final_prestress, 2),
+                g(k.final_self, 2),
+                g(k.final_topping, 2),
+                g(k.final_sdl, 2),
+                g(k.final_prestress, 2),
+                g(j.camber_prestress_release_in, 3),
+                g(k.final_self, 2),
+                g(j.defl_self_release_in, 3),
+                g(k.final_topping, 2),
+                g(t.topping_in, 3),
+                g(k.final_sdl, 2),
+                g(t.sdl_in, 3)
+            ),
+            "PCI Design Handbook multipliers after Martin 1977 (values from memory)",
+        )?;
+    }
     let a = &j.aged_camber;
     s.num("erection age, days", a.erection_age_days, "", 0, "aged_camber.erection_age_days")?;
     s.num(
