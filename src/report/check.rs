@@ -513,7 +513,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             f_top_psi: t.top_psi,
             f_bottom_psi: t.bottom_psi,
         }),
-        camber_terms: (ev.camber.tip_left.is_none() && ev.camber.tip_right.is_none()).then(|| CamberTermsJson {
+        camber_terms: (ev.camber.tip_left.is_none() && ev.camber.tip_right.is_none()).then_some(CamberTermsJson {
             multipliers: ev.camber.multipliers,
             topping_in: ev.camber.topping_in,
             sdl_in: ev.camber.sdl_in,
