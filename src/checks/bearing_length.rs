@@ -53,12 +53,12 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         need,
         bearing,
         None,
-        format!(
+        an.note(format_args!(
             "{kind}; ℓn = span − bearing = {:.1} ft; bearing {:.2} in, {:.2} in to spare (table values from memory)",
             ln / 12.0,
             bearing,
             bearing - need
-        ),
+        )),
     ))
 }
 

@@ -106,11 +106,11 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         bu / 1000.0,
         phi_bn / 1000.0,
         Some(if side == 0 { 0.0 } else { m.l }),
-        format!(
+        an.note(format_args!(
             "{combo} at the {} support; A1 = {width:.1} in × ({:.2} in bearing − {PAD_SETBACK_IN} in setback) = {a1:.1} in², φBn = 0.65 × 0.85 f′c A1, f′c = {:.0} psi; no √(A2/A1) increase",
             if side == 0 { "left" } else { "right" },
             m.case.bearing.get(),
             m.mix.fc.get()
-        ),
+        )),
     ))
 }

@@ -46,15 +46,18 @@ pub fn range(an: &Analysis) -> (f64, f64) {
     (a.min(b), a.max(b))
 }
 
-fn result(lo: f64, hi: f64, limit: f64, what: &str) -> CheckResult {
+fn result(lo: f64, hi: f64, limit: f64, what: Option<&str>) -> CheckResult {
     CheckResult::new(
         &INFO,
         hi - lo,
         limit,
         None,
-        format!(
-            "camber at erection {lo:+.2} to {hi:+.2} in over {what} (ACI 209R-92, age-adjusted effective modulus); limit {limit:.2} in (common practice, no source)"
-        ),
+        // no note for a ranking, which reads the numbers only
+        what.map_or(String::new(), |what| {
+            format!(
+                "camber at erection {lo:+.2} to {hi:+.2} in over {what} (ACI 209R-92, age-adjusted effective modulus); limit {limit:.2} in (common practice, no source)"
+            )
+        }),
     )
 }
 
@@ -63,8 +66,8 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     let (lo, hi) = range(an);
     let c = an.member.case;
     let te = an.aged.erection_age_days;
-    let what = format!("erection ages {te:.0}–{:.0} d", te + c.erection_spread);
-    Some(result(lo, hi, c.camber_limit.get(), &what))
+    let what = (!an.brief).then(|| format!("erection ages {te:.0}–{:.0} d", te + c.erection_spread));
+    Some(result(lo, hi, c.camber_limit.get(), what.as_deref()))
 }
 
 /// With several units analysed (an opening cuts one), the difference over
@@ -75,6 +78,7 @@ pub fn across_units(ev: &mut Evaluation) {
     if let Some(c) = ev.checks.iter_mut().find(|c| c.info.id == INFO.id)
         && hi - lo > c.demand + 1e-12
     {
-        *c = result(lo, hi, c.capacity, "the units analysed and the bay's erection ages");
+        let what = (!c.note.is_empty()).then_some("the units analysed and the bay's erection ages");
+        *c = result(lo, hi, c.capacity, what);
     }
 }

@@ -37,25 +37,30 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     let worst = stages.iter().max_by(|a, b| a.ratio().total_cmp(&b.ratio()))?;
     let t = (-worst.tension_psi).max(0.0) / worst.tension_limit_psi;
     let c = worst.compression_psi.max(0.0) / worst.compression_limit_psi;
-    let note = format!(
-        "{} at {:.0} d (×{:.1} self-weight, {}; f′c {:.0} psi; strand {:.1} ksi; supports at {}); {} fibre at {:.1} ft; limits 5λ√f′c = {:.0} psi tension, 0.60 f′c = {:.0} psi compression",
-        worst.name,
-        worst.age_days,
-        worst.multiplier,
-        worst.multiplier_source,
-        worst.fc_psi,
-        worst.fp_psi / 1000.0,
-        worst
-            .supports_in
-            .iter()
-            .map(|x| format!("{:.1} ft", x / 12.0))
-            .collect::<Vec<_>>()
-            .join(", "),
-        if t >= c { worst.tension_fibre } else { worst.compression_fibre },
-        if t >= c { worst.tension_at_in } else { worst.compression_at_in } / 12.0,
-        worst.tension_limit_psi,
-        worst.compression_limit_psi
-    );
+    // a ranking reads the numbers only: no note is written for it
+    let note = if an.brief {
+        String::new()
+    } else {
+        format!(
+            "{} at {:.0} d (×{:.1} self-weight, {}; f′c {:.0} psi; strand {:.1} ksi; supports at {}); {} fibre at {:.1} ft; limits 5λ√f′c = {:.0} psi tension, 0.60 f′c = {:.0} psi compression",
+            worst.name,
+            worst.age_days,
+            worst.multiplier,
+            worst.multiplier_source,
+            worst.fc_psi,
+            worst.fp_psi / 1000.0,
+            worst
+                .supports_in
+                .iter()
+                .map(|x| format!("{:.1} ft", x / 12.0))
+                .collect::<Vec<_>>()
+                .join(", "),
+            if t >= c { worst.tension_fibre } else { worst.compression_fibre },
+            if t >= c { worst.tension_at_in } else { worst.compression_at_in } / 12.0,
+            worst.tension_limit_psi,
+            worst.compression_limit_psi
+        )
+    };
     Some(if t >= c {
         CheckResult::tension(&INFO, worst.tension_psi, worst.tension_limit_psi, Some(worst.tension_at_in), note)
     } else {
