@@ -83,6 +83,26 @@ pub struct Camber {
     pub tip_left: Option<Tip>,
     /// At the tip of a right overhang, if any.
     pub tip_right: Option<Tip>,
+    /// The terms of the live-load deflection 5wℓ⁴/(384 Ec I) when the
+    /// loads are uniform (none where placed loads or an overhang call for
+    /// integration along the member).
+    pub live_terms: Option<LiveTerms>,
+}
+
+/// The terms of the immediate live-load deflection of a uniformly loaded
+/// member: Δ = (Ig/Ie) · 5wℓ⁴/(384 Ec Ig).
+#[derive(Debug, Clone, Copy, PartialEq, Default, Serialize)]
+pub struct LiveTerms {
+    /// Load per length on the member, plf.
+    pub w_plf: f64,
+    /// Span, in.
+    pub l_in: f64,
+    /// Ec, psi.
+    pub ec_psi: f64,
+    /// Gross (composite when topped) second moment, in⁴.
+    pub ig_in4: f64,
+    /// Ig/Ie (1 when uncracked; ACI 318-19 24.2.3.5 bilinear for T and C).
+    pub ig_over_ie: f64,
 }
 
 /// Midspan deflection of a simply supported span `l` under uniform `w`:
@@ -362,8 +382,15 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         }
     };
     let roof_use = m.case.member_use == crate::case::Use::Roof;
+    let live_w = if roof_use { m.w[4].max(m.w[3]) } else { m.w[3] };
+    let mut live_terms = (plain && !m.overhangs()).then(|| LiveTerms {
+        w_plf: live_w * 12.0,
+        l_in: l,
+        ec_psi: m.ec,
+        ig_in4: m.comp.map_or(b.ix_in4, |c| c.ix_in4),
+        ig_over_ie: 1.0,
+    });
     let (topping, sdl, mut live) = if plain {
-        let live_w = if roof_use { m.w[4].max(m.w[3]) } else { m.w[3] };
         (
             uniform_deflection(m.w[1], l, ec_i),
             uniform_deflection(m.w[2], l, ec_comp),
@@ -408,6 +435,9 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         let icr = cracked_inertia(n, m.aps, dp, b.width_in).max(1e-6);
         let ie = (ratio.powi(3) * ig + (1.0 - ratio.powi(3)) * icr).min(ig);
         live *= ig / ie;
+        if let Some(t) = live_terms.as_mut() {
+            t.ig_over_ie = ig / ie;
+        }
         cracked = true;
     }
     let camber_release = prestress - self_rel;
@@ -454,6 +484,7 @@ pub fn camber(m: &Member, class: ServiceClass, ft_total: f64, f_live: f64) -> Ca
         multipliers: mult,
         tip_left: tip(Target::LeftTip, m.case.overhang.0.get()),
         tip_right: tip(Target::RightTip, m.case.overhang.1.get()),
+        live_terms,
     }
 }
 

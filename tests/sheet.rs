@@ -241,6 +241,13 @@ fn the_sheets_equations_hold_with_its_terms() {
         f("camber_final_in"),
         "final camber",
     );
+    // the immediate live-load deflection, 5wℓ⁴/(384 Ec I) (uniform loads)
+    let lt = |n: &str| f(&format!("camber_terms.live.{n}"));
+    close(
+        lt("ig_over_ie") * 5.0 * (lt("w_plf") / 12.0) * lt("l_in").powi(4) / (384.0 * lt("ec_psi") * lt("ig_in4")),
+        f("defl_live_in"),
+        "live-load deflection",
+    );
     // and the sheet shows each with its values put in
     let sheet = run(&[&ENTRY[..], &["--sheet"]].concat());
     for eq in [

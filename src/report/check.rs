@@ -163,6 +163,8 @@ pub struct CamberTermsJson {
     pub multipliers: crate::camber::Multipliers,
     /// Deflection from the composite topping, in.
     pub topping_in: f64,
+    /// The live-load deflection's terms, when the loads are uniform.
+    pub live: Option<crate::camber::LiveTerms>,
     /// Deflection from the superimposed dead load, in.
     pub sdl_in: f64,
 }
@@ -517,6 +519,7 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             multipliers: ev.camber.multipliers,
             topping_in: ev.camber.topping_in,
             sdl_in: ev.camber.sdl_in,
+            live: ev.camber.live_terms,
         }),
         at_mu: AtMuJson {
             x_ft: mid.x_in / 12.0,

@@ -548,6 +548,23 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     )?;
     s.num("final camber (ACI 209R-92)", a.final_in, "in", 3, "aged_camber.final_in")?;
     s.num("immediate live-load deflection", j.defl_live_in, "in", 3, "defl_live_in")?;
+    if let Some(t) = ct.and_then(|t| t.live.as_ref()) {
+        s.eq(
+            &format!(
+                "Δℓ = (Ig/Ie) 5wℓ⁴/(384 Ec Ig) = {} × 5 × {} × {}⁴ / (384 × {} × {}) in (w in lbf/in, ℓ in in)",
+                g(t.ig_over_ie, 3),
+                g(t.w_plf / 12.0, 3),
+                g(t.l_in, 1),
+                g(t.ec_psi, 0),
+                g(t.ig_in4, 0)
+            ),
+            if t.ig_over_ie > 1.0 {
+                "ACI 318-19 24.2.3.5 (bilinear, class T or C); 24.2.2"
+            } else {
+                "ACI 318-19 24.2.3 (gross section, class U); 24.2.2"
+            },
+        )?;
+    }
     s.num(
         "deflection after attachment",
         j.defl_after_attach_in,
