@@ -332,6 +332,10 @@ pub struct CheckJson {
     pub fire_least_strand_cover_in: f64,
     /// Whether the fire rating rests on tables held from memory.
     pub fire_tables_from_memory: bool,
+    /// Rating by strand cover, h (null when not rated by plankwise's tables).
+    pub fire_rating_cover_h: Option<f64>,
+    /// What decided the rating: the tables read and the values found.
+    pub fire_basis: String,
     /// Natural frequency, Hz.
     pub frequency_hz: f64,
     /// Service moment (total) at the section of greatest factored moment, kip-ft.
@@ -453,6 +457,8 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
         fire_cover_in: ev.fire.cover_in,
         fire_least_strand_cover_in: ev.fire.least_strand_cover_in,
         fire_tables_from_memory: ev.fire.from_memory,
+        fire_rating_cover_h: ev.fire.rating_cover_h,
+        fire_basis: ev.fire.note.clone(),
         frequency_hz: ev.frequency_hz,
         m_service_total_kipft: kipft(crate::case::service_moments(&mid.effects, case.sustained_live).1),
         strands: cand

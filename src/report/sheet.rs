@@ -589,6 +589,16 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     )?;
     s.num("equivalent thickness te", j.equiv_thickness_in, "in", 2, "equiv_thickness_in")?;
     s.num("cover used for the rating", j.fire_cover_in, "in", 2, "fire_cover_in")?;
+    match j.fire_rating_cover_h {
+        Some(h) => s.num("rating by strand cover, h", h, "", 1, "fire_rating_cover_h")?,
+        None => s.text("rating by strand cover: not rated by plankwise's tables (fire_rating_cover_h)")?,
+    }
+    if !j.fire_basis.is_empty() {
+        s.eq(
+            &format!("rating = the lesser of the two: {}", j.fire_basis),
+            "IBC 2021 722.2.2.1 (te), 722.2.3 (cover); ACI 216.1",
+        )?;
+    }
 
     s.head("8. Every check (demand against capacity)")?;
     for c in &j.checks {
