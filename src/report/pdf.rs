@@ -441,7 +441,24 @@ fn chart(s: &mut Surface, c: &Chart, x0: f32, y0: f32, w: f32, h: f32) {
         } else {
             cx + 6.0
         };
-        text(s, lx, cy - 4.0, l, small, false);
+        // the label on the side of the marker away from the curve: below
+        // it when the curve passes above (the usual case of a point that
+        // works), above it otherwise
+        let curve_y = c
+            .curve
+            .windows(2)
+            .find(|w| w[0].0 <= *x && *x <= w[1].0)
+            .and_then(|w| match (w[0].1, w[1].1) {
+                (Some(a), Some(b)) if w[1].0 > w[0].0 => Some(a + (b - a) * (x - w[0].0) / (w[1].0 - w[0].0)),
+                _ => None,
+            });
+        let below = curve_y.is_none_or(|yc| yc >= *y);
+        let ly = if below {
+            (cy + 10.0).min(py + ph - 2.0)
+        } else {
+            (cy - 5.0).max(py + 7.0)
+        };
+        text(s, lx, ly, l, small, false);
     }
 }
 
