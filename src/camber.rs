@@ -516,6 +516,9 @@ pub struct AgedCamber {
     pub loss_erection: f64,
     /// The same, final.
     pub loss_final: f64,
+    /// Ultimate creep coefficient νu for loading at release (ACI 209R-92
+    /// Eq. 2-8 with its correction factors).
+    pub creep_ultimate: f64,
 }
 
 /// The aging coefficient χ of the method (the value EN 1992-1-1 Eq. 5.46
@@ -569,6 +572,7 @@ pub fn aged(x: &AgedInputs, erection_age: f64, cond: &crate::aging::Conditions) 
         creep_final: crate::aging::creep(FINAL_AGE_DAYS - ti, nu_i),
         loss_erection: x.loss * crate::aging::creep_time(te - ti),
         loss_final: x.loss,
+        creep_ultimate: nu_i,
     }
 }
 

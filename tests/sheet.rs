@@ -241,6 +241,16 @@ fn the_sheets_equations_hold_with_its_terms() {
         f("camber_final_in"),
         "final camber",
     );
+    // the camber at erection with age (ACI 209R-92 creep, age-adjusted effective modulus)
+    let t = f("aged_camber.erection_age_days") - f("aged_camber.release_age_days");
+    let phi = t.powf(0.6) / (10.0 + t.powf(0.6)) * f("aged_camber.creep_ultimate");
+    close(phi, f("aged_camber.creep_erection"), "φ at erection");
+    let eta = f("aged_camber.loss_erection");
+    close(
+        dp_ * (1.0 + phi) - eta * dp_ * (1.0 + 0.8 * phi) - dsw * (1.0 + phi),
+        f("aged_camber.erection_in"),
+        "camber at erection with age",
+    );
     // the immediate live-load deflection, 5wℓ⁴/(384 Ec I) (uniform loads)
     let lt = |n: &str| f(&format!("camber_terms.live.{n}"));
     close(

@@ -546,6 +546,52 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         3,
         "aged_camber.erection_in",
     )?;
+    if ct.is_some() {
+        s.num(
+            "ultimate creep coefficient νu",
+            a.creep_ultimate,
+            "",
+            3,
+            "aged_camber.creep_ultimate",
+        )?;
+        s.num(
+            "creep coefficient at erection φ",
+            a.creep_erection,
+            "",
+            3,
+            "aged_camber.creep_erection",
+        )?;
+        let t = a.erection_age_days - a.release_age_days;
+        s.eq(
+            &format!(
+                "φ = (t − ti)^0.6 / (10 + (t − ti)^0.6) νu = {}^0.6 / (10 + {}^0.6) × {}",
+                g(t, 0),
+                g(t, 0),
+                g(a.creep_ultimate, 3)
+            ),
+            "ACI 209R-92 creep-time ratio, Eq. 2-8 (equation number from memory); steam cured, released at 1 d (common practice, no source)",
+        )?;
+        s.num(
+            "loss reached at erection η (share of Po)",
+            a.loss_erection,
+            "",
+            4,
+            "aged_camber.loss_erection",
+        )?;
+        s.eq(
+            &format!(
+                "Δe = Δp (1 + φ) − η Δp (1 + χφ) − Δsw (1 + φ) = {} × (1 + {}) − {} × {} × (1 + 0.8 × {}) − {} × (1 + {}) in",
+                g(j.camber_prestress_release_in, 3),
+                g(a.creep_erection, 3),
+                g(a.loss_erection, 4),
+                g(j.camber_prestress_release_in, 3),
+                g(a.creep_erection, 3),
+                g(j.defl_self_release_in, 3),
+                g(a.creep_erection, 3)
+            ),
+            "age-adjusted effective modulus, χ = 0.8 (from memory, high); ACI 209R-92 creep",
+        )?;
+    }
     s.num("final camber (ACI 209R-92)", a.final_in, "in", 3, "aged_camber.final_in")?;
     s.num("immediate live-load deflection", j.defl_live_in, "in", 3, "defl_live_in")?;
     if let Some(t) = ct.and_then(|t| t.live.as_ref()) {
