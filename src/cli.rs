@@ -551,14 +551,11 @@ fn check(a: &CheckArgs) -> Result<i32, Failure> {
             Some(plankwise::files::writable(o, &inputs, a.force).map_err(|e| Failure::Message(format!("-o: '{}' {e}", o.display())))?)
         }
     };
-    let ext = a
-        .output
-        .as_ref()
-        .and_then(|o| o.extension())
-        .map(|e| e.to_string_lossy().to_ascii_lowercase());
-    let sheet = a.sheet.as_deref().map(|f| match (f, ext.as_deref()) {
-        ("text", Some("pdf")) => "pdf",
-        ("text", Some("md")) => "md",
+    // the extension of -o names the sheet's format, as for every -o
+    let named = a.output.as_deref().and_then(select::OutFormat::of_path);
+    let sheet = a.sheet.as_deref().map(|f| match (f, named) {
+        ("text", Some(select::OutFormat::Pdf)) => "pdf",
+        ("text", Some(select::OutFormat::Md)) => "md",
         (f, _) => f,
     });
     let mut out: Vec<u8> = Vec::new();

@@ -18,6 +18,20 @@ pub const CAUTIONS: &[&str] = &[
     "Local codes and licensed practice govern.",
 ];
 
+/// A capacity curve as a chart draws it: (span, largest load) in the
+/// display units, the load absent where the member fails without it.
+pub fn load_curve(limits: &[crate::select::envelope::LoadLimit], sys: System) -> Vec<(f64, Option<f64>)> {
+    limits
+        .iter()
+        .map(|l| {
+            (
+                display::convert(l.span_ft, "ft", sys).0,
+                l.live_psf.map(|q| display::convert(q, "psf", sys).0),
+            )
+        })
+        .collect()
+}
+
 /// Write the cautions, one per line, with a leading marker.
 pub fn write_cautions(w: &mut impl Write) -> io::Result<()> {
     for c in CAUTIONS {

@@ -262,45 +262,35 @@ pub fn terms(m: &Member, x: f64, pre: Effective, eff: &Effects) -> Terms {
 /// dp = 0.8h (conservative; common practice, no source).
 pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     let t = terms(m, x, pre, eff);
-    let (lam, rt, bw, dp, vd, vcw, vci_min, vci_hog, vs, mcre) = (
-        t.lambda,
-        t.sqrt_fc_psi,
-        t.bw_in,
-        t.dp_in,
-        t.vd_lbf,
-        t.vcw_lbf,
-        t.vci_min_lbf,
-        t.vci_hog_lbf,
-        t.vs_lbf,
-        t.mcre_lbin,
-    );
-    let mcre_raw = t.mcre_raw_lbin;
     let mut k = 0u8;
     let combos = crate::case::COMBINATIONS.map(|c| {
         let (mu, v) = c.apply(eff);
         k += 1;
         let vu = v.abs();
         let (vci_raw, vci_min) = if mu > 0.0 {
-            let vi = (vu - vd).max(0.0);
-            let mmax = (mu - eff.m_dead()).max(1e-6);
-            (0.6 * lam * rt * bw * dp + vd + vi * mcre / mmax, vci_min)
+            let vi = (vu - t.vd_lbf).max(0.0);
+            let mmax = (mu - t.md_lbin).max(1e-6);
+            (
+                0.6 * t.lambda * t.sqrt_fc_psi * t.bw_in * t.dp_in + t.vd_lbf + vi * t.mcre_lbin / mmax,
+                t.vci_min_lbf,
+            )
         } else {
-            (vci_hog, vci_hog)
+            (t.vci_hog_lbf, t.vci_hog_lbf)
         };
         let vci = vci_raw.max(vci_min);
-        let vc = vci.min(vcw).max(0.0);
+        let vc = vci.min(t.vcw_lbf).max(0.0);
         Combo {
             combo: k - 1,
             vu_lbf: vu,
             vci_raw_lbf: vci_raw,
             vci_min_lbf: vci_min,
             vci_lbf: vci,
-            vcw_lbf: vcw,
+            vcw_lbf: t.vcw_lbf,
             phi_vc_lbf: PHI * vc,
-            vs_lbf: vs,
-            phi_vn_lbf: PHI * (vc + vs),
-            dp_in: dp,
-            mcre_raw_lbin: mcre_raw,
+            vs_lbf: t.vs_lbf,
+            phi_vn_lbf: PHI * (vc + t.vs_lbf),
+            dp_in: t.dp_in,
+            mcre_raw_lbin: t.mcre_raw_lbin,
         }
     });
     let gov = combos

@@ -176,16 +176,7 @@ pub fn pdf(h: &Heading, rows: &[CapacityRow], sys: System) -> Result<Vec<u8>, St
             title: display::localize(&r.entry, sys),
             x_label: format!("span, {x_unit}"),
             y_label: format!("largest {} load, {y_unit}", h.varied),
-            curve: r
-                .limits
-                .iter()
-                .map(|l| {
-                    (
-                        display::convert(l.span_ft, "ft", sys).0,
-                        l.live_psf.map(|q| display::convert(q, "psf", sys).0),
-                    )
-                })
-                .collect(),
+            curve: super::load_curve(&r.limits, sys),
             point: None,
         })
         .collect();

@@ -456,7 +456,8 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         s.num("φVn", v.phi_vn_kip, "kip", 2, "at_shear.phi_vn_kip")?;
         s.eq(
             &format!(
-                "φVn = φ (min(Vci, Vcw) + Vs) = 0.75 × (min({}, {}) + {}) kip",
+                "φVn = φ (min(Vci, Vcw) + Vs) = {} × (min({}, {}) + {}) kip",
+                g(crate::checks::shear::PHI, 2),
                 g(v.vci_kip, 2),
                 g(v.vcw_kip, 2),
                 g(v.vs_kip, 2)
@@ -580,16 +581,20 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         )?;
         s.eq(
             &format!(
-                "Δe = Δp (1 + φ) − η Δp (1 + χφ) − Δsw (1 + φ) = {} × (1 + {}) − {} × {} × (1 + 0.8 × {}) − {} × (1 + {}) in",
+                "Δe = Δp (1 + φ) − η Δp (1 + χφ) − Δsw (1 + φ) = {} × (1 + {}) − {} × {} × (1 + {} × {}) − {} × (1 + {}) in",
                 g(j.camber_prestress_release_in, 3),
                 g(a.creep_erection, 3),
                 g(a.loss_erection, 4),
                 g(j.camber_prestress_release_in, 3),
+                g(crate::camber::AGING_CHI, 1),
                 g(a.creep_erection, 3),
                 g(j.defl_self_release_in, 3),
                 g(a.creep_erection, 3)
             ),
-            "age-adjusted effective modulus, χ = 0.8 (from memory, high); ACI 209R-92 creep",
+            &format!(
+                "age-adjusted effective modulus, χ = {} (from memory, high); ACI 209R-92 creep",
+                crate::camber::AGING_CHI
+            ),
         )?;
     }
     s.num("final camber (ACI 209R-92)", a.final_in, "in", 3, "aged_camber.final_in")?;

@@ -603,15 +603,7 @@ fn chart(k: usize, r: &Ranked, bay: &Bay, curve: &[crate::select::envelope::Load
         title: format!("{}. {}", k + 1, r.entry.label()),
         x_label: format!("span, {x_unit}"),
         y_label: format!("largest {load}, {y_unit}"),
-        curve: curve
-            .iter()
-            .map(|l| {
-                (
-                    display::convert(l.span_ft, "ft", sys).0,
-                    l.live_psf.map(|q| display::convert(q, "psf", sys).0),
-                )
-            })
-            .collect(),
+        curve: super::load_curve(curve, sys),
         point: Some((
             display::convert(bay.case.span.in_unit("ft"), "ft", sys).0,
             display::convert(bay.case.varied().in_unit("psf"), "psf", sys).0,
