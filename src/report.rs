@@ -18,6 +18,37 @@ pub const CAUTIONS: &[&str] = &[
     "Local codes and licensed practice govern.",
 ];
 
+/// What kind of file a path names by its extension, case aside: the one
+/// rule every route that writes a report (each command's `-o`, the UI's
+/// shortlist and sheet prompts) follows.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum FileKind {
+    /// `.txt`, `.text`.
+    Text,
+    /// `.md`, `.markdown`.
+    Markdown,
+    /// `.csv`.
+    Csv,
+    /// `.json`.
+    Json,
+    /// `.pdf`.
+    Pdf,
+}
+
+impl FileKind {
+    /// The kind a file's extension names (None: no extension, or one of no kind).
+    pub fn of_path(p: &std::path::Path) -> Option<FileKind> {
+        match p.extension()?.to_str()?.to_ascii_lowercase().as_str() {
+            "txt" | "text" => Some(FileKind::Text),
+            "md" | "markdown" => Some(FileKind::Markdown),
+            "csv" => Some(FileKind::Csv),
+            "json" => Some(FileKind::Json),
+            "pdf" => Some(FileKind::Pdf),
+            _ => None,
+        }
+    }
+}
+
 /// A capacity curve as a chart draws it: (span, largest load) in the
 /// display units, the load absent where the member fails without it.
 pub fn load_curve(limits: &[crate::select::envelope::LoadLimit], sys: System) -> Vec<(f64, Option<f64>)> {

@@ -887,15 +887,15 @@ impl App {
     }
 }
 
+/// The shortlist's format for a path the user typed, by the library's one
+/// extension rule ([`crate::report::FileKind`]); text for anything else.
 fn format_for(path: &str) -> Format {
-    if path.ends_with(".md") {
-        Format::Markdown
-    } else if path.ends_with(".csv") {
-        Format::Csv
-    } else if path.to_ascii_lowercase().ends_with(".pdf") {
-        Format::Pdf
-    } else {
-        Format::Text
+    use crate::report::FileKind;
+    match FileKind::of_path(std::path::Path::new(path)) {
+        Some(FileKind::Markdown) => Format::Markdown,
+        Some(FileKind::Csv) => Format::Csv,
+        Some(FileKind::Pdf) => Format::Pdf,
+        _ => Format::Text,
     }
 }
 

@@ -149,14 +149,14 @@ pub enum OutFormat {
 impl OutFormat {
     /// The format a file's extension names, if any.
     pub fn of_path(p: &Path) -> Option<OutFormat> {
-        match p.extension()?.to_str()?.to_ascii_lowercase().as_str() {
-            "txt" | "text" => Some(OutFormat::Text),
-            "md" | "markdown" => Some(OutFormat::Md),
-            "csv" => Some(OutFormat::Csv),
-            "json" => Some(OutFormat::Json),
-            "pdf" => Some(OutFormat::Pdf),
-            _ => None,
-        }
+        use plankwise::report::FileKind;
+        Some(match FileKind::of_path(p)? {
+            FileKind::Text => OutFormat::Text,
+            FileKind::Markdown => OutFormat::Md,
+            FileKind::Csv => OutFormat::Csv,
+            FileKind::Json => OutFormat::Json,
+            FileKind::Pdf => OutFormat::Pdf,
+        })
     }
 }
 

@@ -90,12 +90,13 @@ fn write_sheet(app: &App, inputs: &Inputs, path: &Path, force: bool) -> Result<S
     let case = app.case_of(row);
     let j = plankwise::report::check::to_json(&entry.candidate(), &case, ev);
     let title = format!("{} — {} (bay '{}')", entry.section.designation, entry.pattern.designation, bay.name);
-    let ext = path.extension().map(|e| e.to_string_lossy().to_ascii_lowercase());
-    let buf = if ext.as_deref() == Some("pdf") {
+    let kind = plankwise::report::FileKind::of_path(path);
+    let buf = if kind == Some(plankwise::report::FileKind::Pdf) {
         plankwise::report::sheet::pdf(&title, &j, app.units)?
     } else {
         let mut buf = Vec::new();
-        plankwise::report::sheet::write(&mut buf, &title, &j, app.units, ext.as_deref() == Some("md")).map_err(|e| e.to_string())?;
+        plankwise::report::sheet::write(&mut buf, &title, &j, app.units, kind == Some(plankwise::report::FileKind::Markdown))
+            .map_err(|e| e.to_string())?;
         buf
     };
     plankwise::files::write_safely(path, &buf, &open, true).map_err(|e| format!("'{}' {e}", path.display()))?;

@@ -272,6 +272,30 @@ fn marking_and_writing_the_shortlist_asks_before_overwriting() {
             force: false
         }]
     );
+    // every extension is read as the command line reads -o: case aside
+    for (name, format) in [
+        ("Out.MD", Format::Markdown),
+        ("out.markdown", Format::Markdown),
+        ("OUT.CSV", Format::Csv),
+        ("out.TXT", Format::Text),
+        ("out", Format::Text),
+    ] {
+        update(&mut a, Action::WriteShortlist);
+        for _ in 0..20 {
+            press(&mut a, &[Key::Backspace]);
+        }
+        press(&mut a, &typed(name));
+        let e = press(&mut a, &[Key::Enter]);
+        assert_eq!(
+            e,
+            vec![Effect::WriteShortlist {
+                path: name.into(),
+                format,
+                force: false
+            }],
+            "{name}"
+        );
+    }
 }
 
 #[test]
