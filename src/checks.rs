@@ -100,6 +100,17 @@ pub struct CheckInfo {
     pub load_driven: bool,
 }
 
+/// Whether a check's result can change with the load on the member: the
+/// checks that limit the load, and minimum strength (the load ends its
+/// waiver). The rest — release stresses, handling, cover, fire, strand
+/// sanity, bearing length, production length, camber at erection across
+/// units — read the member, its strand and its own weight only, so the
+/// envelope runs them once per span
+/// (`checks_that_do_not_vary_ignore_the_varied_load` proves it).
+pub fn varies_with_load(info: &CheckInfo) -> bool {
+    info.load_driven || info.id == min_strength::INFO.id
+}
+
 /// The result of one check.
 #[derive(Debug, Clone, PartialEq)]
 pub struct CheckResult {

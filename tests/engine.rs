@@ -493,6 +493,56 @@ fn prepared_live_trials_equal_fresh_evaluations() {
     }
 }
 
+/// The checks `varies_with_load` calls independent of the load (release
+/// stresses, handling, cover, fire, strand sanity, bearing and production
+/// length, camber at erection across units) give the same result at every
+/// varied load, on every demo entry and bay, the roof with placed loads and
+/// an opening among them, and on a bay with an overhang: the envelope runs
+/// them once per span and relies on it.
+#[test]
+fn checks_that_do_not_vary_ignore_the_varied_load() {
+    use plankwise::checks::{REGISTRY, evaluate_brief, varies_with_load};
+    use plankwise::job::{DEMO_JOB, Job};
+    use plankwise::select::{case_for, entries, topping_mix};
+    let cat = demo();
+    let job = Job::from_str(DEMO_JOB, "demo-job.toml").unwrap();
+    let mut bays = job.bays.clone();
+    let mut eave = job.bays[0].clone();
+    eave.case.overhang = (Length::new(0.0), Length::from_unit(4.0, "ft"));
+    bays.push(eave);
+    let fixed: Vec<&str> = REGISTRY
+        .iter()
+        .map(|c| c.info)
+        .filter(|i| !varies_with_load(i))
+        .map(|i| i.id)
+        .collect();
+    assert!(
+        fixed.contains(&"handling") && fixed.contains(&"fire") && !fixed.contains(&"min_strength"),
+        "{fixed:?}"
+    );
+    let mut seen = 0;
+    for bay in &bays {
+        for e in entries(&cat, bay) {
+            let k = case_for(bay, e.topping, &topping_mix(&cat, bay));
+            let at = |q: f64| evaluate_brief(&e.candidate(), &k.with_varied(AreaLoad::from_unit(q, "psf")));
+            let none = at(0.0);
+            for q in [60.0, 250.0, 900.0] {
+                let loaded = at(q);
+                for c in none.checks.iter().filter(|c| fixed.contains(&c.info.id)) {
+                    let d = loaded.check(c.info.id).expect("the same checks run");
+                    // the load's turning points move the stations: rounding aside
+                    assert_eq!(c.pass, d.pass, "{} {} at {q} psf", e.label(), c.info.id);
+                    for (x, y) in [(c.demand, d.demand), (c.capacity, d.capacity), (c.ratio, d.ratio)] {
+                        assert_relative_eq!(x, y, max_relative = 1e-9, epsilon = 1e-12);
+                    }
+                    seen += 1;
+                }
+            }
+        }
+    }
+    assert!(seen > 1000, "{seen}");
+}
+
 // ---------------------------------------------------------------------------
 // Verdicts an engineer can sign: one case per defect, each built so that
 // the code before the fix fails it (checked against that build).

@@ -14,7 +14,7 @@ use super::{Entry, case_for, evaluation, rank_bay, topping_mix};
 use crate::bay::{Bay, Objective};
 use crate::case::DesignCase;
 use crate::catalog::Catalog;
-use crate::checks::{Evaluation, Prepared, evaluate_brief};
+use crate::checks::{Evaluation, Prepared, REGISTRY, evaluate_brief, varies_with_load};
 use crate::units::{AreaLoad, Length};
 
 /// Probe live load for the linear estimate, psf.
@@ -59,7 +59,6 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     // the load the bay's use names is varied; placed loads stay
     let unloaded = base.with_varied(AreaLoad::from_unit(0.0, "psf"));
     let prep = Prepared::new(&entry.candidate(), &unloaded);
-    let at = |q: f64| prep.with_live(AreaLoad::from_unit(q, "psf"));
     let e0 = prep.evaluation();
     if let Some(f) = e0.first_failure() {
         return LoadLimit {
@@ -69,15 +68,19 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
             ratio: f.ratio,
         };
     }
-    let e1 = at(PROBE_PSF);
+    // at the probe load only the checks the load can change are run again
+    let varying: Vec<&'static str> = REGISTRY.iter().map(|c| c.info).filter(varies_with_load).map(|i| i.id).collect();
+    let at_probe = prep.ratios_with_live(AreaLoad::from_unit(PROBE_PSF, "psf"), &varying);
     // checks whose ratio rises with load; the rest cannot limit it
     let mut driven: Vec<&'static str> = Vec::new();
     let mut best = (MAX_LIVE_PSF, "none");
     for c0 in &e0.checks {
-        let Some(c1) = e1.check(c0.info.id) else { continue };
-        if c1.ratio > c0.ratio + 1e-12 {
+        let Some(&(_, r1)) = at_probe.iter().find(|c| c.0 == c0.info.id) else {
+            continue;
+        };
+        if r1 > c0.ratio + 1e-12 {
             driven.push(c0.info.id);
-            let q = (1.0 - c0.ratio) / (c1.ratio - c0.ratio) * PROBE_PSF;
+            let q = (1.0 - c0.ratio) / (r1 - c0.ratio) * PROBE_PSF;
             if q < best.0 {
                 best = (q.max(0.0), c0.info.id);
             }
@@ -106,7 +109,7 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     // a second estimate: each check's line through the probe and the first
     // estimate, two loaded points, so both lie past a change of governing
     // combination (1.4D to 1.2D + 1.6L) that the line from no load crosses
-    let at_probe = load_ratios(&e1, &driven);
+    let at_probe: Vec<(&'static str, f64)> = at_probe.into_iter().filter(|c| driven.contains(&c.0)).collect();
     let mut known = vec![
         (0.0, top(&load_ratios(&e0, &driven))),
         (PROBE_PSF, top(&at_probe)),
@@ -114,7 +117,10 @@ pub fn max_live(entry: &Entry, base: &DesignCase) -> LoadLimit {
     ];
     if (best.0 - PROBE_PSF).abs() > 1e-6 {
         let mut q2 = MAX_LIVE_PSF;
-        for (&(_, a), &(_, b)) in at_probe.iter().zip(&est) {
+        for &(id, b) in &est {
+            let Some(&(_, a)) = at_probe.iter().find(|c| c.0 == id) else {
+                continue;
+            };
             let slope = (b - a) / (best.0 - PROBE_PSF);
             if slope > 1e-15 {
                 let q = PROBE_PSF + (1.0 - a) / slope;
