@@ -672,6 +672,9 @@ pub struct Evaluation {
     /// worst point (x, in), with the governing combination there and its
     /// factored moment, lbf·in (not kept by a brief evaluation).
     pub shear_at: Option<(f64, shear::Terms, shear::Combo, f64)>,
+    /// The terms of Mcr at the station of the greatest factored moment (not
+    /// kept by a brief evaluation).
+    pub mcr_at: Option<flexure::McrTerms>,
 }
 
 impl Evaluation {
@@ -1572,6 +1575,14 @@ fn results(an: &Analysis) -> Evaluation {
                 let mu = crate::case::COMBINATIONS[gov.combo as usize].apply(&eff).0;
                 (x, shear::terms(m, x, pre, &eff), gov, mu)
             })
+        },
+        mcr_at: if an.brief {
+            None
+        } else {
+            an.stations
+                .iter()
+                .max_by(|a, b| a.mu_lbin.total_cmp(&b.mu_lbin))
+                .map(|s| flexure::mcr_terms(&an.member, s.x_in, s.prestress))
         },
         release_at: if an.brief {
             None

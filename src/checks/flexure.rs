@@ -163,17 +163,59 @@ pub fn mcr(m: &Member, x: f64) -> f64 {
 
 /// [`mcr`] with the effective prestress at the station already found.
 fn mcr_with(m: &Member, x: f64, pre: Effective) -> f64 {
+    mcr_terms(m, x, pre).mcr_lbin
+}
+
+/// The terms of [`mcr`] at one section, for the calculation sheet.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct McrTerms {
+    /// Precast area there (the net section over an opening), in².
+    pub area_in2: f64,
+    /// Precast bottom section modulus there, in³.
+    pub sb_in3: f64,
+    /// Composite bottom section modulus there (topped members), in³.
+    pub sbc_in3: Option<f64>,
+    /// Precast top section modulus there (the service stresses beside Mcr), in³.
+    pub st_in3: f64,
+    /// Composite section modulus at the precast top there (topped members), in³.
+    pub stc_in3: Option<f64>,
+    /// Moment on the precast alone, self-weight and topping (topped members), lbf·in.
+    pub mnc_lbin: f64,
+    /// Effective prestress force there, lbf.
+    pub pe_lbf: f64,
+    /// Its eccentricity below the precast centroid there, in.
+    pub e_in: f64,
+    /// Modulus of rupture, psi.
+    pub fr_psi: f64,
+    /// Mcr, lbf·in.
+    pub mcr_lbin: f64,
+}
+
+/// The terms of Mcr at `x` with the effective prestress there.
+pub fn mcr_terms(m: &Member, x: f64, pre: Effective) -> McrTerms {
     let (pe, y) = (pre.pe, pre.y);
     let (b, comp) = m.props_at(x);
     let e = b.yb_in - y;
     let fr = m.mix.fr().get();
     let pre = pe / b.area_in2 + pe * e / b.sb_in3;
-    match comp {
-        None => b.sb_in3 * (fr + pre),
+    let (mnc, mcr) = match comp {
+        None => (0.0, b.sb_in3 * (fr + pre)),
         Some(c) => {
             let mnc = m.loads.at(crate::loads::SELF, x).0 + m.loads.at(crate::loads::TOPPING, x).0;
-            c.sb_in3 * (fr + pre - mnc / b.sb_in3) + mnc
+            (mnc, c.sb_in3 * (fr + pre - mnc / b.sb_in3) + mnc)
         }
+    };
+    McrTerms {
+        area_in2: b.area_in2,
+        sb_in3: b.sb_in3,
+        sbc_in3: comp.map(|c| c.sb_in3),
+        st_in3: b.st_in3,
+        stc_in3: comp.map(|c| c.st_precast_in3),
+        mnc_lbin: mnc,
+        pe_lbf: pe,
+        e_in: e,
+        fr_psi: fr,
+        mcr_lbin: mcr,
     }
 }
 

@@ -80,6 +80,16 @@ pub struct AtMuJson {
     pub e_in: f64,
     /// Moment on the precast section alone (self-weight and topping), kip-ft.
     pub m_precast_kipft: f64,
+    /// Precast area there (the net section over an opening), in².
+    pub area_in2: f64,
+    /// Precast bottom section modulus there, in³.
+    pub sb_in3: f64,
+    /// Composite bottom section modulus there (topped members), in³.
+    pub sbc_in3: Option<f64>,
+    /// Precast top section modulus there, in³.
+    pub st_in3: f64,
+    /// Composite section modulus at the precast top there (topped members), in³.
+    pub stc_in3: Option<f64>,
 }
 
 /// The stresses at release at one point, with the terms of
@@ -532,6 +542,11 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             pe_kip: mid.prestress.pe / 1000.0,
             e_in: cand.section.props.yb_in - mid.prestress.y,
             m_precast_kipft: kipft(mid.effects.m_self + mid.effects.m_topping),
+            area_in2: ev.mcr_at.map_or(cand.section.props.area_in2, |t| t.area_in2),
+            sb_in3: ev.mcr_at.map_or(cand.section.props.sb_in3, |t| t.sb_in3),
+            sbc_in3: ev.mcr_at.and_then(|t| t.sbc_in3),
+            st_in3: ev.mcr_at.map_or(cand.section.props.st_in3, |t| t.st_in3),
+            stc_in3: ev.mcr_at.and_then(|t| t.stc_in3),
         },
         loss_terms: {
             let (l, t) = (&h.losses, &h.losses.terms);

@@ -345,29 +345,31 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
     s.num("where, from the left bearing centre", m.x_ft, "ft", 3, "at_mu.x_ft")?;
     s.num("effective prestress force there Pe", m.pe_kip, "kip", 2, "at_mu.pe_kip")?;
     s.num("its eccentricity e", m.e_in, "in", 3, "at_mu.e_in")?;
-    let p = &j.section_props;
     let (pe, e) = (g(m.pe_kip * 1000.0, 0), g(m.e_in, 3));
     s.num("cracking moment Mcr", j.mcr_kipft, "kip-ft", 2, "mcr_kipft")?;
-    if j.topping_in > 0.0 {
+    // the precast section there (the net section over an opening)
+    let (a, sb) = (g(m.area_in2, 1), g(m.sb_in3, 1));
+    let fr = g(j.concrete.fr_psi, 1);
+    if let Some(sbc) = m.sbc_in3 {
+        s.num("composite bottom section modulus Sbc", sbc, "in³", 1, "at_mu.sbc_in3")?;
+        s.num(
+            "moment on the precast alone Mnc",
+            m.m_precast_kipft,
+            "kip-ft",
+            2,
+            "at_mu.m_precast_kipft",
+        )?;
+        let mnc = g(m.m_precast_kipft * 12000.0, 0);
         s.eq(
             &format!(
-                "Mcr = Sbc (fr + Pe/A + Pe e/Sb − Mnc/Sb) + Mnc, Mnc = {} kip-ft on the precast alone (composite section)",
-                g(m.m_precast_kipft, 2)
+                "Mcr = Sbc (fr + Pe/A + Pe e/Sb − Mnc/Sb) + Mnc = {} × ({fr} + {pe} / {a} + {pe} × {e} / {sb} − {mnc} / {sb}) + {mnc} lbf·in",
+                g(sbc, 1)
             ),
-            "ACI 318-19 24.2.3.5; fr 19.2.3.1",
+            "ACI 318-19 24.2.3.5 (unshored topping); fr 19.2.3.1",
         )?;
     } else {
         s.eq(
-            &format!(
-                "Mcr = Sb (fr + Pe/A + Pe e/Sb) = {} × ({} + {} / {} + {} × {} / {}) lbf·in",
-                g(p.sb_in3, 1),
-                g(j.concrete.fr_psi, 1),
-                pe,
-                g(p.area_in2, 1),
-                pe,
-                e,
-                g(p.sb_in3, 1)
-            ),
+            &format!("Mcr = Sb (fr + Pe/A + Pe e/Sb) = {sb} × ({fr} + {pe} / {a} + {pe} × {e} / {sb}) lbf·in"),
             "ACI 318-19 24.2.3.5; fr 19.2.3.1",
         )?;
     }
@@ -379,29 +381,40 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         "m_service_total_kipft",
     )?;
     let ms = g(j.m_service_total_kipft * 12000.0, 0);
+    let st = g(m.st_in3, 1);
     s.num("bottom fibre at service", j.f_bottom_service_psi, "psi", 0, "f_bottom_service_psi")?;
-    if j.topping_in <= 0.0 {
-        s.eq(
-            &format!(
-                "fb = Pe/A + Pe e/Sb − M/Sb = {pe} / {} + {pe} × {e} / {} − {ms} / {} psi (compression +)",
-                g(p.area_in2, 1),
-                g(p.sb_in3, 1),
-                g(p.sb_in3, 1)
-            ),
+    match m.sbc_in3 {
+        Some(sbc) => {
+            let mnc = g(m.m_precast_kipft * 12000.0, 0);
+            s.eq(
+                &format!(
+                    "fb = Pe/A + Pe e/Sb − Mnc/Sb − (M − Mnc)/Sbc = {pe} / {a} + {pe} × {e} / {sb} − {mnc} / {sb} − ({ms} − {mnc}) / {} psi (compression +)",
+                    g(sbc, 1)
+                ),
+                "ACI 318-19 24.5.2 (service stresses, gross sections; unshored topping)",
+            )?;
+        }
+        None => s.eq(
+            &format!("fb = Pe/A + Pe e/Sb − M/Sb = {pe} / {a} + {pe} × {e} / {sb} − {ms} / {sb} psi (compression +)"),
             "ACI 318-19 24.5.2 (service stresses, gross section)",
-        )?;
+        )?,
     }
     s.num("top fibre at service", j.f_top_service_psi, "psi", 0, "f_top_service_psi")?;
-    if j.topping_in <= 0.0 {
-        s.eq(
-            &format!(
-                "ft = Pe/A − Pe e/St + M/St = {pe} / {} − {pe} × {e} / {} + {ms} / {} psi (compression +)",
-                g(p.area_in2, 1),
-                g(p.st_in3, 1),
-                g(p.st_in3, 1)
-            ),
+    match m.stc_in3 {
+        Some(stc) => {
+            let mnc = g(m.m_precast_kipft * 12000.0, 0);
+            s.eq(
+                &format!(
+                    "ft = Pe/A − Pe e/St + Mnc/St + (M − Mnc)/Stc = {pe} / {a} − {pe} × {e} / {st} + {mnc} / {st} + ({ms} − {mnc}) / {} psi (compression +)",
+                    g(stc, 1)
+                ),
+                "ACI 318-19 24.5.2 (service stresses, gross sections; unshored topping)",
+            )?;
+        }
+        None => s.eq(
+            &format!("ft = Pe/A − Pe e/St + M/St = {pe} / {a} − {pe} × {e} / {st} + {ms} / {st} psi (compression +)"),
             "ACI 318-19 24.5.2 (service stresses, gross section)",
-        )?;
+        )?,
     }
     s.num("factored shear Vu at the shear station", j.vu_kip, "kip", 2, "vu_kip")?;
     s.num("φVn there", j.phi_vn_kip, "kip", 2, "phi_vn_kip")?;
