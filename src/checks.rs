@@ -675,6 +675,8 @@ pub struct Evaluation {
     /// The terms of Mcr at the station of the greatest factored moment (not
     /// kept by a brief evaluation).
     pub mcr_at: Option<flexure::McrTerms>,
+    /// The terms of the natural frequency (not kept by a brief evaluation).
+    pub frequency_terms: Option<vibration::Terms>,
 }
 
 impl Evaluation {
@@ -1576,6 +1578,7 @@ fn results(an: &Analysis) -> Evaluation {
                 (x, shear::terms(m, x, pre, &eff), gov, mu)
             })
         },
+        frequency_terms: (!an.brief).then(|| vibration::terms(&an.member)),
         mcr_at: if an.brief {
             None
         } else {

@@ -105,7 +105,7 @@ enum Command {
     Capacity(Box<select::CapacityArgs>),
     /// Which entry is best at each span of a range, as breakpoints.
     Spanmap(Box<select::SpanmapArgs>),
-    /// Write the shortlist for the supplier (text, Markdown or CSV).
+    /// Write the shortlist for the supplier (text, Markdown, CSV or PDF).
     Shortlist(Box<select::ShortlistArgs>),
     /// Print the manual page (roff; read it with `plankwise manual | man -l -`).
     Manual,

@@ -238,6 +238,14 @@ fn the_sheets_equations_hold_with_its_terms() {
     );
     // at the section of the greatest factored moment (a member without topping)
     mcr_and_service_stresses_hold(&v);
+    // the natural frequency, first mode of a uniform simply supported beam
+    // (e.g. Chopra, Dynamics of Structures); g is standard gravity
+    // 9.80665 m/s² (a defined value) in in/s²
+    let (w, l) = (f("frequency_terms.w_plf") / 12.0, f("frequency_terms.span_ft") * 12.0);
+    let fq = std::f64::consts::FRAC_PI_2
+        * (9.80665 / 0.0254 * f("frequency_terms.ec_psi") * f("frequency_terms.i_in4") / (w * l.powi(4))).sqrt();
+    close(fq, f("frequency_hz"), "f");
+    close(f("frequency_terms.ec_psi"), f("concrete.ec_psi"), "Ec of f");
     // at release, where the compression check finds its worst point: the
     // fibre stresses from their terms, and the check's demand is the larger
     let (po, er, mg) = (

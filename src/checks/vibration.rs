@@ -8,6 +8,8 @@
 //! A walking-comfort threshold of about 3–4 Hz is commonly quoted (common
 //! practice, no source). Not a station check: one value for the member.
 
+use serde::Serialize;
+
 use super::{Analysis, CheckInfo, CheckResult, Group, Reads};
 use crate::member::Member;
 use crate::units::G_IN_PER_S2;
@@ -23,12 +25,42 @@ pub const INFO: CheckInfo = CheckInfo {
     load_driven: true,
 };
 
-/// The frequency, Hz.
-pub fn frequency(m: &Member) -> f64 {
+/// The terms of the frequency, for the calculation sheet.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Terms {
+    /// Weight per length: self-weight, topping, superimposed dead load and
+    /// 10 % of the live load, lbf/in.
+    pub w_lbf_per_in: f64,
+    /// Moment of inertia (the composite section when topped), in⁴.
+    pub i_in4: f64,
+    /// Modulus of the precast concrete, psi.
+    pub ec_psi: f64,
+    /// Span, in.
+    pub l_in: f64,
+    /// Acceleration of gravity, in/s².
+    pub g_in_per_s2: f64,
+    /// The frequency, Hz.
+    pub f_hz: f64,
+}
+
+/// The frequency and its terms.
+pub fn terms(m: &Member) -> Terms {
     let w = m.w[0] + m.w[1] + m.w[2] + 0.1 * m.w[3];
     let i = m.comp.map_or(m.bare.ix_in4, |c| c.ix_in4);
     let e = m.ec;
-    std::f64::consts::FRAC_PI_2 * (G_IN_PER_S2 * e * i / (w * m.l.powi(4))).sqrt()
+    Terms {
+        w_lbf_per_in: w,
+        i_in4: i,
+        ec_psi: e,
+        l_in: m.l,
+        g_in_per_s2: G_IN_PER_S2,
+        f_hz: std::f64::consts::FRAC_PI_2 * (G_IN_PER_S2 * e * i / (w * m.l.powi(4))).sqrt(),
+    }
+}
+
+/// The frequency, Hz.
+pub fn frequency(m: &Member) -> f64 {
+    terms(m).f_hz
 }
 
 /// Run only when a minimum frequency is set; the demand is the minimum

@@ -92,6 +92,19 @@ pub struct AtMuJson {
     pub stc_in3: Option<f64>,
 }
 
+/// The terms of the natural frequency f = (π/2)√(g Ec I / (w ℓ⁴)).
+#[derive(Debug, Clone, Serialize)]
+pub struct FrequencyTermsJson {
+    /// Weight carried: self-weight, topping, superimposed dead load and 10 % of the live load, lb/ft.
+    pub w_plf: f64,
+    /// Moment of inertia (the composite section when topped), in⁴.
+    pub i_in4: f64,
+    /// Modulus of the precast concrete, psi.
+    pub ec_psi: f64,
+    /// Span, ft.
+    pub span_ft: f64,
+}
+
 /// The stresses at release at one point, with the terms of
 /// f = P/A ∓ P e/S ± Mg/S.
 #[derive(Debug, Clone, Serialize)]
@@ -362,6 +375,8 @@ pub struct CheckJson {
     pub loss_terms: LossTermsJson,
     /// The prestress at the section of the greatest factored moment.
     pub at_mu: AtMuJson,
+    /// The terms of the natural frequency.
+    pub frequency_terms: Option<FrequencyTermsJson>,
     /// The stresses at release where the release compression check finds
     /// its worst point, with their terms.
     pub at_release: Option<AtReleaseJson>,
@@ -536,6 +551,12 @@ pub fn to_json(cand: &Candidate, case: &DesignCase, ev: &Evaluation) -> CheckJso
             topping_in: ev.camber.topping_in,
             sdl_in: ev.camber.sdl_in,
             live: ev.camber.live_terms,
+        }),
+        frequency_terms: ev.frequency_terms.map(|t| FrequencyTermsJson {
+            w_plf: t.w_lbf_per_in * 12.0,
+            i_in4: t.i_in4,
+            ec_psi: t.ec_psi,
+            span_ft: t.l_in / 12.0,
         }),
         at_mu: AtMuJson {
             x_ft: mid.x_in / 12.0,

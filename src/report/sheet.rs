@@ -637,6 +637,21 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         "defl_after_attach_in",
     )?;
     s.num("natural frequency, Hz", j.frequency_hz, "", 2, "frequency_hz")?;
+    if let Some(t) = &j.frequency_terms {
+        s.num("weight carried w (dead + 10 % of live)", t.w_plf, "plf", 1, "frequency_terms.w_plf")?;
+        s.num("moment of inertia I", t.i_in4, "in⁴", 0, "frequency_terms.i_in4")?;
+        s.eq(
+            &format!(
+                "f = (π/2) √(g Ec I / (w ℓ⁴)) = (π/2) × √({} × {} × {} / ({} × {}⁴)) Hz, w in lb/in, ℓ in in",
+                g(crate::units::G_IN_PER_S2, 2),
+                g(t.ec_psi, 0),
+                g(t.i_in4, 0),
+                g(t.w_plf / 12.0, 3),
+                g(t.span_ft * 12.0, 1)
+            ),
+            "first mode of a uniform simply supported beam (structural dynamics texts); w and I common practice, no source",
+        )?;
+    }
 
     s.head("7. Fire (IBC 2021 722.2)")?;
     if let Some(h) = j.fire_rating_h {

@@ -1,5 +1,6 @@
 //! The shortlist for the supplier: text (80 columns, a page per bay),
-//! Markdown and CSV, written over `impl Write`.
+//! Markdown and CSV, written over `impl Write`; the PDF is the text set on
+//! pages by [`super::pdf`].
 
 use std::io::{self, Write};
 
