@@ -319,19 +319,106 @@ fn header_loads(
     out
 }
 
-/// How much of a placed load the analysed member takes, and why.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+/// How much of a placed load the analysed member takes, and why. The
+/// words of `what` and `how` are made only when a note or the JSON asks
+/// for them (ranking builds thousands of these).
+#[derive(Debug, Clone, PartialEq)]
 pub struct Share {
-    /// Which load: "point 1", "strip 2", "patch 1", "header of opening 1".
-    pub what: String,
+    /// Which kind of load: "point", "strip", "patch" or "header".
+    pub kind: &'static str,
+    /// Its number among the loads of its kind, from 1.
+    pub number: usize,
     /// The multiple of the load the member is analysed with.
     pub factor: f64,
     /// For a double tee, each stem's share of the load (negative: uplift).
     pub stems: Vec<f64>,
-    /// How it was found, for the note.
-    pub how: String,
+    /// How it was found.
+    pub basis: Basis,
     /// Whether the rule used is from memory (low confidence).
     pub from_memory: bool,
+}
+
+/// How a share was found, with the numbers its note gives.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Basis {
+    /// One stem of a tee with `stems` stems carries it all.
+    OneStem {
+        /// Stems of the tee.
+        stems: f64,
+    },
+    /// The lever rule across the stems, the load at `at` in across.
+    Lever {
+        /// Where across, in.
+        at: f64,
+    },
+    /// The loaded unit carries it all.
+    Whole,
+    /// Spread over a width the user gives, in.
+    Width {
+        /// The width, in.
+        width: f64,
+    },
+    /// A load along the span, carried by the unit beneath it.
+    AlongSpan,
+    /// The published rule, over this width, in.
+    Rule {
+        /// The effective width, in.
+        width: f64,
+        /// Halved at a free edge.
+        free_edge: bool,
+    },
+    /// A patch on a unit that carries its part over its own width, in.
+    OverUnit {
+        /// The part of the patch over the unit, in.
+        over: f64,
+    },
+}
+
+impl Share {
+    /// Which load: "point 1", "strip 2", "patch 1", "header 1".
+    pub fn what(&self) -> String {
+        format!("{} {}", self.kind, self.number)
+    }
+
+    /// How the share was found, in words.
+    pub fn how(&self) -> String {
+        let f = self.factor;
+        match self.basis {
+            Basis::OneStem { stems } => format!(
+                "one stem carries it all (conservative): {} × the load on the tee",
+                crate::units::trim_number(stems, 2)
+            ),
+            Basis::Lever { at } => format!(
+                "lever rule at {:.1} in across: stems take {} of it; the tee is analysed with {} × the load (its most-loaded stem's share on every stem)",
+                at,
+                self.stems.iter().map(|s| format!("{s:.2}")).collect::<Vec<_>>().join(" / "),
+                crate::units::trim_number(f, 3)
+            ),
+            Basis::Whole => "the loaded unit carries it all (conservative)".into(),
+            Basis::Width { width } => format!("spread over {:.1} in: the unit takes {:.2} of it", width, f),
+            Basis::AlongSpan => "a load along the span is carried by the unit beneath it (common practice, no source)".into(),
+            Basis::Rule { width, free_edge } => format!(
+                "spread over {:.1} in{} by the published rule (0.5ℓ over the middle half, tapering linearly to one unit at the supports — {RULE_MARK}): the unit takes {:.2} of it",
+                width,
+                if free_edge { " (halved at a free edge)" } else { "" },
+                f
+            ),
+            Basis::OverUnit { over } => format!("the unit carries the {:.1} in of it over its width", over),
+        }
+    }
+}
+
+impl Serialize for Share {
+    fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        use serde::ser::SerializeStruct;
+        let mut st = s.serialize_struct("Share", 5)?;
+        st.serialize_field("what", &self.what())?;
+        st.serialize_field("factor", &self.factor)?;
+        st.serialize_field("stems", &self.stems)?;
+        st.serialize_field("how", &self.how())?;
+        st.serialize_field("from_memory", &self.from_memory)?;
+        st.end()
+    }
 }
 
 /// The mark carried with the published hollow-core distribution rule.
@@ -376,7 +463,7 @@ pub fn lever(stems: &[f64], c: f64) -> Vec<f64> {
     out
 }
 
-/// The share of a load the member takes: (factor, stem shares, how, from memory).
+/// The share of a load the member takes: (factor, stem shares, basis, from memory).
 /// `x` is where along the span it acts (for the published rule, the place
 /// where the rule gives the least width over the load's extent), `c` where
 /// across (None: where it does most harm), `wide` its own width across.
@@ -387,22 +474,14 @@ fn member_share(
     c: Option<f64>,
     wide: f64,
     along_span: bool,
-) -> (f64, Vec<f64>, String, bool) {
+) -> (f64, Vec<f64>, Basis, bool) {
     let b = section.props.width_in;
     let l = case.span.get();
     if section.family == Family::DoubleTee {
         let stems = &section.geometry.stems;
         let n = stems.len().max(1) as f64;
         if case.stem_share == StemShare::OneStem || stems.len() < 2 {
-            return (
-                n,
-                vec![1.0; 1],
-                format!(
-                    "one stem carries it all (conservative): {} × the load on the tee",
-                    crate::units::trim_number(n, 2)
-                ),
-                false,
-            );
+            return (n, vec![1.0; 1], Basis::OneStem { stems: n }, false);
         }
         let worst = |c: f64| lever(stems, c).into_iter().fold(f64::NEG_INFINITY, f64::max);
         let (at, shares) = match c {
@@ -416,36 +495,15 @@ fn member_share(
         };
         let top = shares.iter().copied().fold(f64::NEG_INFINITY, f64::max);
         let f = n * top;
-        return (
-            f,
-            shares.clone(),
-            format!(
-                "lever rule at {:.1} in across: stems take {} of it; the tee is analysed with {} × the load (its most-loaded stem's share on every stem)",
-                at,
-                shares.iter().map(|s| format!("{s:.2}")).collect::<Vec<_>>().join(" / "),
-                crate::units::trim_number(f, 3)
-            ),
-            false,
-        );
+        return (f, shares, Basis::Lever { at }, false);
     }
     match case.unit_share {
-        UnitShare::Whole => (1.0, Vec::new(), "the loaded unit carries it all (conservative)".into(), false),
+        UnitShare::Whole => (1.0, Vec::new(), Basis::Whole, false),
         UnitShare::Width(be) => {
             let e = be.get().max(wide);
-            let f = (b / e).min(1.0);
-            (
-                f,
-                Vec::new(),
-                format!("spread over {:.1} in: the unit takes {:.2} of it", e, f),
-                false,
-            )
+            ((b / e).min(1.0), Vec::new(), Basis::Width { width: e }, false)
         }
-        UnitShare::Rule if along_span => (
-            1.0,
-            Vec::new(),
-            "a load along the span is carried by the unit beneath it (common practice, no source)".into(),
-            false,
-        ),
+        UnitShare::Rule if along_span => (1.0, Vec::new(), Basis::AlongSpan, false),
         UnitShare::Rule => {
             // the least width over the load's extent gives the largest share
             let (x0, x1) = x;
@@ -456,16 +514,13 @@ fn member_share(
                 .map(|p| rule_width(p, l, b, case.free_edge))
                 .fold(f64::INFINITY, f64::min)
                 .max(wide);
-            let f = (b / be).min(1.0);
             (
-                f,
+                (b / be).min(1.0),
                 Vec::new(),
-                format!(
-                    "spread over {:.1} in{} by the published rule (0.5ℓ over the middle half, tapering linearly to one unit at the supports — {RULE_MARK}): the unit takes {:.2} of it",
-                    be,
-                    if case.free_edge { " (halved at a free edge)" } else { "" },
-                    f
-                ),
+                Basis::Rule {
+                    width: be,
+                    free_edge: case.free_edge,
+                },
                 true,
             )
         }
@@ -576,10 +631,11 @@ impl Loads {
                     let a = p.at.get();
                     let (f, stems, how, mem) = member_share(case, section, (a, a), p.across.map(|c| c.get()), p.size.1.get(), false);
                     shares.push(Share {
-                        what: format!("point {}", counts[0]),
+                        kind: "point",
+                        number: counts[0],
                         factor: f,
                         stems,
-                        how,
+                        basis: how,
                         from_memory: mem,
                     });
                     if !clip(arr.region, pl.kind, (a, a), l, range).is_empty() {
@@ -591,10 +647,11 @@ impl Loads {
                     let (x0, x1) = (s.from.get(), s.to.get());
                     let (f, stems, how, mem) = member_share(case, section, (x0, x1), s.across.map(|c| c.get()), 0.0, true);
                     shares.push(Share {
-                        what: format!("strip {}", counts[1]),
+                        kind: "strip",
+                        number: counts[1],
                         factor: f,
                         stems,
-                        how,
+                        basis: how,
                         from_memory: mem,
                     });
                     for (a, e) in clip(arr.region, pl.kind, (x0, x1), l, range) {
@@ -614,13 +671,7 @@ impl Loads {
                         (p.q.get() * over, f, stems, how, mem)
                     } else {
                         match case.unit_share {
-                            UnitShare::Whole => (
-                                p.q.get() * over,
-                                1.0,
-                                Vec::new(),
-                                format!("the unit carries the {:.1} in of it over its width", over),
-                                false,
-                            ),
+                            UnitShare::Whole => (p.q.get() * over, 1.0, Vec::new(), Basis::OverUnit { over }, false),
                             _ => {
                                 let (f, stems, how, mem) = member_share(case, section, (x0, x1), None, wide, false);
                                 (p.q.get() * wide, f, stems, how, mem)
@@ -628,10 +679,11 @@ impl Loads {
                         }
                     };
                     shares.push(Share {
-                        what: format!("patch {}", counts[2]),
+                        kind: "patch",
+                        number: counts[2],
                         factor: f,
                         stems,
-                        how,
+                        basis: how,
                         from_memory: mem,
                     });
                     if per_length > 0.0 {
@@ -649,10 +701,11 @@ impl Loads {
         for (k, h) in unit.headers.iter().enumerate() {
             let (f, stems, how, mem) = member_share(case, section, (h.at, h.at), Some(h.across), 0.0, false);
             shares.push(Share {
-                what: format!("header {}", k + 1),
+                kind: "header",
+                number: k + 1,
                 factor: f,
                 stems,
-                how,
+                basis: how,
                 from_memory: mem,
             });
             let kinds6 = [

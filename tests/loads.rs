@@ -80,7 +80,7 @@ fn units_share_by_the_rule_or_a_width() {
     // midspan: be = 0.5 × 360 = 180 in; 48/180
     let s = share(&k);
     assert_relative_eq!(s.factor, 48.0 / 180.0, max_relative = 1e-12);
-    assert!(s.from_memory && s.how.contains("from memory"), "{}", s.how);
+    assert!(s.from_memory && s.how().contains("from memory"), "{}", s.how());
     // at 2 ft from the support: be = 48 + (180 − 48)·24/90
     k.placed[0] = point(5.0, 2.0, None, LoadKind::Dead);
     assert_relative_eq!(share(&k).factor, 48.0 / (48.0 + 132.0 * 24.0 / 90.0), max_relative = 1e-12);

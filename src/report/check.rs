@@ -667,8 +667,8 @@ pub fn write_table(w: &mut impl Write, title: &str, case: &DesignCase, ev: &Eval
     let shares = ev.units.first().map(|u| u.shares.as_slice()).unwrap_or(&[]);
     for line in items_text(case, sys) {
         let what = line.split(':').next().unwrap_or("");
-        match shares.iter().find(|s| s.what == what) {
-            Some(s) => writeln!(w, "{line}\n    share: {}", display::localize(&s.how, sys))?,
+        match shares.iter().find(|s| s.what() == what) {
+            Some(s) => writeln!(w, "{line}\n    share: {}", display::localize(&s.how(), sys))?,
             None => writeln!(w, "{line}")?,
         }
     }
