@@ -519,6 +519,17 @@ pub struct AgedCamber {
     /// Ultimate creep coefficient νu for loading at release (ACI 209R-92
     /// Eq. 2-8 with its correction factors).
     pub creep_ultimate: f64,
+    /// The final age, days ([`crate::aging::FINAL_AGE_DAYS`]).
+    pub final_age_days: f64,
+    /// Ultimate creep coefficient for loads placed at erection.
+    pub creep_ultimate_erection: f64,
+    /// Creep coefficient of those loads from erection to the final age.
+    pub creep_after_erection: f64,
+    /// Ec at erection over the 28-day Ec (loads placed at erection deflect with it).
+    pub ec_ratio_erection: f64,
+    /// Bare over composite moment of inertia (creep after the topping
+    /// hardens is restrained by the composite section); 1 without topping.
+    pub inertia_ratio: f64,
 }
 
 /// The aging coefficient χ of the method (the value EN 1992-1-1 Eq. 5.46
@@ -573,6 +584,11 @@ pub fn aged(x: &AgedInputs, erection_age: f64, cond: &crate::aging::Conditions) 
         loss_erection: x.loss * crate::aging::creep_time(te - ti),
         loss_final: x.loss,
         creep_ultimate: nu_i,
+        final_age_days: FINAL_AGE_DAYS,
+        creep_ultimate_erection: crate::aging::creep_ultimate(te, cond),
+        creep_after_erection: crate::aging::creep(FINAL_AGE_DAYS - te, crate::aging::creep_ultimate(te, cond)),
+        ec_ratio_erection: ec_ratio(te, cond),
+        inertia_ratio: x.inertia_ratio,
     }
 }
 

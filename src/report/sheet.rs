@@ -611,6 +611,76 @@ pub fn write(w: &mut impl Write, title: &str, j: &CheckJson, sys: System, md: bo
         )?;
     }
     s.num("final camber (ACI 209R-92)", a.final_in, "in", 3, "aged_camber.final_in")?;
+    if let Some(t) = ct {
+        s.num("final age, days", a.final_age_days, "", 0, "aged_camber.final_age_days")?;
+        s.num("creep coefficient, final φf", a.creep_final, "", 3, "aged_camber.creep_final")?;
+        let topped = t.topping_in != 0.0;
+        if topped {
+            s.num("bare over composite inertia r", a.inertia_ratio, "", 4, "aged_camber.inertia_ratio")?;
+        }
+        let phi_f = if topped {
+            a.creep_erection + (a.creep_final - a.creep_erection) * a.inertia_ratio
+        } else {
+            a.creep_final
+        };
+        s.num("final loss η (share of Po)", a.loss_final, "", 4, "aged_camber.loss_final")?;
+        s.num(
+            "Ec at erection over the 28-day Ec k",
+            a.ec_ratio_erection,
+            "",
+            4,
+            "aged_camber.ec_ratio_erection",
+        )?;
+        s.num(
+            "νu of loads placed at erection",
+            a.creep_ultimate_erection,
+            "",
+            3,
+            "aged_camber.creep_ultimate_erection",
+        )?;
+        s.num(
+            "their creep coefficient to the final age φℓ",
+            a.creep_after_erection,
+            "",
+            3,
+            "aged_camber.creep_after_erection",
+        )?;
+        let tl = a.final_age_days - a.erection_age_days;
+        s.eq(
+            &format!(
+                "φℓ = (tf − te)^0.6 / (10 + (tf − te)^0.6) νu(te) = {}^0.6 / (10 + {}^0.6) × {}",
+                g(tl, 0),
+                g(tl, 0),
+                g(a.creep_ultimate_erection, 3)
+            ),
+            "ACI 209R-92 creep-time ratio (equation number from memory)",
+        )?;
+        let (dp, dsw) = (g(j.camber_prestress_release_in, 3), g(j.defl_self_release_in, 3));
+        let (pf, chi) = (g(phi_f, 4), g(crate::camber::AGING_CHI, 1));
+        let (k, eta) = (g(a.ec_ratio_erection, 4), g(a.loss_final, 4));
+        let (top, sdl, r, pl) = (
+            g(t.topping_in, 3),
+            g(t.sdl_in, 3),
+            g(a.inertia_ratio, 4),
+            g(a.creep_after_erection, 3),
+        );
+        let creep = if topped {
+            format!(
+                "φ′ = φe + (φf − φe) r = {} + ({} − {}) × {r} = {pf}; ",
+                g(a.creep_erection, 3),
+                g(a.creep_final, 3),
+                g(a.creep_erection, 3)
+            )
+        } else {
+            format!("φ′ = φf = {pf}; ")
+        };
+        s.eq(
+            &format!(
+                "{creep}Δf = Δp (1 + φ′) − η Δp (1 + χφ′) − Δsw (1 + φ′) − Δtop/k (1 + φℓ r) − Δsdl/k (1 + φℓ) = {dp} × (1 + {pf}) − {eta} × {dp} × (1 + {chi} × {pf}) − {dsw} × (1 + {pf}) − {top} / {k} × (1 + {pl} × {r}) − {sdl} / {k} × (1 + {pl}) in"
+            ),
+            "age-adjusted effective modulus (χ from memory, high); ACI 209R-92 creep; topping and finishes placed at erection (common practice, no source)",
+        )?;
+    }
     s.num("immediate live-load deflection", j.defl_live_in, "in", 3, "defl_live_in")?;
     if let Some(t) = ct.and_then(|t| t.live.as_ref()) {
         s.eq(
