@@ -151,10 +151,19 @@ pub fn localize(text: &str, sys: System) -> String {
             i += r.us.len() + 2;
             continue;
         }
-        let starts_number = b[i].is_ascii_digit() && !after_word(b, i);
+        // after an en dash a number starts a range's second end, not a word
+        let starts_number = b[i].is_ascii_digit() && (!after_word(b, i) || text[..i].ends_with('–'));
         if starts_number {
             if let Some((len_in, used)) = feet_inches(&text[i..]) {
                 out.push_str(&span(len_in, System::Si));
+                i += used;
+                continue;
+            }
+            // a range whose unit follows its second number only —
+            // "0.22 to 0.25 in", "6.1–37.9 ft", "+0.65 to +0.70 in": the
+            // first number takes the second's unit
+            if let Some((value, digits, used, r)) = range_start(&text[i..]) {
+                out.push_str(&significant(value * r.factor, digits.max(3), r.si_places));
                 i += used;
                 continue;
             }
@@ -247,6 +256,23 @@ fn number_unit(s: &str) -> Option<(f64, usize, usize, &'static Shown)> {
     }
     let r = best?;
     Some((v, digits, k + gap + r.us.len(), r))
+}
+
+/// The first number of a range whose unit is written after its second
+/// number ("0.22 to 0.25 in", "6.1–37.9 ft", "+0.65 to +0.70 in", "5 – 8
+/// ft"): (value, significant digits, bytes of the first number, the
+/// second's unit). None when the first number has its own unit.
+fn range_start(s: &str) -> Option<(f64, usize, usize, &'static Shown)> {
+    if number_unit(s).is_some() {
+        return None;
+    }
+    let (v, digits, k) = number(s)?;
+    let rest = &s[k..];
+    let sep = ["–", " – ", " to "].into_iter().find(|p| rest.starts_with(p))?;
+    let second = &rest[sep.len()..];
+    let second = second.strip_prefix(['+', '-']).unwrap_or(second);
+    let (_, _, _, r) = number_unit(second)?;
+    Some((v, digits, k, r))
 }
 
 fn boundary(rest: &str) -> bool {
@@ -390,6 +416,14 @@ mod tests {
             "camber -6.3 mm; 12.7 mm strand; 38.1 mm"
         );
         assert_eq!(localize("$9.40/ft²", System::Si), "$101/m²");
+        // ranges written with one unit after the second number: both converted
+        assert_eq!(
+            localize("camber at erection +0.65 to +0.70 in over 30–60 d", System::Si),
+            "camber at erection +16.5 to +17.8 mm over 30–60 d"
+        );
+        assert_eq!(localize("Av/s over 6.1–37.9 ft", System::Si), "Av/s over 1.86–11.6 m");
+        assert_eq!(localize("from -0.12 to 0.25 in", System::Si), "from -3.0 to 6.3 mm");
+        assert_eq!(localize("ratio 0.5 to 1.2 (none)", System::Si), "ratio 0.5 to 1.2 (none)");
         assert_eq!(
             localize("stresses (psi), moments (kip-ft)", System::Si),
             "stresses (MPa), moments (kN·m)"
