@@ -1398,7 +1398,7 @@ pub fn describe_openings_as(cand: &Candidate, case: &DesignCase, short: bool) ->
                 let total: usize = cand.pattern.rows.iter().map(|r| r.x.len()).sum();
                 let net = g.net_properties(&g.net(cut.across.0, cut.across.1), props, cut.across.0, cut.across.1);
                 parts.push(format!(
-                    "cuts unit {} over {:.1}–{:.1} in of its width: {} of {} strands, web width {:.2} → {:.2} in, area {:.0} → {:.0} in²",
+                    "cuts unit {} over {:.1}–{:.1} in of its width: {} of {} strands, web width {:.2} in → {:.2} in, area {:.0} in² → {:.0} in²",
                     j + 1,
                     cut.across.0,
                     cut.across.1,

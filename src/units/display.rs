@@ -260,7 +260,7 @@ fn number_unit(s: &str) -> Option<(f64, usize, usize, &'static Shown)> {
 
 /// The first number of a range whose unit is written after its second
 /// number ("0.22 to 0.25 in", "6.1–37.9 ft", "+0.65 to +0.70 in", "5 – 8
-/// ft"): (value, significant digits, bytes of the first number, the
+/// ft", "13.75 → 10.75 in"): (value, significant digits, bytes of the first number, the
 /// second's unit). None when the first number has its own unit.
 fn range_start(s: &str) -> Option<(f64, usize, usize, &'static Shown)> {
     if number_unit(s).is_some() {
@@ -268,7 +268,7 @@ fn range_start(s: &str) -> Option<(f64, usize, usize, &'static Shown)> {
     }
     let (v, digits, k) = number(s)?;
     let rest = &s[k..];
-    let sep = ["–", " – ", " to "].into_iter().find(|p| rest.starts_with(p))?;
+    let sep = ["–", " – ", " to ", " → "].into_iter().find(|p| rest.starts_with(p))?;
     let second = &rest[sep.len()..];
     let second = second.strip_prefix(['+', '-']).unwrap_or(second);
     let (_, _, _, r) = number_unit(second)?;
@@ -424,6 +424,7 @@ mod tests {
         assert_eq!(localize("Av/s over 6.1–37.9 ft", System::Si), "Av/s over 1.86–11.6 m");
         assert_eq!(localize("from -0.12 to 0.25 in", System::Si), "from -3.0 to 6.3 mm");
         assert_eq!(localize("ratio 0.5 to 1.2 (none)", System::Si), "ratio 0.5 to 1.2 (none)");
+        assert_eq!(localize("web width 13.75 → 10.75 in", System::Si), "web width 349.2 → 273.1 mm");
         assert_eq!(
             localize("stresses (psi), moments (kip-ft)", System::Si),
             "stresses (MPa), moments (kN·m)"
