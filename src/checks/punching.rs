@@ -24,7 +24,7 @@ use crate::case::{LoadKind, Placed};
 pub const INFO: CheckInfo = CheckInfo {
     id: "punching",
     title: "Punching of the flange under a point load",
-    clause: "ACI 318-19 22.6.4.1, 22.6.5.2 (with lambda_s); phi 21.2.1",
+    clause: "ACI 318-19 22.6.4.1, 22.6.5.2 (with λs); φ 21.2.1",
     unit: "kip",
     group: Group::Shear,
     reads: Reads::Demand,
