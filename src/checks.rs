@@ -865,7 +865,10 @@ fn stations(m: &Member, zones: &[(f64, f64)], full: &[f64]) -> Vec<f64> {
             (e1 - layer.debond, -1.0, layer.debond > 0.0),
         ];
         if let Some((o1, o2)) = layer.cut {
-            origins.extend([(o2, 1.0, false), (o1, -1.0, false)]);
+            // ℓd from an opening's edge as the strength caps take it: doubled
+            // for a debonded layer (§25.4.8.1(b)), whichever end its bond starts at
+            let debonded = layer.debond > 0.0;
+            origins.extend([(o2, 1.0, debonded), (o1, -1.0, debonded)]);
             xs.extend([0.5 * (e0 + layer.debond + o1), 0.5 * (o2 + e1 - layer.debond)]);
         }
         for (o, dir, debonded) in origins {
@@ -1002,8 +1005,14 @@ fn reach(m: &Member, full: &[f64]) -> Option<(f64, f64)> {
     for (i, layer) in m.layers.iter().enumerate() {
         if layer.cut.is_some() {
             let fps = full.get(i).copied().unwrap_or(m.strand.fpu.get());
+            // the strength caps' own ℓd (doubled for a debonded layer)
             r = r
-                .max(crate::prestress::development_length(m.history.fse_psi, fps, m.db(), false))
+                .max(crate::prestress::development_length(
+                    m.history.fse_psi,
+                    fps,
+                    m.db(),
+                    layer.debond > 0.0,
+                ))
                 .max(m.ltr_shear);
         }
     }

@@ -17,7 +17,9 @@
 //! Grade 60 top bars needed, As ≈ (|Mu|/φ − Mn)/(fy · 0.9 d), φ 0.9.
 //!
 //! Where the worst point lies: the hogging moment is a station's own (the
-//! supports are stations, both sides); between stations the ratio is
+//! supports are stations, both sides); the strength jumps where a draped
+//! strand crosses mid-depth (it leaves the tension side, and its reduced φ
+//! with it), so both sides of each crossing are points too; between them the ratio is
 //! bounded by the larger moment over the smaller strength at the segment's
 //! ends and searched by successive parabolas where the bound exceeds the
 //! worst station, as for the sagging moment.
@@ -261,6 +263,27 @@ pub fn worst(an: &Analysis) -> Option<AtPoint> {
             let mu = most(x);
             if x > lo && x < hi && mu > 0.0 {
                 pts.push(hog.at(x, mu));
+            }
+        }
+    }
+    // a draped strand crossing mid-depth leaves the tension side, and the
+    // reduced φ of its development with it ([`Hog::phi_dev`]): the strength
+    // jumps there, so the worst point can lie just on the near side
+    if let Some(hd) = m.hold_down {
+        let half = m.bare.depth_in / 2.0;
+        for layer in &m.layers {
+            let (ye, ym) = (layer.y_end, layer.y_mid);
+            if (ye - half) * (ym - half) >= 0.0 {
+                continue;
+            }
+            let d = (half - ye) / (ym - ye) * hd;
+            for c in [m.ends.0 + d, m.ends.1 - d] {
+                for x in [c - super::JUMP_IN, c + super::JUMP_IN] {
+                    let mu = most(x);
+                    if x > lo && x < hi && mu > 0.0 {
+                        pts.push(hog.at(x, mu));
+                    }
+                }
             }
         }
     }
