@@ -543,6 +543,37 @@ fn checks_that_do_not_vary_ignore_the_varied_load() {
     assert!(seen > 1000, "{seen}");
 }
 
+/// Where minimum strength fails because φ falls to 0.75 within a cut
+/// strand's transfer length (ACI 318-19 §21.2.3), the note says so: a
+/// short opening over one strand of six, 8 in plank, 30 ft.
+#[test]
+fn a_minimum_strength_failure_from_undeveloped_strand_says_why() {
+    use plankwise::case::Opening;
+    let cat = demo();
+    let s = cat.section("plank-8in-4ft").unwrap();
+    let cand = Candidate {
+        section: s,
+        pattern: s.patterns.iter().find(|p| p.id == "6x1/2").unwrap(),
+        mix: s.mix(&cat),
+    };
+    let mut k = DesignCase::new(Length::from_unit(30.0, "ft"));
+    k.live = AreaLoad::from_unit(50.0, "psf");
+    k.openings.push(Opening {
+        from: Length::from_unit(10.0, "ft"),
+        to: Length::from_unit(10.01, "ft"),
+        across: (Length::new(12.0), Length::new(24.0)),
+        header: None,
+    });
+    let ev = evaluate(&cand, &k);
+    let c = ev.check("min_strength").unwrap();
+    assert!(!c.pass, "{}", c.note);
+    assert!(c.note.contains("takes φ = 0.75: strand not fully developed there"), "{}", c.note);
+    // the same bay without the opening: met, and no such words
+    k.openings.clear();
+    let c = evaluate(&cand, &k).check("min_strength").unwrap().clone();
+    assert!(c.pass && !c.note.contains("not fully developed"), "{}", c.note);
+}
+
 // ---------------------------------------------------------------------------
 // Verdicts an engineer can sign: one case per defect, each built so that
 // the code before the fix fails it (checked against that build).
