@@ -1,6 +1,7 @@
 //! The member's own station set contains the worst point of every check:
 //! for random entries and cases, each check's ratio on the normal stations
-//! is the ratio on a dense set of 1200 evenly spaced stations to 0.5 %, or
+//! is the ratio on a dense set of 1200 evenly spaced stations (and both
+//! sides of each opening's edge, where the section jumps) to 0.5 %, or
 //! larger (ACI 318-19 checks are maxima over the member; a maximum missed
 //! between stations would call a failing member viable).
 
@@ -36,7 +37,17 @@ fn compare(cat: &Catalog, entry: usize, k: &DesignCase) -> Result<(), String> {
     let normal = evaluate(&cand, k);
     // the whole member: from the tip of a left overhang to the tip of a right one
     let (lo, hi) = (-k.overhang.0.get(), k.span.get() + k.overhang.1.get());
-    let xs: Vec<f64> = (0..=DENSE).map(|i| lo + (hi - lo) * i as f64 / DENSE as f64).collect();
+    let mut xs: Vec<f64> = (0..=DENSE).map(|i| lo + (hi - lo) * i as f64 / DENSE as f64).collect();
+    // an opening's edges are jumps of the section no grid lands on: with
+    // both sides of each in the dense set too, a quantity read where a
+    // maximum lies (the cracked deflection takes its stresses where the
+    // bottom tension is greatest) compares like with like
+    for o in &k.openings {
+        for e in [o.from.get(), o.to.get()] {
+            xs.extend([e - plankwise::checks::JUMP_IN, e, e + plankwise::checks::JUMP_IN]);
+        }
+    }
+    xs.sort_by(f64::total_cmp);
     let dense = evaluate_on_stations(&cand, k, &xs);
     for d in &dense.checks {
         // the minimum-strength check compares the least Mcr/Mu over the
