@@ -1489,7 +1489,7 @@ pub fn merge(mut evs: Vec<Evaluation>) -> Evaluation {
         for c in ev.checks {
             match out.checks.iter_mut().find(|o| o.info.id == c.info.id) {
                 Some(o) => {
-                    let worse = (!c.pass && o.pass) || (c.pass == o.pass && c.ratio > o.ratio + 1e-12);
+                    let worse = (!c.pass && o.pass) || (c.pass == o.pass && (c.ratio > o.ratio + 1e-12 || beyond_cap(&c, o)));
                     if worse {
                         *o = c;
                     }
@@ -1507,6 +1507,24 @@ pub fn merge(mut evs: Vec<Evaluation>) -> Evaluation {
     out.viable = out.checks.iter().all(|c| c.pass);
     out.governing = governing_of(&out.checks);
     out
+}
+
+/// Whether `c` is worse than `o` where both ratios sit at [`RATIO_NONE`]
+/// (no capacity, or the ratio past what is printed): the higher true
+/// ratio, then the larger demand — with no hogging strength anywhere, the
+/// arrangement with the larger hogging moment is the one to report.
+fn beyond_cap(c: &CheckResult, o: &CheckResult) -> bool {
+    if c.ratio < RATIO_NONE || o.ratio < RATIO_NONE {
+        return false;
+    }
+    let raw = |r: &CheckResult| {
+        if r.capacity != 0.0 {
+            (r.demand / r.capacity).abs()
+        } else {
+            f64::INFINITY
+        }
+    };
+    raw(c).total_cmp(&raw(o)).then(c.demand.abs().total_cmp(&o.demand.abs())).is_gt()
 }
 
 /// A brief evaluation as kept: no stations, no notes, no spare capacity.

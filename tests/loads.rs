@@ -230,6 +230,38 @@ fn an_opening_cuts_strands_which_bond_again_from_its_edges() {
     assert_relative_eq!(s_cut.service.bottom_total_psi, s_far.service.bottom_total_psi, max_relative = 1e-9);
 }
 
+/// An opening cutting every strand of a unit it cuts only partly leaves
+/// that unit no flexural strength over the opening: every point there is
+/// as bad, and the one reported carries the largest moment — midspan,
+/// 1.2D + 1.6L times ℓ²/8 (statics). A strain-compatibility answer a
+/// rounding below zero once made the ratio negative there, and the check
+/// reported the opening's edge with a smaller moment.
+#[test]
+fn an_opening_cutting_every_strand_leaves_no_strength() {
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let mut k = case(24.0, 20.0, 50.0);
+    k.openings.push(Opening {
+        from: Length::from_unit(10.0, "ft"),
+        to: Length::from_unit(13.0, "ft"),
+        across: (Length::new(1.0), Length::new(47.0)),
+        header: None,
+    });
+    let ev = evaluate(&c, &k);
+    assert!(ev.openings[0].contains("6 of 6 strands"), "{}", ev.openings[0]);
+    let f = ev.check("flexure").unwrap();
+    let wd = c.section.props.area_in2 * c.mix.unit_weight.get() + AreaLoad::from_unit(20.0, "psf").get() * 48.0;
+    let wl = AreaLoad::from_unit(50.0, "psf").get() * 48.0;
+    let l = 288.0;
+    assert_relative_eq!(f.demand * 12_000.0, (1.2 * wd + 1.6 * wl) * l * l / 8.0, max_relative = 1e-9);
+    assert_eq!(f.capacity, 0.0);
+    assert!(!f.pass);
+    assert_relative_eq!(f.station_ft.unwrap(), 12.0, epsilon = 1e-9);
+    assert!(f.note.contains("no flexural strength"), "{}", f.note);
+    let ms = ev.check("min_strength").unwrap();
+    assert!(!ms.pass && ms.note.contains("unbounded (φMn = 0)"), "{}", ms.note);
+}
+
 /// Units cut through hang on headers; each header brings half of each
 /// piece (the piece spans from its support to the header) and half the
 /// header's own load to the unit on either side (common practice, no source).
@@ -311,6 +343,18 @@ fn an_overhang_hogs_and_its_tip_deflects() {
     // no strand or bar in the top half: the top is unreinforced where it hogs
     let hog = ev.check("flexure_hogging").unwrap();
     assert!(!hog.pass && hog.note.contains("unreinforced"), "{}", hog.note);
+    // with no strength anywhere every point is as bad: the one reported is
+    // the largest hogging moment, over the support with the variable load
+    // on the overhang, 1.2D + 1.6L by the cantilever's statics (it was once
+    // the last station, near the tip, from the arrangement without
+    // overhang load); the top bars it asks for carry that moment,
+    // As = (Mu/0.9)/(fy · 0.9 d), d = 8 − 2 in
+    let mu = (1.2 * wd + 1.6 * wl) * a * a / 2.0;
+    assert_relative_eq!(hog.demand * 12_000.0, mu, max_relative = 1e-9);
+    assert_relative_eq!(hog.station_ft.unwrap(), 20.0, epsilon = 1e-6);
+    let bars = mu / 0.9 / (60_000.0 * 0.9 * 6.0);
+    assert!(hog.note.contains(&format!("about {bars:.2} in²")), "{bars:.2}: {}", hog.note);
+    assert!(hog.note.contains("variable loads on the overhangs only"), "{}", hog.note);
     // top bars give it strength
     k.top_bars = Area::from_unit(1.0, "in2");
     let hog = evaluate(&c, &k).check("flexure_hogging").unwrap().clone();

@@ -309,7 +309,8 @@ pub fn at<'m>(m: &'m Member, x: f64, pre: Effective, memo: &mut Memo<'m>) -> AtS
     AtStation {
         mn_lbin: f.mn,
         phi,
-        phi_mn_lbin: phi * f.mn,
+        // no strand left (an opening cutting them all): nil, not a rounding below it
+        phi_mn_lbin: (phi * f.mn).max(0.0),
         eps_t: f.eps_t,
         c_in: f.c,
         developed,
@@ -356,7 +357,13 @@ pub fn worst(an: &Analysis) -> Option<Worst> {
 fn search(an: &Analysis) -> Option<Worst> {
     let ratio = |s: &super::Station| s.mu_lbin / s.flexure.phi_mn_lbin;
     let pts: Vec<&super::Station> = an.stations.iter().filter(|s| s.mu_lbin > 0.0).collect();
-    let s = pts.iter().copied().max_by(|a, b| ratio(a).total_cmp(&ratio(b)))?;
+    // where no strength is left (an opening cutting every strand) the ratio
+    // is infinite at several stations: the largest moment among them is
+    // the worst, and the one reported
+    let s = pts
+        .iter()
+        .copied()
+        .max_by(|a, b| ratio(a).total_cmp(&ratio(b)).then(a.mu_lbin.total_cmp(&b.mu_lbin)))?;
     let mut best = Worst {
         x_in: s.x_in,
         mu_lbin: s.mu_lbin,
@@ -408,6 +415,13 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     let w = worst(an)?;
     let (mn_aci, fps_aci) = if an.brief { (0.0, 0.0) } else { approximate_mn(&an.member) };
     let f = &w.at;
+    if w.phi_mn_lbin <= 0.0 {
+        let note = an.note(format_args!(
+            "{}; no strand or bar carries stress here (each is cut by an opening or not yet bonded): no flexural strength",
+            w.combo
+        ));
+        return Some(CheckResult::new(&INFO, kipft(w.mu_lbin), 0.0, Some(w.x_in), note));
+    }
     let note = an.note(format_args!(
         "{}; φ = {:.2}, εt = {:.4}{}; c = {:.2} in; Mn by ACI Eq. 20.3.2.3.1 at midspan {:.1} kip-ft (fps {:.1} ksi)",
         w.combo,

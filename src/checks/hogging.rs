@@ -232,6 +232,21 @@ fn ratio(p: &AtPoint) -> f64 {
     }
 }
 
+/// Which of two points is worse: the higher Mu/φMn uncapped (a point with
+/// no strength is infinitely bad), then the larger moment.
+fn order(a: &AtPoint, b: &AtPoint) -> std::cmp::Ordering {
+    let raw = |p: &AtPoint| {
+        if p.phi_mn_lbin > 0.0 {
+            p.mu_lbin / p.phi_mn_lbin
+        } else if p.mu_lbin > 0.0 {
+            f64::INFINITY
+        } else {
+            0.0
+        }
+    };
+    raw(a).total_cmp(&raw(b)).then(a.mu_lbin.total_cmp(&b.mu_lbin))
+}
+
 /// The worst point where the moment hogs, if it hogs anywhere.
 pub fn worst(an: &Analysis) -> Option<AtPoint> {
     let m = &an.member;
@@ -288,16 +303,20 @@ pub fn worst(an: &Analysis) -> Option<AtPoint> {
         }
     }
     pts.sort_by(|a, b| a.x_in.total_cmp(&b.x_in));
-    let mut best = *pts.iter().max_by(|a, b| ratio(a).total_cmp(&ratio(b)))?;
+    // with no hogging strength at all the ratio is the same everywhere: the
+    // largest moment is then the worst, the one reported and the one the
+    // estimate of top bars must carry
+    let mut best = *pts.iter().max_by(|a, b| order(a, b))?;
     for w in pts.windows(2) {
         let (a, b) = (w[0], w[1]);
         let cap = a.phi_mn_lbin.min(b.phi_mn_lbin);
         if b.x_in - a.x_in < 1e-6 || cap <= 0.0 || a.mu_lbin.max(b.mu_lbin) / cap <= ratio(&best) * (1.0 + 1e-12) {
             continue;
         }
-        let (x, r) = super::refine_max(|x| ratio(&hog.at(x, most(x))), a.x_in, ratio(&a), b.x_in, ratio(&b));
-        if r > ratio(&best) {
-            best = hog.at(x, most(x));
+        let (x, _) = super::refine_max(|x| ratio(&hog.at(x, most(x))), a.x_in, ratio(&a), b.x_in, ratio(&b));
+        let p = hog.at(x, most(x));
+        if order(&p, &best).is_gt() {
+            best = p;
         }
     }
     Some(best)

@@ -117,7 +117,12 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     }
     r.governs = false;
     // where strand is not yet developed the φ of Table 21.2.3 is what falls short
-    let phi_note = if fl.at.developed {
+    let phi_note = if fl.phi_mn_lbin <= 0.0 {
+        format!(
+            "; no strand or bar carries stress at {:.2} ft (each is cut by an opening or not yet bonded): no flexural strength there",
+            fl.x_in / 12.0
+        )
+    } else if fl.at.developed {
         String::new()
     } else {
         format!(
@@ -127,11 +132,11 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         )
     };
     r.note = an.note(format_args!(
-        "1.2 Mcr = {:.1} kip-ft > φMn = {:.1} kip-ft (cracking first at {:.2} ft), and not waived by {clause}.2: 2Mu/φMn = {:.2}, 2Vu/φVn = {:.2}{phi_note}",
+        "1.2 Mcr = {:.1} kip-ft > φMn = {:.1} kip-ft (cracking first at {:.2} ft), and not waived by {clause}.2: 2Mu/φMn = {}, 2Vu/φVn = {:.2}{phi_note}",
         kipft(need),
         kipft(fl.phi_mn_lbin),
         cr.x_in / 12.0,
-        m_ratio,
+        if m_ratio.is_finite() { format!("{m_ratio:.2}") } else { "unbounded (φMn = 0)".to_string() },
         v_ratio
     ));
     Some(r)
