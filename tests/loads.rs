@@ -262,6 +262,36 @@ fn an_opening_cutting_every_strand_leaves_no_strength() {
     assert!(!ms.pass && ms.note.contains("unbounded (φMn = 0)"), "{}", ms.note);
 }
 
+/// An opening that takes every web of a unit near its support leaves no
+/// shear strength there: the shear reported is the largest, at the
+/// critical section h/2 past the support face, under 1.2D + 1.6L, by
+/// statics wu (ℓ/2 − x) (it was once the last station of the stretch,
+/// under whichever combination came last).
+#[test]
+fn an_opening_taking_every_web_leaves_no_shear_strength() {
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let mut k = case(24.0, 20.0, 50.0);
+    k.openings.push(Opening {
+        from: Length::from_unit(0.5, "ft"),
+        to: Length::from_unit(3.0, "ft"),
+        across: (Length::new(0.1), Length::new(47.9)),
+        header: None,
+    });
+    let ev = evaluate(&c, &k);
+    let v = ev.check("shear").unwrap();
+    let wd = c.section.props.area_in2 * c.mix.unit_weight.get() + AreaLoad::from_unit(20.0, "psf").get() * 48.0;
+    let wl = AreaLoad::from_unit(50.0, "psf").get() * 48.0;
+    // bearing 4 in: the face 2 in from the bearing centre, h/2 = 4 in beyond
+    let x = 2.0 + 4.0;
+    assert_relative_eq!(v.demand * 1000.0, (1.2 * wd + 1.6 * wl) * (144.0 - x), max_relative = 1e-9);
+    assert_eq!(v.capacity, 0.0);
+    assert_relative_eq!(v.station_ft.unwrap(), x / 12.0, epsilon = 1e-9);
+    assert!(v.note.contains("no shear strength") && v.note.contains("1.2D+1.6L"), "{}", v.note);
+    let ms = ev.check("min_strength").unwrap();
+    assert!(ms.note.contains("2Vu/φVn = unbounded (φVn = 0)"), "{}", ms.note);
+}
+
 /// Units cut through hang on headers; each header brings half of each
 /// piece (the piece spans from its support to the header) and half the
 /// header's own load to the unit on either side (common practice, no source).

@@ -132,12 +132,12 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         )
     };
     r.note = an.note(format_args!(
-        "1.2 Mcr = {:.1} kip-ft > φMn = {:.1} kip-ft (cracking first at {:.2} ft), and not waived by {clause}.2: 2Mu/φMn = {}, 2Vu/φVn = {:.2}{phi_note}",
+        "1.2 Mcr = {:.1} kip-ft > φMn = {:.1} kip-ft (cracking first at {:.2} ft), and not waived by {clause}.2: 2Mu/φMn = {}, 2Vu/φVn = {}{phi_note}",
         kipft(need),
         kipft(fl.phi_mn_lbin),
         cr.x_in / 12.0,
         if m_ratio.is_finite() { format!("{m_ratio:.2}") } else { "unbounded (φMn = 0)".to_string() },
-        v_ratio
+        if v.is_some_and(|v| v.ratio >= super::RATIO_NONE) { "unbounded (φVn = 0)".to_string() } else { format!("{v_ratio:.2}") }
     ));
     Some(r)
 }

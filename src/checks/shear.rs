@@ -325,10 +325,12 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
         let cap = capacity(c);
         if cap > 0.0 { demand(c) / cap } else { super::RATIO_NONE }
     };
+    // with no strength at all (webs cut away) every point is as bad: the
+    // largest shear is then the worst, and the one reported
     let top = |a: &AtStation| -> (usize, f64) {
         (0..3)
             .map(|i| (i, ratio(&a.combos[i])))
-            .max_by(|a, b| a.1.total_cmp(&b.1))
+            .max_by(|x, y| x.1.total_cmp(&y.1).then(a.combos[x.0].vu_lbf.total_cmp(&a.combos[y.0].vu_lbf)))
             .expect("three")
     };
     let pts: Vec<(usize, f64, AtStation)> = an
@@ -347,7 +349,7 @@ pub fn worst(an: &Analysis, demand: fn(&Combo) -> f64, capacity: fn(&Combo) -> f
                 ratio: r,
             }
         })
-        .max_by(|a, b| a.ratio.total_cmp(&b.ratio))?;
+        .max_by(|a, b| a.ratio.total_cmp(&b.ratio).then(a.combo.vu_lbf.total_cmp(&b.combo.vu_lbf)))?;
     // a point is searched further only when a first estimate comes within
     // this fraction of the worst point found
     const SCREEN: f64 = 2e-3;
@@ -473,12 +475,14 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
     let w = worst_vn(an)?;
     let v = w.combo;
     let m = &an.member;
-    let governs = if v.vci_lbf <= v.vcw_lbf {
-        "Vci (flexure-shear)"
+    let governs = if v.phi_vn_lbf <= 0.0 {
+        "no web is left to carry shear here (an opening cuts them all): no shear strength;"
+    } else if v.vci_lbf <= v.vcw_lbf {
+        "Vci (flexure-shear) governs;"
     } else {
-        "Vcw (web-shear)"
+        "Vcw (web-shear) governs;"
     };
-    let mut note = an.note(format_args!("{governs} governs; {}", v.name()));
+    let mut note = an.note(format_args!("{governs} {}", v.name()));
     if stemmed(m) && !an.brief {
         let n = m.section.geometry.stems.len().max(1) as f64;
         let need: Vec<(f64, f64)> = an
