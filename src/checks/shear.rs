@@ -295,7 +295,11 @@ pub fn at(m: &Member, x: f64, pre: Effective, eff: &Effects) -> AtStation {
     });
     let gov = combos
         .iter()
-        .max_by(|a, b| (a.vu_lbf * b.phi_vn_lbf).total_cmp(&(b.vu_lbf * a.phi_vn_lbf)))
+        .max_by(|a, b| {
+            (a.vu_lbf * b.phi_vn_lbf)
+                .total_cmp(&(b.vu_lbf * a.phi_vn_lbf))
+                .then(a.vu_lbf.total_cmp(&b.vu_lbf))
+        })
         .map_or(0, |c| c.combo);
     AtStation { combos, gov }
 }
