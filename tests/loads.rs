@@ -389,6 +389,8 @@ fn an_overhang_hogs_and_its_tip_deflects() {
     k.top_bars = Area::from_unit(1.0, "in2");
     let hog = evaluate(&c, &k).check("flexure_hogging").unwrap().clone();
     assert!(hog.capacity > 0.0);
+    // what is in tension, named as it is: bars, no strand in the top half
+    assert!(hog.note.contains("the top bars in tension") && !hog.note.contains("top strands"), "{}", hog.note);
     // by hand: 1 in² at fy 60 ksi, d = 8 − 2 = 6 in, the block in the solid
     // strip under the cores (48 in wide, 0.85 × 5000 psi); the strands at
     // 1.75 in lie just above the block's centroid and add their couple.

@@ -348,11 +348,19 @@ pub fn run(an: &Analysis) -> Option<CheckResult> {
         if w.phi == 0.0 {
             format!("no strand or bar in the top half: the top is unreinforced where the moment hogs{short}")
         } else {
-            format!(
-                "the soffit in compression, the top strands{} in tension; strand stress limited by development from the member end (§25.4.8.3); φ = {:.2}{bars}{short}",
-                if m.pattern.bars.is_empty() { "" } else { " and bars" },
-                w.phi
-            )
+            let half = m.bare.depth_in / 2.0;
+            let top_strand = m.layers.iter().any(|l| l.y_mid.min(l.y_end) > half);
+            let tension = match (top_strand, m.pattern.bars.is_empty()) {
+                (true, true) => "the top strands in tension; strand stress limited by development from the member end (§25.4.8.3)",
+                (true, false) => {
+                    "the top strands and the pattern's bars in tension; strand stress limited by development from the member end (§25.4.8.3)"
+                }
+                (false, true) => "the top bars in tension, the strands (all in the bottom half) by strain compatibility",
+                (false, false) => {
+                    "the pattern's bars and the top bars in tension, the strands (all in the bottom half) by strain compatibility"
+                }
+            };
+            format!("the soffit in compression, {tension}; φ = {:.2}{bars}{short}", w.phi)
         }
     };
     Some(CheckResult::new(&INFO, kipft(w.mu_lbin), kipft(w.phi_mn_lbin), Some(w.x_in), note))
