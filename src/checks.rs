@@ -1491,6 +1491,14 @@ pub fn merge(mut evs: Vec<Evaluation>) -> Evaluation {
                 Some(o) => {
                     let worse = (!c.pass && o.pass) || (c.pass == o.pass && (c.ratio > o.ratio + 1e-12 || beyond_cap(&c, o)));
                     if worse {
+                        // the terms shown for a check's worst point come
+                        // with it from the unit or arrangement it is found in
+                        if c.info.id == shear::INFO.id {
+                            out.shear_at = ev.shear_at;
+                        }
+                        if c.info.id == release::COMPRESSION.id {
+                            out.release_at = ev.release_at;
+                        }
                         *o = c;
                     }
                 }

@@ -260,6 +260,14 @@ fn an_opening_cutting_every_strand_leaves_no_strength() {
     assert!(f.note.contains("no flexural strength"), "{}", f.note);
     let ms = ev.check("min_strength").unwrap();
     assert!(!ms.pass && ms.note.contains("unbounded (φMn = 0)"), "{}", ms.note);
+    // the shear check's worst point lies in the cut unit, beside the
+    // opening where its webs are cut; the terms the calculation sheet shows
+    // for it come from there too, not from the loaded unit's own worst point
+    let v = ev.check("shear").unwrap();
+    let (x, t, c, _) = ev.shear_at.expect("terms at the worst shear point");
+    assert_relative_eq!(x / 12.0, v.station_ft.unwrap(), epsilon = 1e-9);
+    assert_relative_eq!(c.vu_lbf / 1000.0, v.demand, max_relative = 1e-12);
+    assert!(t.bw_in < 1.0, "bw {} is the webs left beside the opening", t.bw_in);
 }
 
 /// An opening that takes every web of a unit near its support leaves no
@@ -390,7 +398,11 @@ fn an_overhang_hogs_and_its_tip_deflects() {
     let hog = evaluate(&c, &k).check("flexure_hogging").unwrap().clone();
     assert!(hog.capacity > 0.0);
     // what is in tension, named as it is: bars, no strand in the top half
-    assert!(hog.note.contains("the top bars in tension") && !hog.note.contains("top strands"), "{}", hog.note);
+    assert!(
+        hog.note.contains("the top bars in tension") && !hog.note.contains("top strands"),
+        "{}",
+        hog.note
+    );
     // by hand: 1 in² at fy 60 ksi, d = 8 − 2 = 6 in, the block in the solid
     // strip under the cores (48 in wide, 0.85 × 5000 psi); the strands at
     // 1.75 in lie just above the block's centroid and add their couple.
