@@ -28,6 +28,7 @@ pub mod shear;
 pub mod spacing;
 pub mod tip;
 pub mod top_tension;
+pub mod uplift;
 pub mod vibration;
 pub mod web_steel;
 
@@ -353,6 +354,10 @@ pub const REGISTRY: &[Check] = &[
     Check {
         info: bearing_stress::INFO,
         run: bearing_stress::run,
+    },
+    Check {
+        info: uplift::INFO,
+        run: uplift::run,
     },
     Check {
         info: pad_pressure::INFO,

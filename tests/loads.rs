@@ -417,6 +417,47 @@ fn an_overhang_hogs_and_its_tip_deflects() {
     );
 }
 
+/// A long overhang lifts the far support: by statics a load w over the
+/// overhang a pulls the left support up by w a²/(2ℓ), and the dead load
+/// on the span presses it down by w ℓ/2. Lifting at 1.2D + 1.6L (the
+/// variable load on the overhang alone), holding at 0.9D (common practice,
+/// no source): 1.91 kip against 1.33 kip here, so the end rises.
+#[test]
+fn a_long_overhang_lifts_the_far_support() {
+    let cat = demo();
+    let c = cand(&cat, "plank-8in-4ft", "6x1/2");
+    let mut k = case(12.0, 0.0, 100.0);
+    k.overhang.1 = Length::from_unit(7.0, "ft");
+    k.top_bars = Area::from_unit(1.0, "in2");
+    let ev = evaluate(&c, &k);
+    let u = ev.check("uplift").expect("an overhang: the check runs");
+    let wd = c.section.props.area_in2 * c.mix.unit_weight.get();
+    let wl = AreaLoad::from_unit(100.0, "psf").get() * 48.0;
+    let (l, a) = (144.0, 84.0);
+    assert_relative_eq!(u.demand * 1000.0, (1.2 * wd + 1.6 * wl) * a * a / (2.0 * l), max_relative = 1e-9);
+    assert_relative_eq!(u.capacity * 1000.0, 0.9 * wd * l / 2.0, max_relative = 1e-9);
+    assert!(!u.pass && !ev.viable);
+    assert_eq!(u.station_ft, Some(0.0));
+    assert!(u.note.contains("left support") && u.note.contains("overhangs only"), "{}", u.note);
+    // the same overhang on a span twice as long stays down
+    let mut k2 = case(24.0, 0.0, 100.0);
+    k2.overhang.1 = Length::from_unit(7.0, "ft");
+    let u2 = evaluate(&c, &k2).check("uplift").unwrap().clone();
+    assert!(u2.pass && u2.ratio < 0.5, "{}", u2.ratio);
+    // a second overhang at the left holds the left support down, at 0.9
+    k.overhang.0 = Length::from_unit(3.0, "ft");
+    let u3 = evaluate(&c, &k).check("uplift").unwrap().clone();
+    let b = 36.0;
+    let hold_left = 0.9 * wd * (l + b) * (l + b) / (2.0 * l);
+    let lift_left = (1.2 * wd + 1.6 * wl) * a * a / (2.0 * l);
+    let hold_right = 0.9 * wd * (l + a) * (l + a) / (2.0 * l);
+    let lift_right = (1.2 * wd + 1.6 * wl) * b * b / (2.0 * l);
+    let want = (lift_left / hold_left).max(lift_right / hold_right);
+    assert_relative_eq!(u3.ratio, want, max_relative = 1e-9);
+    // no overhang, no check
+    assert!(evaluate(&c, &case(12.0, 0.0, 100.0)).check("uplift").is_none());
+}
+
 /// "Lr or S" is one or the other, each with its own placed loads: a snow
 /// drift along the span is checked with snow, not with roof live load.
 #[test]
