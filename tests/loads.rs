@@ -458,6 +458,34 @@ fn a_long_overhang_lifts_the_far_support() {
     assert!(evaluate(&c, &case(12.0, 0.0, 100.0)).check("uplift").is_none());
 }
 
+/// The envelope inverts the uplift check like any other: a double tee on a
+/// 14 ft span with an 8 ft overhang lifts its far end at the live load q
+/// (psf, on the overhang, 10 ft wide) where (1.2 wd + 1.6 q b) a²/(2ℓ) =
+/// 0.9 wd ℓ/2 — solved by hand below, 54.29 psf.
+#[test]
+fn the_envelope_stops_where_the_far_end_would_lift() {
+    let cat = demo();
+    let s = cat.section("tee-24in-10ft").unwrap();
+    let p = s.patterns.iter().find(|p| p.id == "8-straight").unwrap();
+    let entry = plankwise::select::Entry {
+        section: s,
+        pattern: p,
+        mix: s.mix(&cat),
+        topping: None,
+    };
+    let mut bay = plankwise::bay::Bay::new("cantilever", Length::from_unit(14.0, "ft"));
+    bay.case.overhang.1 = Length::from_unit(8.0, "ft");
+    bay.case.top_bars = Area::from_unit(3.0, "in2");
+    let env = plankwise::select::envelope::bay_envelope(&cat, &bay, &entry, &[14.0]);
+    assert_eq!(env[0].governing, "uplift");
+    let wd = s.props.area_in2 * entry.mix.unit_weight.get();
+    let (l, a, b) = (168.0, 96.0, s.props.width_in);
+    let q = (0.9 * wd * l / 2.0 * 2.0 * l / (a * a) - 1.2 * wd) / (1.6 * b);
+    let want = q / AreaLoad::from_unit(1.0, "psf").get();
+    assert_relative_eq!(env[0].live_psf.unwrap(), want, max_relative = 1e-5);
+    assert!((want - 54.29).abs() < 0.01, "{want}");
+}
+
 /// "Lr or S" is one or the other, each with its own placed loads: a snow
 /// drift along the span is checked with snow, not with roof live load.
 #[test]
